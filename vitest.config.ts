@@ -4,7 +4,11 @@ import { defineConfig } from "vitest/config";
 // `e2e` builds the app once, serves it on a free port with its own database, and drives it over
 // HTTP (tests/api) and through Debian's Chromium (tests/browser).
 export default defineConfig({
-  resolve: { tsconfigPaths: true },
+  resolve: {
+    tsconfigPaths: true,
+    // "server-only" throws outside React's server build; in tests the server modules run in Node.
+    alias: { "server-only": new URL("./tests/support/server-only-stub.ts", import.meta.url).pathname },
+  },
   test: {
     projects: [
       {

@@ -1,0 +1,24 @@
+import { setUserRole } from "@/db/queries/users";
+import { MAKER_ONLY } from "@/lib/auth/access";
+import { requireApiViewer } from "@/lib/auth/guard";
+import { errorResponse, issuesFromZod } from "@/lib/errors";
+import { readJsonBody } from "@/lib/http/read-json-body";
+import { roleChangeSchema, userIdSchema } from "./schema";
+
+/** PUT /api/users/:id/role — the maker changes one account's role. */
+export async function PUT(request: Request, ctx: RouteContext<"/api/users/[id]/role">) {
+  const access = await requireApiViewer(MAKER_ONLY);
+  if (!access.ok) return access.response;
+  const id = userIdSchema.safeParse((await ctx.params).id);
+  if (!id.success) return errorResponse({ code: "bad_request", message: "Bad account id." });
+  const body = await readJsonBody(request);
+  if (!body.ok) return errorResponse(body.error);
+  const parsed = roleChangeSchema.safeParse(body.data);
+  if (!parsed.success) return errorResponse({ code: "bad_request", message: "Invalid role change.", issues: issuesFromZod(parsed.error) });
+  if (id.data === access.viewer.id && parsed.data.role !== "maker") {
+    return errorResponse({ code: "bad_request", message: "You cannot take the maker role from your own account." });
+  }
+  const found = await setUserRole({ userId: id.data, role: parsed.data.role, actorId: access.viewer.id });
+  if (!found) return errorResponse({ code: "not_found", message: "No such account." });
+  return Response.json({ id: id.data, role: parsed.data.role });
+}

@@ -1,0 +1,25 @@
+"use client";
+import Link from "next/link";
+import { usePathname } from "next/navigation";
+import type { NavItem } from "./nav-items";
+
+export function AppNav({ items }: { items: NavItem[] }) {
+  const pathname = usePathname();
+  return (
+    <nav aria-label="Main" data-testid="main-nav" className="flex gap-1">
+      {items.map((item) => {
+        const current = pathname === item.href || pathname.startsWith(`${item.href}/`);
+        return (
+          <Link
+            key={item.href}
+            href={item.href}
+            aria-current={current ? "page" : undefined}
+            className={`rounded px-3 py-1.5 text-sm ${current ? "bg-accent text-white" : "hover:bg-white"}`}
+          >
+            {item.label}
+          </Link>
+        );
+      })}
+    </nav>
+  );
+}

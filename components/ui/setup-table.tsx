@@ -1,0 +1,44 @@
+import type { SetupListItem } from "@/db/queries/setups";
+import { FlagBadge } from "./flag-badge";
+
+const STATUS_LABEL: Record<SetupListItem["status"], string> = {
+  draft: "draft",
+  submitted: "submitted",
+  changes_requested: "changes requested",
+  approved: "approved",
+};
+
+interface SetupTableProps {
+  rows: SetupListItem[];
+  showOwner?: boolean;
+  testId?: string;
+}
+
+export function SetupTable({ rows, showOwner = false, testId = "setup-table" }: SetupTableProps) {
+  return (
+    <table className="panel w-full border-separate border-spacing-0 text-sm" data-testid={testId}>
+      <thead className="text-left text-muted">
+        <tr>
+          <th className="px-3 py-2 font-medium">Setup</th>
+          {showOwner && <th className="px-3 py-2 font-medium">Customer</th>}
+          <th className="px-3 py-2 font-medium">Envelope</th>
+          <th className="px-3 py-2 font-medium">Status</th>
+          <th className="px-3 py-2 font-medium">Worst flag</th>
+          <th className="px-3 py-2 font-medium">Last change</th>
+        </tr>
+      </thead>
+      <tbody>
+        {rows.map((row) => (
+          <tr key={row.id} className="border-t border-hairline" data-testid="setup-row">
+            <td className="border-t border-hairline px-3 py-2 font-medium">{row.name}</td>
+            {showOwner && <td className="border-t border-hairline px-3 py-2">{row.ownerName}</td>}
+            <td className="border-t border-hairline px-3 py-2">{row.modelName}</td>
+            <td className="border-t border-hairline px-3 py-2">{STATUS_LABEL[row.status]}</td>
+            <td className="border-t border-hairline px-3 py-2">{row.worstFlag ? <FlagBadge level={row.worstFlag} /> : "not computed"}</td>
+            <td className="figure border-t border-hairline px-3 py-2">{row.updatedAt.toISOString().slice(0, 10)}</td>
+          </tr>
+        ))}
+      </tbody>
+    </table>
+  );
+}

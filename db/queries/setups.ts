@@ -1,0 +1,49 @@
+import "server-only";
+import { and, desc, eq, inArray } from "drizzle-orm";
+import { getDb } from "@/db";
+import { envelopeModels, setups, user, type SetupStatus } from "@/db/schema";
+
+export interface SetupListItem {
+  id: string;
+  name: string;
+  status: SetupStatus;
+  worstFlag: "ok" | "caution" | "stop" | null;
+  modelName: string;
+  ownerName: string;
+  updatedAt: Date;
+  submittedAt: Date | null;
+}
+
+const listColumns = {
+  id: setups.id,
+  name: setups.name,
+  status: setups.status,
+  worstFlag: setups.worstFlag,
+  modelName: envelopeModels.name,
+  ownerName: user.name,
+  updatedAt: setups.updatedAt,
+  submittedAt: setups.submittedAt,
+};
+
+export async function listSetupsForOwner({ ownerId }: { ownerId: string }): Promise<SetupListItem[]> {
+  return getDb()
+    .select(listColumns)
+    .from(setups)
+    .innerJoin(envelopeModels, eq(setups.modelId, envelopeModels.id))
+    .innerJoin(user, eq(setups.ownerId, user.id))
+    .where(eq(setups.ownerId, ownerId))
+    .orderBy(desc(setups.updatedAt));
+}
+
+/** The review desk's queue: what customers have submitted, oldest first, and what was sent back. */
+export async function listReviewQueue({
+  statuses = ["submitted"],
+}: { statuses?: SetupStatus[] } = {}): Promise<SetupListItem[]> {
+  return getDb()
+    .select(listColumns)
+    .from(setups)
+    .innerJoin(envelopeModels, eq(setups.modelId, envelopeModels.id))
+    .innerJoin(user, eq(setups.ownerId, user.id))
+    .where(and(inArray(setups.status, statuses)))
+    .orderBy(setups.submittedAt);
+}

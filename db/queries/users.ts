@@ -1,0 +1,42 @@
+import "server-only";
+import { asc, eq } from "drizzle-orm";
+import { randomUUID } from "node:crypto";
+import { getDb } from "@/db";
+import { auditLog, user, type Role, type UnitSystem } from "@/db/schema";
+
+export interface UserListItem {
+  id: string;
+  name: string;
+  email: string;
+  role: Role;
+  createdAt: Date;
+}
+
+export async function listUsers(): Promise<UserListItem[]> {
+  return getDb()
+    .select({ id: user.id, name: user.name, email: user.email, role: user.role, createdAt: user.createdAt })
+    .from(user)
+    .orderBy(asc(user.role), asc(user.name));
+}
+
+/** Changes one account's role and records who did it; returns false when there is no such account. */
+export async function setUserRole({ userId, role, actorId }: { userId: string; role: Role; actorId: string }): Promise<boolean> {
+  return getDb().transaction(async (tx) => {
+    const [before] = await tx.select({ role: user.role }).from(user).where(eq(user.id, userId));
+    if (!before) return false;
+    await tx.update(user).set({ role, updatedAt: new Date() }).where(eq(user.id, userId));
+    await tx.insert(auditLog).values({
+      id: randomUUID(),
+      actorId,
+      action: "user.role",
+      entityType: "user",
+      entityId: userId,
+      detailJson: { from: before.role, to: role },
+    });
+    return true;
+  });
+}
+
+export async function setUnitSystem({ userId, unitSystem }: { userId: string; unitSystem: UnitSystem }): Promise<void> {
+  await getDb().update(user).set({ unitSystem, updatedAt: new Date() }).where(eq(user.id, userId));
+}

@@ -1,0 +1,387 @@
+import { sql } from "drizzle-orm";
+import { check, index, integer, real, sqliteTable, text, uniqueIndex } from "drizzle-orm/sqlite-core";
+
+// One file for the whole product so later work extends these tables instead of rewriting them.
+// TS names are camelCase, SQL names snake_case; every enum column carries a CHECK constraint.
+
+export const ROLES = ["customer", "support", "maker"] as const;
+export type Role = (typeof ROLES)[number];
+export const UNIT_SYSTEMS = ["metric", "imperial"] as const;
+export type UnitSystem = (typeof UNIT_SYSTEMS)[number];
+export const SETUP_STATUSES = ["draft", "submitted", "changes_requested", "approved"] as const;
+export type SetupStatus = (typeof SETUP_STATUSES)[number];
+export const FLAG_LEVELS = ["ok", "caution", "stop"] as const;
+export type FlagLevel = (typeof FLAG_LEVELS)[number];
+export const THREADS = ["1/4-20 UNC", "3/8-16 UNC"] as const;
+export type Thread = (typeof THREADS)[number];
+export const ATTACHMENTS = ["1/4-20 UNC", "3/8-16 UNC", "strap"] as const;
+export type Attachment = (typeof ATTACHMENTS)[number];
+export const PAYLOAD_CATEGORIES = ["antenna", "camera", "sensor", "radio", "light", "other"] as const;
+export type PayloadCategory = (typeof PAYLOAD_CATEGORIES)[number];
+export const PAYLOAD_SHAPES = ["box", "cylinder", "rod"] as const;
+export type PayloadShape = (typeof PAYLOAD_SHAPES)[number];
+export const DECISION_OUTCOMES = ["approved", "changes_requested"] as const;
+export type DecisionOutcome = (typeof DECISION_OUTCOMES)[number];
+
+const inList = (column: string, values: readonly string[]) =>
+  sql.raw(`${column} in (${values.map((v) => `'${v.replace(/'/g, "''")}'`).join(", ")})`);
+
+const createdAt = () =>
+  integer("created_at", { mode: "timestamp_ms" }).notNull().default(sql`(cast(unixepoch('subsec') * 1000 as integer))`);
+const updatedAt = () =>
+  integer("updated_at", { mode: "timestamp_ms" }).notNull().default(sql`(cast(unixepoch('subsec') * 1000 as integer))`);
+
+// ---------------------------------------------------------------- better-auth (core + admin plugin)
+
+export const user = sqliteTable(
+  "user",
+  {
+    id: text("id").primaryKey(),
+    name: text("name").notNull(),
+    email: text("email").notNull().unique(),
+    emailVerified: integer("email_verified", { mode: "boolean" }).notNull().default(false),
+    image: text("image"),
+    role: text("role", { enum: ROLES }).notNull().default("customer"),
+    banned: integer("banned", { mode: "boolean" }).default(false),
+    banReason: text("ban_reason"),
+    banExpires: integer("ban_expires", { mode: "timestamp_ms" }),
+    unitSystem: text("unit_system", { enum: UNIT_SYSTEMS }).notNull().default("metric"),
+    createdAt: createdAt(),
+    updatedAt: updatedAt(),
+  },
+  (t) => [
+    check("user_role_check", inList("role", ROLES)),
+    check("user_unit_system_check", inList("unit_system", UNIT_SYSTEMS)),
+  ],
+);
+
+export const session = sqliteTable(
+  "session",
+  {
+    id: text("id").primaryKey(),
+    expiresAt: integer("expires_at", { mode: "timestamp_ms" }).notNull(),
+    token: text("token").notNull().unique(),
+    ipAddress: text("ip_address"),
+    userAgent: text("user_agent"),
+    userId: text("user_id")
+      .notNull()
+      .references(() => user.id, { onDelete: "cascade" }),
+    impersonatedBy: text("impersonated_by"),
+    createdAt: createdAt(),
+    updatedAt: updatedAt(),
+  },
+  (t) => [index("session_user_id_idx").on(t.userId)],
+);
+
+export const account = sqliteTable(
+  "account",
+  {
+    id: text("id").primaryKey(),
+    accountId: text("account_id").notNull(),
+    providerId: text("provider_id").notNull(),
+    userId: text("user_id")
+      .notNull()
+      .references(() => user.id, { onDelete: "cascade" }),
+    accessToken: text("access_token"),
+    refreshToken: text("refresh_token"),
+    idToken: text("id_token"),
+    accessTokenExpiresAt: integer("access_token_expires_at", { mode: "timestamp_ms" }),
+    refreshTokenExpiresAt: integer("refresh_token_expires_at", { mode: "timestamp_ms" }),
+    scope: text("scope"),
+    password: text("password"),
+    createdAt: createdAt(),
+    updatedAt: updatedAt(),
+  },
+  (t) => [index("account_user_id_idx").on(t.userId)],
+);
+
+export const verification = sqliteTable(
+  "verification",
+  {
+    id: text("id").primaryKey(),
+    identifier: text("identifier").notNull(),
+    value: text("value").notNull(),
+    expiresAt: integer("expires_at", { mode: "timestamp_ms" }).notNull(),
+    createdAt: createdAt(),
+    updatedAt: updatedAt(),
+  },
+  (t) => [index("verification_identifier_idx").on(t.identifier)],
+);
+
+// better-auth's rate limiter keeps its counters here so limits survive a restart.
+export const rateLimit = sqliteTable("rate_limit", {
+  id: text("id").primaryKey(),
+  key: text("key").notNull().unique(),
+  count: integer("count").notNull(),
+  lastRequest: integer("last_request").notNull(),
+});
+
+// ---------------------------------------------------------------- catalogue (the maker's Workshop)
+
+export const envelopeModels = sqliteTable("envelope_models", {
+  id: text("id").primaryKey(),
+  slug: text("slug").notNull().unique(),
+  name: text("name").notNull(),
+  description: text("description").notNull().default(""),
+  // Parametric hull (lib/balance geometry's HullParams), kept as JSON so the GLB can be rebuilt.
+  hullJson: text("hull_json", { mode: "json" }).notNull(),
+  gasVolumeM3: real("gas_volume_m3").notNull(),
+  nominalMassKg: real("nominal_mass_kg").notNull(),
+  buoyancyCentreXM: real("buoyancy_centre_x_m").notNull(),
+  buoyancyCentreZM: real("buoyancy_centre_z_m").notNull(),
+  massCentreXM: real("mass_centre_x_m").notNull(),
+  massCentreZM: real("mass_centre_z_m").notNull(),
+  tetherPointXM: real("tether_point_x_m").notNull(),
+  tetherPointZM: real("tether_point_z_m").notNull(),
+  railStartXM: real("rail_start_x_m").notNull(),
+  railEndXM: real("rail_end_x_m").notNull(),
+  railZM: real("rail_z_m").notNull(),
+  railTabCount: integer("rail_tab_count").notNull(),
+  // { sailAreaM2, liftSlopePerRad, zeroLiftTrimDeg, dragCoefficient, pressureCentre: { x, z } }
+  aeroJson: text("aero_json", { mode: "json" }),
+  // Flag limits for this model; missing keys fall back to the engine's defaults.
+  limitsJson: text("limits_json", { mode: "json" }).notNull().default(sql`'{}'`),
+  glbPath: text("glb_path").notNull(),
+  active: integer("active", { mode: "boolean" }).notNull().default(true),
+  createdAt: createdAt(),
+  updatedAt: updatedAt(),
+});
+
+export const envelopeUnits = sqliteTable(
+  "envelope_units",
+  {
+    id: text("id").primaryKey(),
+    modelId: text("model_id")
+      .notNull()
+      .references(() => envelopeModels.id),
+    serial: text("serial").notNull().unique(),
+    ownerId: text("owner_id").references(() => user.id, { onDelete: "set null" }),
+    measuredMassKg: real("measured_mass_kg").notNull(),
+    measuredGrossLiftKg: real("measured_gross_lift_kg").notNull(),
+    measuredAtTemperatureC: real("measured_at_temperature_c").notNull(),
+    measuredAtAltitudeM: real("measured_at_altitude_m").notNull(),
+    measuredOn: text("measured_on").notNull(), // ISO date, yyyy-mm-dd
+    notes: text("notes").notNull().default(""),
+    createdAt: createdAt(),
+  },
+  (t) => [index("envelope_units_owner_idx").on(t.ownerId)],
+);
+
+export const mounts = sqliteTable(
+  "mounts",
+  {
+    id: text("id").primaryKey(),
+    name: text("name").notNull().unique(),
+    thread: text("thread", { enum: THREADS }).notNull(),
+    massKg: real("mass_kg").notNull(),
+    ratedLoadKg: real("rated_load_kg").notNull(),
+    // Breaking load of the safety line that ties the payloads to the mount.
+    safetyLineBreakingLoadN: real("safety_line_breaking_load_n").notNull(),
+    active: integer("active", { mode: "boolean" }).notNull().default(true),
+  },
+  (t) => [check("mounts_thread_check", inList("thread", THREADS))],
+);
+
+export const adapters = sqliteTable(
+  "adapters",
+  {
+    id: text("id").primaryKey(),
+    name: text("name").notNull().unique(),
+    fromThread: text("from_thread", { enum: ATTACHMENTS }).notNull(),
+    toThread: text("to_thread", { enum: THREADS }).notNull(),
+    massKg: real("mass_kg").notNull(),
+    ratedLoadKg: real("rated_load_kg").notNull(),
+  },
+  (t) => [
+    check("adapters_from_check", inList("from_thread", ATTACHMENTS)),
+    check("adapters_to_check", inList("to_thread", THREADS)),
+  ],
+);
+
+export const payloadTemplates = sqliteTable(
+  "payload_templates",
+  {
+    id: text("id").primaryKey(),
+    name: text("name").notNull().unique(),
+    category: text("category", { enum: PAYLOAD_CATEGORIES }).notNull(),
+    description: text("description").notNull().default(""),
+    massKg: real("mass_kg").notNull(),
+    shape: text("shape", { enum: PAYLOAD_SHAPES }).notNull(),
+    lengthM: real("length_m").notNull(),
+    widthM: real("width_m").notNull(),
+    heightM: real("height_m").notNull(),
+    attachment: text("attachment", { enum: ATTACHMENTS }).notNull(),
+    dragAreaM2: real("drag_area_m2").notNull(),
+    // The payload's centre of mass from the mount's attachment point (z negative hangs below).
+    offsetXM: real("offset_x_m").notNull().default(0),
+    offsetZM: real("offset_z_m").notNull(),
+  },
+  (t) => [
+    check("payload_templates_category_check", inList("category", PAYLOAD_CATEGORIES)),
+    check("payload_templates_shape_check", inList("shape", PAYLOAD_SHAPES)),
+    check("payload_templates_attachment_check", inList("attachment", ATTACHMENTS)),
+  ],
+);
+
+// ---------------------------------------------------------------- setups and their review
+
+export const setups = sqliteTable(
+  "setups",
+  {
+    id: text("id").primaryKey(),
+    ownerId: text("owner_id")
+      .notNull()
+      .references(() => user.id, { onDelete: "cascade" }),
+    name: text("name").notNull(),
+    modelId: text("model_id")
+      .notNull()
+      .references(() => envelopeModels.id),
+    unitId: text("unit_id").references(() => envelopeUnits.id, { onDelete: "set null" }),
+    mountId: text("mount_id")
+      .notNull()
+      .references(() => mounts.id),
+    mountPositionXM: real("mount_position_x_m").notNull(),
+    siteName: text("site_name").notNull().default(""),
+    altitudeM: real("altitude_m").notNull().default(0),
+    temperatureC: real("temperature_c"), // null: ISA at the altitude
+    pressurePa: real("pressure_pa"), // null: ISA at the altitude
+    windMS: real("wind_m_s").notNull().default(0),
+    gustMS: real("gust_m_s"),
+    purity: real("purity").notNull().default(1),
+    superheatK: real("superheat_k").notNull().default(0),
+    fillFraction: real("fill_fraction").notNull().default(1),
+    tetherMassPerMetreKg: real("tether_mass_per_metre_kg"),
+    tetherLengthOutM: real("tether_length_out_m"),
+    tetherBreakingLoadN: real("tether_breaking_load_n"),
+    status: text("status", { enum: SETUP_STATUSES }).notNull().default("draft"),
+    // Optimistic concurrency: every write must name the version it read, and bumps it.
+    version: integer("version").notNull().default(1),
+    // The server's own evaluation of the stored input (a BalanceResult), never the client's.
+    resultJson: text("result_json", { mode: "json" }),
+    worstFlag: text("worst_flag", { enum: FLAG_LEVELS }),
+    cautionsAcknowledged: integer("cautions_acknowledged", { mode: "boolean" }).notNull().default(false),
+    submittedAt: integer("submitted_at", { mode: "timestamp_ms" }),
+    createdAt: createdAt(),
+    updatedAt: updatedAt(),
+  },
+  (t) => [
+    index("setups_owner_idx").on(t.ownerId),
+    index("setups_status_idx").on(t.status),
+    check("setups_status_check", inList("status", SETUP_STATUSES)),
+    check("setups_worst_flag_check", sql`worst_flag is null or ${inList("worst_flag", FLAG_LEVELS)}`),
+  ],
+);
+
+export const setupPayloads = sqliteTable(
+  "setup_payloads",
+  {
+    id: text("id").primaryKey(),
+    setupId: text("setup_id")
+      .notNull()
+      .references(() => setups.id, { onDelete: "cascade" }),
+    templateId: text("template_id").references(() => payloadTemplates.id, { onDelete: "set null" }),
+    sortOrder: integer("sort_order").notNull(),
+    name: text("name").notNull(),
+    category: text("category", { enum: PAYLOAD_CATEGORIES }).notNull(),
+    massKg: real("mass_kg").notNull(),
+    shape: text("shape", { enum: PAYLOAD_SHAPES }).notNull(),
+    lengthM: real("length_m").notNull(),
+    widthM: real("width_m").notNull(),
+    heightM: real("height_m").notNull(),
+    attachment: text("attachment", { enum: ATTACHMENTS }).notNull(),
+    adapterId: text("adapter_id").references(() => adapters.id),
+    dragAreaM2: real("drag_area_m2").notNull().default(0),
+    offsetXM: real("offset_x_m").notNull().default(0),
+    offsetZM: real("offset_z_m").notNull(),
+  },
+  (t) => [
+    uniqueIndex("setup_payloads_order_idx").on(t.setupId, t.sortOrder),
+    check("setup_payloads_category_check", inList("category", PAYLOAD_CATEGORIES)),
+    check("setup_payloads_shape_check", inList("shape", PAYLOAD_SHAPES)),
+    check("setup_payloads_attachment_check", inList("attachment", ATTACHMENTS)),
+  ],
+);
+
+export const comments = sqliteTable(
+  "comments",
+  {
+    id: text("id").primaryKey(),
+    setupId: text("setup_id")
+      .notNull()
+      .references(() => setups.id, { onDelete: "cascade" }),
+    authorId: text("author_id")
+      .notNull()
+      .references(() => user.id),
+    body: text("body").notNull(),
+    createdAt: createdAt(),
+  },
+  (t) => [index("comments_setup_idx").on(t.setupId)],
+);
+
+export const decisions = sqliteTable(
+  "decisions",
+  {
+    id: text("id").primaryKey(),
+    setupId: text("setup_id")
+      .notNull()
+      .references(() => setups.id, { onDelete: "cascade" }),
+    reviewerId: text("reviewer_id")
+      .notNull()
+      .references(() => user.id),
+    outcome: text("outcome", { enum: DECISION_OUTCOMES }).notNull(),
+    setupVersion: integer("setup_version").notNull(),
+    // Reason codes (e.g. "trim", "free-lift", "attachment") so Insight can count why setups fail.
+    reasonsJson: text("reasons_json", { mode: "json" }).notNull().default(sql`'[]'`),
+    note: text("note").notNull().default(""),
+    createdAt: createdAt(),
+  },
+  (t) => [
+    index("decisions_setup_idx").on(t.setupId),
+    check("decisions_outcome_check", inList("outcome", DECISION_OUTCOMES)),
+  ],
+);
+
+export const attachments = sqliteTable(
+  "attachments",
+  {
+    id: text("id").primaryKey(),
+    setupId: text("setup_id")
+      .notNull()
+      .references(() => setups.id, { onDelete: "cascade" }),
+    uploaderId: text("uploader_id")
+      .notNull()
+      .references(() => user.id),
+    fileName: text("file_name").notNull(),
+    contentType: text("content_type").notNull(),
+    sizeBytes: integer("size_bytes").notNull(),
+    storageKey: text("storage_key").notNull().unique(),
+    createdAt: createdAt(),
+  },
+  (t) => [index("attachments_setup_idx").on(t.setupId)],
+);
+
+export const auditLog = sqliteTable(
+  "audit_log",
+  {
+    id: text("id").primaryKey(),
+    actorId: text("actor_id").references(() => user.id, { onDelete: "set null" }),
+    action: text("action").notNull(), // e.g. "setup.save", "user.role"
+    entityType: text("entity_type").notNull(),
+    entityId: text("entity_id").notNull(),
+    detailJson: text("detail_json", { mode: "json" }).notNull().default(sql`'{}'`),
+    createdAt: createdAt(),
+  },
+  (t) => [index("audit_log_entity_idx").on(t.entityType, t.entityId)],
+);
+
+export type UserRow = typeof user.$inferSelect;
+export type EnvelopeModelRow = typeof envelopeModels.$inferSelect;
+export type EnvelopeUnitRow = typeof envelopeUnits.$inferSelect;
+export type MountRow = typeof mounts.$inferSelect;
+export type AdapterRow = typeof adapters.$inferSelect;
+export type PayloadTemplateRow = typeof payloadTemplates.$inferSelect;
+export type SetupRow = typeof setups.$inferSelect;
+export type SetupPayloadRow = typeof setupPayloads.$inferSelect;
+export type CommentRow = typeof comments.$inferSelect;
+export type DecisionRow = typeof decisions.$inferSelect;
+export type AttachmentRow = typeof attachments.$inferSelect;

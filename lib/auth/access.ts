@@ -1,0 +1,22 @@
+import type { Role, UnitSystem } from "@/db/schema";
+
+export interface Viewer {
+  id: string;
+  name: string;
+  email: string;
+  role: Role;
+  unitSystem: UnitSystem;
+}
+
+export type AccessVerdict = "ok" | "unauthenticated" | "forbidden";
+
+/** Decides access from the session's viewer alone; every page, route and action asks this. */
+export function checkAccess(viewer: Viewer | null, allowedRoles?: readonly Role[]): AccessVerdict {
+  if (!viewer) return "unauthenticated";
+  if (allowedRoles && !allowedRoles.includes(viewer.role)) return "forbidden";
+  return "ok";
+}
+
+export const STAFF_ROLES = ["support", "maker"] as const satisfies readonly Role[];
+export const MAKER_ONLY = ["maker"] as const satisfies readonly Role[];
+export const CUSTOMER_ONLY = ["customer"] as const satisfies readonly Role[];

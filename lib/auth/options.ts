@@ -1,0 +1,27 @@
+import type { BetterAuthOptions } from "better-auth";
+
+// Sign-in attempts allowed per client address in one window (better-auth counts by IP).
+export const SIGN_IN_WINDOW_S = 60;
+export const SIGN_IN_MAX_ATTEMPTS = Number(process.env.TRIMRAIL_SIGN_IN_MAX ?? 10);
+
+export const authOptionsBase = {
+  appName: "Trimrail",
+  emailAndPassword: { enabled: true, minPasswordLength: 8, autoSignIn: true },
+  user: {
+    additionalFields: {
+      // Set only through our own preference action, never from the sign-up body.
+      unitSystem: { type: "string", required: false, defaultValue: "metric", input: false },
+    },
+  },
+  rateLimit: {
+    enabled: true,
+    storage: "database",
+    modelName: "rateLimit",
+    window: 60,
+    max: 300,
+    customRules: {
+      "/sign-in/email": { window: SIGN_IN_WINDOW_S, max: SIGN_IN_MAX_ATTEMPTS },
+      "/sign-up/email": { window: SIGN_IN_WINDOW_S, max: SIGN_IN_MAX_ATTEMPTS },
+    },
+  },
+} satisfies Partial<BetterAuthOptions>;

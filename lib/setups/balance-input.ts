@@ -1,0 +1,91 @@
+import type { BalanceInput } from "@/lib/balance";
+import type { SetupDraft } from "./setup-draft";
+
+// The catalogue facts a setup refers to, in the shape the database rows already have.
+export interface ModelSpec {
+  gasVolumeM3: number;
+  nominalMassKg: number;
+  buoyancyCentreXM: number;
+  buoyancyCentreZM: number;
+  massCentreXM: number;
+  massCentreZM: number;
+  tetherPointXM: number;
+  tetherPointZM: number;
+  railStartXM: number;
+  railEndXM: number;
+  railZM: number;
+  hullJson: unknown;
+  aeroJson: unknown;
+  limitsJson: unknown;
+}
+export interface UnitSpec {
+  measuredMassKg: number;
+}
+export interface MountSpec {
+  thread: "1/4-20 UNC" | "3/8-16 UNC";
+  massKg: number;
+  ratedLoadKg: number;
+  safetyLineBreakingLoadN: number;
+}
+export interface AdapterSpec {
+  fromThread: "1/4-20 UNC" | "3/8-16 UNC" | "strap";
+  toThread: "1/4-20 UNC" | "3/8-16 UNC";
+  massKg: number;
+}
+export interface SetupCatalogue {
+  model: ModelSpec;
+  unit: UnitSpec | null;
+  mount: MountSpec;
+  adaptersById: Readonly<Record<string, AdapterSpec>>;
+}
+
+/**
+ * Turns a setup and the catalogue rows it names into the engine's input. The same function runs in
+ * the Planner (live) and on the server (stored result), so both always agree.
+ * A serial unit's weighed mass replaces the model's nominal mass.
+ */
+export function toBalanceInput(draft: SetupDraft, catalogue: SetupCatalogue): BalanceInput {
+  const { model, unit, mount, adaptersById } = catalogue;
+  const site = draft.site;
+  return {
+    envelope: {
+      gasVolumeM3: model.gasVolumeM3,
+      massKg: unit?.measuredMassKg ?? model.nominalMassKg,
+      buoyancyCentre: { x: model.buoyancyCentreXM, z: model.buoyancyCentreZM },
+      massCentre: { x: model.massCentreXM, z: model.massCentreZM },
+      tetherPoint: { x: model.tetherPointXM, z: model.tetherPointZM },
+      rail: { startX: model.railStartXM, endX: model.railEndXM, z: model.railZM },
+      ...(model.aeroJson ? { aero: model.aeroJson as NonNullable<BalanceInput["envelope"]["aero"]> } : {}),
+      ...(model.limitsJson ? { limits: model.limitsJson as NonNullable<BalanceInput["envelope"]["limits"]> } : {}),
+      ...(model.hullJson ? { hull: model.hullJson as NonNullable<BalanceInput["envelope"]["hull"]> } : {}),
+    },
+    gas: { purity: draft.gas.purity, superheatK: draft.gas.superheatK, fillFraction: draft.gas.fillFraction },
+    site: {
+      altitudeM: site.altitudeM,
+      ...(site.temperatureC === null ? {} : { temperatureC: site.temperatureC }),
+      ...(site.pressurePa === null ? {} : { pressurePa: site.pressurePa }),
+      windMS: site.windMS,
+      ...(site.gustMS === null ? {} : { gustMS: site.gustMS }),
+    },
+    mount: {
+      positionX: draft.mountPositionXM,
+      massKg: mount.massKg,
+      thread: mount.thread,
+      ratedLoadKg: mount.ratedLoadKg,
+      safetyLineBreakingLoadN: mount.safetyLineBreakingLoadN,
+    },
+    payloads: draft.payloads.map((p) => {
+      const adapter = p.adapterId ? adaptersById[p.adapterId] : undefined;
+      return {
+        name: p.name,
+        massKg: p.massKg,
+        offset: { x: p.offsetXM, z: p.offsetZM },
+        attachment: p.attachment,
+        ...(adapter ? { adapter: { massKg: adapter.massKg, from: adapter.fromThread, to: adapter.toThread } } : {}),
+        size: { lengthM: p.lengthM, widthM: p.widthM, heightM: p.heightM },
+        dragAreaM2: p.dragAreaM2,
+      };
+    }),
+    ...(draft.tether ? { tether: { ...draft.tether } } : {}),
+  } as BalanceInput;
+}

@@ -1,0 +1,13 @@
+import { spawn, spawnSync } from "node:child_process";
+import { mkdirSync } from "node:fs";
+import { ensureLocalEnv } from "./local-env";
+
+// `next dev` with the same preparation as the demo (secret, migrations, demo data).
+ensureLocalEnv({ BETTER_AUTH_URL: `http://localhost:${process.env.PORT ?? "3000"}` });
+mkdirSync("data", { recursive: true });
+for (const script of ["scripts/migrate.ts", "scripts/seed.ts"]) {
+  const result = spawnSync("npx", ["tsx", script], { stdio: "inherit", env: process.env });
+  if (result.status !== 0) process.exit(result.status ?? 1);
+}
+const server = spawn("npx", ["next", "dev", "-p", process.env.PORT ?? "3000"], { stdio: "inherit", env: process.env });
+server.on("exit", (code) => process.exit(code ?? 0));
