@@ -1,0 +1,150 @@
+/**
+ * The balance engine's input contract. Every number must be finite (zod 4 rejects NaN and
+ * ±Infinity for z.number()) and within physical bounds; messages name the quantity and unit.
+ * No defaults are applied here: evaluateBalance applies them, so parsing is not needed on the
+ * hot path (the planner calls the engine on every drag) and input equals parsed output.
+ */
+import { z } from "zod";
+import { hullParamsSchema } from "./geometry";
+
+const quantity = (label: string, min: number, max: number) =>
+  z.number(`${label} must be a finite number`)
+    .min(min, `${label} must be at least ${min}`)
+    .max(max, `${label} must be at most ${max}`);
+
+const positive = (label: string, max: number) =>
+  z.number(`${label} must be a finite number`)
+    .gt(0, `${label} must be greater than 0`)
+    .max(max, `${label} must be at most ${max}`);
+
+/** Body-frame coordinates are limited to ±1 km: nothing on a lifter is further from its nose. */
+const coordinateM = (label: string) => quantity(`${label} (m)`, -1000, 1000);
+
+export const vecSchema = z.object({
+  x: coordinateM("x"),
+  z: coordinateM("z"),
+});
+
+export const THREADS = ["1/4-20 UNC", "3/8-16 UNC"] as const;
+export const threadSchema = z.enum(THREADS, "thread must be \"1/4-20 UNC\" or \"3/8-16 UNC\"");
+export const attachmentSchema = z.enum(
+  [...THREADS, "strap"],
+  "attachment must be \"1/4-20 UNC\", \"3/8-16 UNC\" or \"strap\"",
+);
+
+export const limitsSchema = z.object({
+  cautionFreeLiftRatio: quantity("caution free-lift ratio", 0, 1).optional(),
+  cautionTrimDeg: quantity("caution trim (deg)", 0, 90).optional(),
+  stopTrimDeg: quantity("stop trim (deg)", 0, 90).optional(),
+  cautionTetherAngleDeg: quantity("caution tether angle (deg)", 0, 90).optional(),
+  stopTetherAngleDeg: quantity("stop tether angle (deg)", 0, 90).optional(),
+  loadFactor: quantity("load factor", 1, 100).optional(),
+  mountCautionFraction: quantity("mount caution fraction", 0, 1).optional(),
+  safetyLineFactor: quantity("safety-line factor", 1, 1000).optional(),
+  tetherSafetyFactor: quantity("tether safety factor", 1, 1000).optional(),
+  clearanceCautionM: quantity("caution clearance (m)", 0, 10).optional(),
+  screwProofStrengthPa: positive("screw proof strength (Pa)", 5e9).optional(),
+});
+
+export const aeroSchema = z.object({
+  sailAreaM2: quantity("sail area (m²)", 0, 10_000),
+  liftSlopePerRad: quantity("lift slope (per rad)", 0, 10),
+  zeroLiftTrimDeg: quantity("zero-lift trim (deg)", -45, 45),
+  dragCoefficient: quantity("drag coefficient", 0, 5),
+  pressureCentre: vecSchema,
+});
+
+export const envelopeSchema = z.object({
+  gasVolumeM3: positive("gas volume (m³)", 100_000),
+  massKg: quantity("envelope mass (kg)", 0, 100_000),
+  buoyancyCentre: vecSchema,
+  massCentre: vecSchema,
+  tetherPoint: vecSchema,
+  rail: z.object({
+    startX: coordinateM("rail start x"),
+    endX: coordinateM("rail end x"),
+    z: coordinateM("rail z"),
+  }).refine((rail) => rail.endX >= rail.startX, {
+    message: "rail end x must not be forward of rail start x",
+    path: ["endX"],
+  }),
+  aero: aeroSchema.optional(),
+  limits: limitsSchema.optional(),
+  /** The hull's shape, for the clearance check against the hull. */
+  hull: hullParamsSchema.optional(),
+});
+
+export const gasSchema = z.object({
+  purity: quantity("helium purity (fraction)", 0, 1).optional(),
+  superheatK: quantity("superheat (K)", -30, 80).optional(),
+  fillFraction: z.number("fill fraction must be a finite number")
+    .gt(0, "fill fraction must be greater than 0")
+    .max(1, "fill fraction must be at most 1")
+    .optional(),
+  /** Gas one cylinder delivers, referred to 101 325 Pa and 15 °C. */
+  cylinderContentM3: positive("cylinder content (m³)", 1000).optional(),
+  /** Fraction of the gas lost per day through the fabric and seams. */
+  lossPerDayFraction: quantity("loss per day (fraction)", 0, 0.99).optional(),
+});
+
+export const siteSchema = z.object({
+  /** Geometric altitude above mean sea level. */
+  altitudeM: quantity("altitude (m)", -500, 11_000).optional(),
+  temperatureC: quantity("temperature (°C)", -80, 60).optional(),
+  pressurePa: quantity("pressure (Pa)", 10_000, 120_000).optional(),
+  windMS: quantity("wind (m/s)", 0, 60).optional(),
+  gustMS: quantity("gust (m/s)", 0, 80).optional(),
+});
+
+export const mountSchema = z.object({
+  positionX: coordinateM("mount position x"),
+  massKg: quantity("mount mass (kg)", 0, 10_000),
+  thread: threadSchema,
+  ratedLoadKg: quantity("mount rated load (kg)", 0, 100_000),
+  /** Breaking load of the safety line from the mount to the payloads. */
+  safetyLineBreakingLoadN: quantity("safety-line breaking load (N)", 0, 1e7).optional(),
+});
+
+export const payloadSchema = z.object({
+  name: z.string("payload name must be text").min(1, "payload name must not be empty").max(120),
+  massKg: quantity("payload mass (kg)", 0, 10_000),
+  offset: vecSchema,
+  attachment: attachmentSchema,
+  adapter: z.object({
+    massKg: quantity("adapter mass (kg)", 0, 1000),
+    from: threadSchema,
+    to: threadSchema,
+  }).optional(),
+  size: z.object({
+    lengthM: quantity("payload length (m)", 0, 100),
+    widthM: quantity("payload width (m)", 0, 100),
+    heightM: quantity("payload height (m)", 0, 100),
+  }).optional(),
+  dragAreaM2: quantity("payload drag area (m²)", 0, 1000).optional(),
+});
+
+export const tetherSchema = z.object({
+  massPerMetreKg: positive("tether mass per metre (kg/m)", 100),
+  lengthOutM: quantity("tether out (m)", 0, 100_000),
+  breakingLoadN: positive("tether breaking load (N)", 1e9),
+});
+
+export const balanceInputSchema = z.object({
+  envelope: envelopeSchema,
+  gas: gasSchema.optional(),
+  site: siteSchema.optional(),
+  mount: mountSchema,
+  payloads: z.array(payloadSchema, "payloads must be a list").max(100, "at most 100 payloads"),
+  tether: tetherSchema.optional(),
+});
+
+export type BalanceInput = z.infer<typeof balanceInputSchema>;
+export type PayloadInput = z.infer<typeof payloadSchema>;
+export type LimitsInput = z.infer<typeof limitsSchema>;
+export type Thread = z.infer<typeof threadSchema>;
+export type Attachment = z.infer<typeof attachmentSchema>;
+
+/** Readonly view of any input: the engine never mutates what it is given. */
+export type DeepReadonly<T> = T extends (infer E)[]
+  ? readonly DeepReadonly<E>[]
+  : T extends object ? { readonly [K in keyof T]: DeepReadonly<T[K]> } : T;
