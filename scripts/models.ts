@@ -36,7 +36,7 @@ function srgbHexToLinear(hex: string): [number, number, number, number] {
   return [channel(1), channel(3), channel(5), 1];
 }
 
-function smoothNormals(mesh: MeshData): Float32Array {
+function smoothNormals(mesh: MeshData): Float32Array<ArrayBuffer> {
   const { positions, indices } = mesh;
   const normals = new Float32Array(positions.length);
   for (let t = 0; t < indices.length; t += 3) {
@@ -57,7 +57,7 @@ function smoothNormals(mesh: MeshData): Float32Array {
 }
 
 /** Fins are two-sided panels sharing corners; split them so each face gets its own flat normal. */
-function flatFinBuffers(mesh: MeshData): { positions: Float32Array; normals: Float32Array } {
+function flatFinBuffers(mesh: MeshData): { positions: Float32Array<ArrayBuffer>; normals: Float32Array<ArrayBuffer> } {
   const { positions: source, indices } = mesh;
   const positions = new Float32Array(indices.length * 3);
   const normals = new Float32Array(indices.length * 3);
@@ -79,7 +79,7 @@ function flatFinBuffers(mesh: MeshData): { positions: Float32Array; normals: Flo
 }
 
 /** Seam lines follow every (segments / gores)-th meridian of the hull mesh, nudged outward. */
-function seamLines(hull: MeshData, segments: number): { positions: Float32Array; indices: Uint16Array } {
+function seamLines(hull: MeshData, segments: number): { positions: Float32Array<ArrayBuffer>; indices: Uint16Array<ArrayBuffer> } {
   const ringCount = (hull.positions.length / 3 - 2) / segments;
   const step = Math.max(1, Math.round(segments / GORE_COUNT));
   const meridians: number[] = [];
@@ -104,8 +104,8 @@ function seamLines(hull: MeshData, segments: number): { positions: Float32Array;
 }
 
 /** Smallest index type that fits, to keep the files small. */
-function compactIndices(indices: Uint32Array, vertexCount: number): Uint16Array | Uint32Array {
-  return vertexCount <= 0xffff ? Uint16Array.from(indices) : indices;
+function compactIndices(indices: Uint32Array, vertexCount: number): Uint16Array<ArrayBuffer> | Uint32Array<ArrayBuffer> {
+  return vertexCount <= 0xffff ? Uint16Array.from(indices) : Uint32Array.from(indices);
 }
 
 export function buildEnvelopeDocument(key: DemoHullName, params: Readonly<HullParams> = demoHulls[key]): Document {
@@ -128,7 +128,7 @@ export function buildEnvelopeDocument(key: DemoHullName, params: Readonly<HullPa
   const hullMesh = buildHullMesh(params, MODEL_RESOLUTION);
   const hullVertexCount = hullMesh.positions.length / 3;
   const hullPrimitive = doc.createPrimitive()
-    .setAttribute("POSITION", doc.createAccessor("hull-position").setType("VEC3").setArray(hullMesh.positions).setBuffer(buffer))
+    .setAttribute("POSITION", doc.createAccessor("hull-position").setType("VEC3").setArray(Float32Array.from(hullMesh.positions)).setBuffer(buffer))
     .setAttribute("NORMAL", doc.createAccessor("hull-normal").setType("VEC3").setArray(smoothNormals(hullMesh)).setBuffer(buffer))
     .setIndices(doc.createAccessor("hull-index").setType("SCALAR").setArray(compactIndices(hullMesh.indices, hullVertexCount)).setBuffer(buffer))
     .setMaterial(material("envelope-fabric", "#d9dcdf", 0.9));
