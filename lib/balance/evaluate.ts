@@ -194,7 +194,7 @@ export function evaluateBalance(input: Input): BalanceResult {
     if (hull) {
       const gapM = hullClearanceM(hull, payloadCentres[i], size);
       const text = `${name} clears the hull by ${fixed(gapM, 3)} m`;
-      flags.push(gapM <= 0
+      flags.push(gapM < 0
         ? makeFlag("clearance-hull", "stop", `${name} cuts into the hull (by ${fixed(-gapM, 3)} m).`, gapM, 0, i)
         : gapM < limits.clearanceCautionM
           ? makeFlag("clearance-hull", "caution", `${text}; caution below ${fixed(limits.clearanceCautionM, 3)} m.`, gapM, limits.clearanceCautionM, i)

@@ -36,7 +36,11 @@ export function deriveEnvelopeGeometry(params: Readonly<HullParams>): DerivedEnv
   const integrals = integrateHullProfile(params);
   const radiusM = 0.5 * params.maxDiameterM;
   const bx = integrals.buoyancyCentre.x;
-  const bellyZ = -profileRadiusAt(params, bx);
+  const railStartX = bx - RAIL_HALF_LENGTH_FRACTION * params.lengthM;
+  const railEndX = bx + RAIL_HALF_LENGTH_FRACTION * params.lengthM;
+  // The straight rail hangs from the belly's lowest point along its span.
+  const widestX = Math.min(railEndX, Math.max(railStartX, params.maxDiameterAtFraction * params.lengthM));
+  const bellyZ = -profileRadiusAt(params, widestX);
 
   // Sail: the hull's side silhouette seen from above plus each fin's projection on the
   // horizontal plane (a vertical fin adds nothing to lift).
@@ -61,8 +65,8 @@ export function deriveEnvelopeGeometry(params: Readonly<HullParams>): DerivedEnv
     fabricMassKg: integrals.fabricMassKg,
     tetherPoint: { x: bx, z: -radiusM * (1 + TETHER_DROP_RADII) },
     rail: {
-      startX: bx - RAIL_HALF_LENGTH_FRACTION * params.lengthM,
-      endX: bx + RAIL_HALF_LENGTH_FRACTION * params.lengthM,
+      startX: railStartX,
+      endX: railEndX,
       z: bellyZ,
     },
     aero: {

@@ -140,7 +140,11 @@ describe("deriveEnvelopeGeometry", () => {
     const derived = deriveEnvelopeGeometry(params);
     expect(derived.rail.startX).toBeLessThan(derived.buoyancyCentre.x);
     expect(derived.rail.endX).toBeGreaterThan(derived.buoyancyCentre.x);
-    expect(derived.rail.z).toBeCloseTo(-profileRadiusAt(params, derived.buoyancyCentre.x), 12);
+    expect(derived.rail.z).toBeCloseTo(-params.maxDiameterM / 2, 12);
+    // the straight rail never enters the hull along its span
+    for (let x = derived.rail.startX; x <= derived.rail.endX; x += 0.01) {
+      expect(-profileRadiusAt(params, x)).toBeGreaterThanOrEqual(derived.rail.z - 1e-12);
+    }
     expect(derived.tetherPoint.z).toBeLessThan(derived.rail.z);
     expect(derived.aero.pressureCentre.x).toBeGreaterThan(derived.buoyancyCentre.x);
   });
