@@ -17,13 +17,19 @@ const positive = (label: string, max: number) =>
     .gt(0, `${label} must be greater than 0`)
     .max(max, `${label} must be at most ${max}`);
 
+/** Error for a missing or malformed section, e.g. "envelope is required". */
+const section = (label: string) => ({
+  error: (issue: { input?: unknown }) =>
+    issue.input === undefined ? `${label} is required` : `${label} must be an object`,
+});
+
 /** Body-frame coordinates are limited to ±1 km: nothing on a lifter is further from its nose. */
 const coordinateM = (label: string) => quantity(`${label} (m)`, -1000, 1000);
 
 export const vecSchema = z.object({
   x: coordinateM("x"),
   z: coordinateM("z"),
-});
+}, section("point {x, z}"));
 
 export const THREADS = ["1/4-20 UNC", "3/8-16 UNC"] as const;
 export const threadSchema = z.enum(THREADS, "thread must be \"1/4-20 UNC\" or \"3/8-16 UNC\"");
@@ -64,7 +70,7 @@ export const envelopeSchema = z.object({
     startX: coordinateM("rail start x"),
     endX: coordinateM("rail end x"),
     z: coordinateM("rail z"),
-  }).refine((rail) => rail.endX >= rail.startX, {
+  }, section("rail")).refine((rail) => rail.endX >= rail.startX, {
     message: "rail end x must not be forward of rail start x",
     path: ["endX"],
   }),
@@ -72,7 +78,7 @@ export const envelopeSchema = z.object({
   limits: limitsSchema.optional(),
   /** The hull's shape, for the clearance check against the hull. */
   hull: hullParamsSchema.optional(),
-});
+}, section("envelope"));
 
 export const gasSchema = z.object({
   purity: quantity("helium purity (fraction)", 0, 1).optional(),
@@ -103,7 +109,7 @@ export const mountSchema = z.object({
   ratedLoadKg: quantity("mount rated load (kg)", 0, 100_000),
   /** Breaking load of the safety line from the mount to the payloads. */
   safetyLineBreakingLoadN: quantity("safety-line breaking load (N)", 0, 1e7).optional(),
-});
+}, section("mount"));
 
 export const payloadSchema = z.object({
   name: z.string("payload name must be text").min(1, "payload name must not be empty").max(120),
@@ -121,7 +127,7 @@ export const payloadSchema = z.object({
     heightM: quantity("payload height (m)", 0, 100),
   }).optional(),
   dragAreaM2: quantity("payload drag area (m²)", 0, 1000).optional(),
-});
+}, section("payload"));
 
 export const tetherSchema = z.object({
   massPerMetreKg: positive("tether mass per metre (kg/m)", 100),
@@ -136,7 +142,7 @@ export const balanceInputSchema = z.object({
   mount: mountSchema,
   payloads: z.array(payloadSchema, "payloads must be a list").max(100, "at most 100 payloads"),
   tether: tetherSchema.optional(),
-});
+}, section("setup"));
 
 export type BalanceInput = z.infer<typeof balanceInputSchema>;
 export type PayloadInput = z.infer<typeof payloadSchema>;
