@@ -1,0 +1,169 @@
+"use client";
+/**
+ * The Planner's 3D view: envelope, belly rail, mount and payloads, bridle and tether, markers,
+ * wind. Draws exactly its props (see types.ts); the only fetch is the envelope's GLB.
+ */
+import { OrbitControls } from "@react-three/drei";
+import { Canvas } from "@react-three/fiber";
+import { memo, Suspense, useCallback, useMemo, useRef, type RefObject } from "react";
+import type { Group, Mesh } from "three";
+import type { OrbitControls as OrbitControlsImpl } from "three-stdlib";
+import { Envelope } from "./envelope";
+import { pitchedWorldPoint, sceneScale, DEG } from "./frame";
+import { Markers } from "./markers";
+import { PAPER } from "./palette";
+import { MountScreenProbe, ReadySignal } from "./probes";
+import { Mount, Rail } from "./rail-mount";
+import { Bridle, Ground, Tether, WindArrow } from "./rigging";
+import type { LifterSceneProps } from "./types";
+import { useMountDrag } from "./use-mount-drag";
+
+/** Keeps the camera above the ground: the target is above it, so stop just short of level. */
+const MAX_POLAR_RAD = Math.PI / 2 - 0.06;
+
+function assertWebGL(): void {
+  const canvas = document.createElement("canvas");
+  const context = canvas.getContext("webgl2") ?? canvas.getContext("webgl");
+  if (!context) throw new Error("WebGL is not available");
+  context.getExtension("WEBGL_lose_context")?.loseContext();
+}
+
+interface LifterProps extends LifterSceneProps {
+  wrapperRef: RefObject<HTMLDivElement | null>;
+  controlsRef: RefObject<OrbitControlsImpl | null>;
+}
+
+/** Everything inside the Canvas; split out so hooks can read the R3F state. */
+const Lifter = memo(function Lifter(props: LifterProps) {
+  const {
+    glbUrl, hullLengthM, hullMaxDiameterM, rail, railTabCount, mountX, payloads,
+    buoyancyCentre, centreOfMass, tetherPoint, trimDeg, tetherAngleDeg, windMS, windLabel,
+    onMountDrag, onMountDragEnd, mountSelected = false, wrapperRef, controlsRef,
+  } = props;
+  const bodyRef = useRef<Group>(null);
+  const mountRef = useRef<Mesh>(null);
+  const scale = useMemo(
+    () => sceneScale(hullLengthM, hullMaxDiameterM, tetherPoint),
+    [hullLengthM, hullMaxDiameterM, tetherPoint],
+  );
+  const unitM = scale.lengthM;
+  const { onPointerDown } = useMountDrag({
+    bodyRef, controlsRef, railStartX: rail.startX, railEndX: rail.endX, railZ: rail.z, onMountDrag, onMountDragEnd,
+  });
+  const draggable = onMountDrag !== undefined;
+
+  const tetherWorld = useMemo(() => [tetherPoint.x, tetherPoint.z, 0] as [number, number, number], [tetherPoint.x, tetherPoint.z]);
+  const buoyancyWorld = useMemo(
+    () => pitchedWorldPoint(buoyancyCentre, tetherPoint, trimDeg),
+    [buoyancyCentre.x, buoyancyCentre.z, tetherPoint.x, tetherPoint.z, trimDeg], // eslint-disable-line react-hooks/exhaustive-deps
+  );
+  const massWorld = useMemo(
+    () => (centreOfMass ? pitchedWorldPoint(centreOfMass, tetherPoint, trimDeg) : null),
+    [centreOfMass?.x, centreOfMass?.z, tetherPoint.x, tetherPoint.z, trimDeg], // eslint-disable-line react-hooks/exhaustive-deps
+  );
+  const guideToY = tetherPoint.z - 0.12 * unitM;
+  const guideFromY = 0.5 * hullMaxDiameterM + 0.12 * unitM;
+  const windTail = useMemo<[number, number, number]>(
+    () => [-0.75 * unitM, 0.5 * hullMaxDiameterM + 0.05 * unitM, 0],
+    [unitM, hullMaxDiameterM],
+  );
+
+  return (
+    <>
+      <color attach="background" args={[PAPER]} />
+      <hemisphereLight args={["#ffffff", "#d8d2c4", 1.4]} />
+      <directionalLight position={[2 * unitM, 4 * unitM, 3 * unitM]} intensity={1.6} />
+      <directionalLight position={[-2 * unitM, 1 * unitM, -3 * unitM]} intensity={0.5} />
+      <Ground y={scale.groundY} sizeM={16 * unitM} centreX={scale.target[0]} />
+
+      {/* Pitch about the tether point: nose up (+) is a clockwise turn with the nose on the left. */}
+      <group position={tetherWorld} rotation-z={-trimDeg * DEG}>
+        <group ref={bodyRef} position={[-tetherPoint.x, -tetherPoint.z, 0]} name="lifter-body">
+          <Suspense fallback={null}>
+            <Envelope url={glbUrl} />
+            <ReadySignal wrapperRef={wrapperRef} />
+          </Suspense>
+          <Rail
+            startX={rail.startX} endX={rail.endX} z={rail.z} tabCount={railTabCount} unitM={unitM}
+            onPointerDown={onPointerDown} draggable={draggable}
+          />
+          <Mount
+            x={mountX} z={rail.z} unitM={unitM} payloads={payloads} selected={mountSelected}
+            mountRef={mountRef} onPointerDown={onPointerDown} draggable={draggable}
+          />
+          <Bridle tetherPoint={tetherPoint} railStartX={rail.startX} railEndX={rail.endX} railZ={rail.z} />
+        </group>
+      </group>
+
+      <Tether top={tetherWorld} tetherAngleDeg={tetherAngleDeg} groundY={scale.groundY} />
+      <Markers
+        buoyancy={buoyancyWorld} mass={massWorld} tether={tetherWorld} sizeM={0.07 * unitM}
+        guideFromY={guideFromY} guideToY={guideToY}
+      />
+      {windMS > 0 ? <WindArrow windMS={windMS} label={windLabel} tail={windTail} lengthUnitM={unitM} /> : null}
+
+      <OrbitControls
+        ref={controlsRef}
+        makeDefault
+        target={scale.target}
+        enablePan={false}
+        enableDamping={false}
+        minDistance={scale.minDistanceM}
+        maxDistance={scale.maxDistanceM}
+        maxPolarAngle={MAX_POLAR_RAD}
+      />
+      <MountScreenProbe wrapperRef={wrapperRef} mountRef={mountRef} />
+    </>
+  );
+});
+
+export interface LifterSceneComponentProps extends LifterSceneProps {
+  className?: string;
+}
+
+export function LifterScene({ summary = "3D view of the lifter", className = "", ...props }: LifterSceneComponentProps) {
+  useMemo(assertWebGL, []);
+  const wrapperRef = useRef<HTMLDivElement>(null);
+  const controlsRef = useRef<OrbitControlsImpl>(null);
+  const scale = useMemo(
+    () => sceneScale(props.hullLengthM, props.hullMaxDiameterM, props.tetherPoint),
+    [props.hullLengthM, props.hullMaxDiameterM, props.tetherPoint],
+  );
+
+  const resetView = useCallback(() => {
+    const controls = controlsRef.current;
+    if (!controls) return;
+    controls.object.position.set(...scale.cameraPosition);
+    controls.target.set(...scale.target);
+    controls.update(); // dispatches "change", which asks the demand loop for a frame
+  }, [scale]);
+
+  return (
+    <div className={`relative h-full w-full ${className}`}>
+      <div
+        ref={wrapperRef}
+        data-testid="lifter-canvas"
+        role="img"
+        aria-label={summary}
+        className="absolute inset-0 touch-none select-none"
+      >
+        <Canvas
+          frameloop="demand"
+          dpr={[1, 2]}
+          camera={{ position: scale.cameraPosition, fov: 35, near: 0.01, far: 40 * scale.lengthM }}
+        >
+          <Lifter {...props} wrapperRef={wrapperRef} controlsRef={controlsRef} />
+        </Canvas>
+      </div>
+      <button
+        type="button"
+        onClick={resetView}
+        className="absolute right-3 top-3 rounded border border-hairline bg-white/90 px-3 py-1.5 text-sm text-ink shadow-sm hover:border-accent focus-visible:outline-2 focus-visible:outline-accent"
+      >
+        Reset view
+      </button>
+    </div>
+  );
+}
+
+export default LifterScene;

@@ -1,0 +1,95 @@
+"use client";
+/**
+ * Lines and world furniture: bridle (in the pitched lifter), tether (fixed in the world, leaning
+ * downwind), ground, wind arrow.
+ */
+import { Line } from "@react-three/drei";
+import { memo, useMemo } from "react";
+import { DEG } from "./frame";
+import { textTexture } from "./label-texture";
+import { ACCENT_DARK, GRID_MAJOR, GRID_MINOR, GROUND, INK, LINE } from "./palette";
+import type { SceneVec } from "./types";
+
+type Point3 = [number, number, number];
+
+interface BridleProps {
+  tetherPoint: SceneVec;
+  railStartX: number;
+  railEndX: number;
+  railZ: number;
+}
+
+/** Bridle lines from the rail's ends to the tether point, in body coordinates (three axes). */
+export const Bridle = memo(function Bridle({ tetherPoint, railStartX, railEndX, railZ }: BridleProps) {
+  const fore = useMemo<Point3[]>(() => [[railStartX, railZ, 0], [tetherPoint.x, tetherPoint.z, 0]], [railStartX, railZ, tetherPoint.x, tetherPoint.z]);
+  const aft = useMemo<Point3[]>(() => [[railEndX, railZ, 0], [tetherPoint.x, tetherPoint.z, 0]], [railEndX, railZ, tetherPoint.x, tetherPoint.z]);
+  return (
+    <group name="bridle">
+      <Line points={fore} color={LINE} lineWidth={1.2} />
+      <Line points={aft} color={LINE} lineWidth={1.2} />
+    </group>
+  );
+});
+
+/** Drawing limit only: a tether nearer horizontal than this would run off the ground plane. */
+const MAX_DRAWN_TETHER_DEG = 80;
+
+interface TetherProps {
+  top: Point3;
+  tetherAngleDeg: number;
+  groundY: number;
+}
+
+/** The tether runs from the tether point down to its anchor, upwind (−x) of the lifter. */
+export const Tether = memo(function Tether({ top, tetherAngleDeg, groundY }: TetherProps) {
+  const points = useMemo<Point3[]>(() => {
+    const angle = Math.min(MAX_DRAWN_TETHER_DEG, Math.max(-MAX_DRAWN_TETHER_DEG, tetherAngleDeg)) * DEG;
+    const drop = Math.max(0, top[1] - groundY);
+    return [top, [top[0] - drop * Math.tan(angle), groundY, 0]];
+  }, [top, tetherAngleDeg, groundY]);
+  return <Line name="tether" points={points} color={INK} lineWidth={1.6} />;
+});
+
+export const Ground = memo(function Ground({ y, sizeM, centreX }: { y: number; sizeM: number; centreX: number }) {
+  return (
+    <group position={[centreX, y, 0]} name="ground">
+      <mesh rotation-x={-Math.PI / 2} position-y={-0.001}>
+        <planeGeometry args={[sizeM, sizeM]} />
+        <meshStandardMaterial color={GROUND} roughness={1} />
+      </mesh>
+      <gridHelper args={[sizeM, 24, GRID_MAJOR, GRID_MINOR]} />
+    </group>
+  );
+});
+
+interface WindArrowProps {
+  windMS: number;
+  label?: string;
+  tail: Point3;
+  lengthUnitM: number;
+}
+
+/** Wind from the nose towards the tail (+x); the arrow grows gently with speed, capped. */
+export const WindArrow = memo(function WindArrow({ windMS, label, tail, lengthUnitM }: WindArrowProps) {
+  const lengthM = lengthUnitM * Math.min(0.6, 0.18 + 0.025 * windMS);
+  const shaftRadiusM = 0.012 * lengthUnitM;
+  const headLengthM = 0.08 * lengthUnitM;
+  const text = label ? `wind ${label}` : "wind";
+  const { texture, aspect } = useMemo(() => textTexture(text), [text]);
+  const labelHeightM = 0.07 * lengthUnitM;
+  return (
+    <group position={tail} name="wind">
+      <mesh rotation-z={-Math.PI / 2} position-x={(lengthM - headLengthM) / 2}>
+        <cylinderGeometry args={[shaftRadiusM, shaftRadiusM, lengthM - headLengthM, 12]} />
+        <meshStandardMaterial color={ACCENT_DARK} roughness={0.6} />
+      </mesh>
+      <mesh rotation-z={-Math.PI / 2} position-x={lengthM - headLengthM / 2}>
+        <coneGeometry args={[3 * shaftRadiusM, headLengthM, 16]} />
+        <meshStandardMaterial color={ACCENT_DARK} roughness={0.6} />
+      </mesh>
+      <sprite position={[lengthM / 2, 1.2 * labelHeightM, 0]} scale={[aspect * labelHeightM, labelHeightM, 1]}>
+        <spriteMaterial map={texture} transparent depthWrite={false} toneMapped={false} />
+      </sprite>
+    </group>
+  );
+});
