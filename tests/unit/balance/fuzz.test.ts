@@ -11,6 +11,23 @@ const nearPoint = fc.record({ x: num(-3, 3), z: num(-3, 3) });
 const anyPoint = fc.oneof(nearPoint, point);
 const thread = fc.constantFrom(...THREADS);
 
+const randomHull = fc.record({
+  lengthM: num(0.1, 50),
+  maxDiameterM: num(0.02, 20),
+  maxDiameterAtFraction: num(0.15, 0.85),
+  noseShape: opt(num(0.3, 0.7)),
+  tailShape: opt(num(0.5, 2)),
+  fins: opt(fc.record({
+    count: fc.integer({ min: 0, max: 8 }),
+    rootChordM: num(0, 50),
+    tipFraction: num(0, 1),
+    spanM: num(0, 20),
+    trailingEdgeFraction: num(0.3, 1),
+    firstAngleDeg: opt(num(-360, 360)),
+  }).map(({ tipFraction, ...fins }) => ({ ...fins, tipChordM: fins.rootChordM * tipFraction }))),
+  fabricArealDensityKgM2: opt(num(0, 5)),
+});
+
 const validInput: fc.Arbitrary<BalanceInput> = fc.record({
   envelope: fc.record({
     gasVolumeM3: fc.oneof(num(1e-6, 5), num(1e-300, 100_000)),
@@ -31,7 +48,7 @@ const validInput: fc.Arbitrary<BalanceInput> = fc.record({
       tetherSafetyFactor: opt(num(1, 1000)), clearanceCautionM: opt(num(0, 10)),
       screwProofStrengthPa: opt(num(1e-6, 5e9)),
     })),
-    hull: opt(fc.constantFrom(...Object.values(demoHulls))),
+    hull: opt(fc.oneof(fc.constantFrom(...Object.values(demoHulls)), randomHull)),
   }),
   gas: opt(fc.record({
     purity: opt(num(0, 1)), superheatK: opt(num(-30, 80)), fillFraction: opt(num(1e-9, 1)),
@@ -68,5 +85,5 @@ describe("evaluateBalance on random valid input", () => {
       expect(input).toEqual(frozen); // inputs are never mutated
       for (const flag of result.flags) expect(flag.message).not.toMatch(/NaN|Infinity/);
     }), { numRuns: 10_000 });
-  });
+  }, 120_000);
 });

@@ -1,3 +1,4 @@
+import fc from "fast-check";
 import { describe, expect, it } from "vitest";
 import {
   buildFinMesh,
@@ -106,6 +107,26 @@ describe("integrateHullProfile against buildHullMesh", () => {
       expect(Math.abs(area.centroid.x - profile.fabricMassCentre.x) / params.lengthM).toBeLessThan(0.005);
       expect(Math.abs(area.centroid.z - profile.fabricMassCentre.z) / params.lengthM).toBeLessThan(0.005);
     }
+  });
+
+  it("agrees within 0.5 % for any valid hull", () => {
+    const num = (min: number, max: number) => fc.double({ min, max, noNaN: true });
+    const hullArb = fc.record({
+      lengthM: num(0.1, 50), maxDiameterM: num(0.02, 20), maxDiameterAtFraction: num(0.15, 0.85),
+      noseShape: num(0.3, 0.7), tailShape: num(0.5, 2),
+      fins: fc.record({
+        count: fc.integer({ min: 0, max: 8 }), rootChordM: num(0, 5), tipChordM: num(0, 0), spanM: num(0, 5),
+        trailingEdgeFraction: num(0.3, 1),
+      }),
+    });
+    fc.assert(fc.property(hullArb, (params) => {
+      expect(hullParamsSchema.safeParse(params).success).toBe(true);
+      const profile = integrateHullProfile(params);
+      const hull = buildHullMesh(params, { segments: 64, rings: 200 });
+      expect(relative(meshVolumeAndCentroid(hull.positions, hull.indices).volumeM3, profile.gasVolumeM3)).toBeLessThan(0.005);
+      const all = mergeMeshes([hull, buildFinMesh(params)]);
+      expect(relative(meshSurfaceArea(all.positions, all.indices).areaM2, profile.surfaceAreaM2)).toBeLessThan(0.005);
+    }), { numRuns: 50 });
   });
 
   it("puts fins' fabric above the axis when there is one fin, on top", () => {
