@@ -3,6 +3,7 @@ import type { Attachment, PayloadCategory, PayloadShape, Role, SetupStatus, Thre
 // The invented demo scenario: a small workshop that sews three envelope models of its own naming,
 // a few customers who fly antennas, cameras and sensors under them, and a support desk.
 // Every name here is made up; e-mail addresses use the reserved .test domain.
+// Payload offsets hang each item below the mount's carriage, which drops about 5 cm under the rail.
 
 export const DEMO_PASSWORD = "trimrail-demo";
 
@@ -133,16 +134,16 @@ export interface DemoTemplate {
 }
 
 export const DEMO_TEMPLATES: readonly DemoTemplate[] = [
-  { id: "tpl-vhf-whip", name: "Quarter-wave VHF whip", category: "antenna", description: "2 m band whip on a small base, hanging tip down.", massKg: 0.085, shape: "rod", lengthM: 0.012, widthM: 0.012, heightM: 0.5, attachment: "1/4-20 UNC", dragAreaM2: 0.004, offsetXM: 0, offsetZM: -0.26 },
-  { id: "tpl-uhf-groundplane", name: "UHF ground-plane antenna", category: "antenna", description: "70 cm vertical with four radials.", massKg: 0.14, shape: "rod", lengthM: 0.3, widthM: 0.3, heightM: 0.2, attachment: "3/8-16 UNC", dragAreaM2: 0.006, offsetXM: 0, offsetZM: -0.12 },
-  { id: "tpl-action-cam", name: "Small action camera", category: "camera", description: "Fixed-lens camera in its frame, pointing down.", massKg: 0.125, shape: "box", lengthM: 0.065, widthM: 0.045, heightM: 0.05, attachment: "1/4-20 UNC", dragAreaM2: 0.0035, offsetXM: 0, offsetZM: -0.035 },
-  { id: "tpl-survey-cam", name: "Survey camera on a pendulum", category: "camera", description: "Compact camera hanging on a self-levelling pendulum frame.", massKg: 0.42, shape: "box", lengthM: 0.14, widthM: 0.1, heightM: 0.16, attachment: "3/8-16 UNC", dragAreaM2: 0.014, offsetXM: 0, offsetZM: -0.12 },
-  { id: "tpl-th-logger", name: "Temperature/humidity logger", category: "sensor", description: "Logger in a small ventilated shield.", massKg: 0.06, shape: "cylinder", lengthM: 0.05, widthM: 0.05, heightM: 0.09, attachment: "1/4-20 UNC", dragAreaM2: 0.0045, offsetXM: 0, offsetZM: -0.06 },
-  { id: "tpl-aq-pod", name: "Air-quality sensor pod", category: "sensor", description: "Particle and gas sensors with a small fan and battery.", massKg: 0.23, shape: "box", lengthM: 0.12, widthM: 0.08, heightM: 0.07, attachment: "strap", dragAreaM2: 0.0084, offsetXM: 0, offsetZM: -0.05 },
-  { id: "tpl-relay-box", name: "Low-power radio relay box", category: "radio", description: "Relay board, battery and a short stub antenna.", massKg: 0.19, shape: "box", lengthM: 0.1, widthM: 0.07, heightM: 0.04, attachment: "1/4-20 UNC", dragAreaM2: 0.004, offsetXM: 0, offsetZM: -0.03 },
-  { id: "tpl-gps-tracker", name: "Position tracker", category: "radio", description: "Satellite position tracker that reports over a radio link.", massKg: 0.045, shape: "box", lengthM: 0.06, widthM: 0.04, heightM: 0.02, attachment: "strap", dragAreaM2: 0.0012, offsetXM: 0, offsetZM: -0.02 },
-  { id: "tpl-strobe", name: "White strobe", category: "light", description: "Battery strobe, visible for several kilometres at night.", massKg: 0.055, shape: "cylinder", lengthM: 0.04, widthM: 0.04, heightM: 0.07, attachment: "1/4-20 UNC", dragAreaM2: 0.0028, offsetXM: 0, offsetZM: -0.04 },
-  { id: "tpl-marker-light", name: "Red marker light", category: "light", description: "Steady red light for night flying.", massKg: 0.035, shape: "cylinder", lengthM: 0.035, widthM: 0.035, heightM: 0.05, attachment: "1/4-20 UNC", dragAreaM2: 0.0018, offsetXM: 0, offsetZM: -0.03 },
+  { id: "tpl-vhf-whip", name: "Quarter-wave VHF whip", category: "antenna", description: "2 m band whip on a small base, hanging tip down.", massKg: 0.085, shape: "rod", lengthM: 0.012, widthM: 0.012, heightM: 0.5, attachment: "1/4-20 UNC", dragAreaM2: 0.004, offsetXM: 0, offsetZM: -0.3 },
+  { id: "tpl-uhf-groundplane", name: "UHF ground-plane antenna", category: "antenna", description: "70 cm vertical with four radials.", massKg: 0.14, shape: "rod", lengthM: 0.3, widthM: 0.3, heightM: 0.2, attachment: "3/8-16 UNC", dragAreaM2: 0.006, offsetXM: 0, offsetZM: -0.15 },
+  { id: "tpl-action-cam", name: "Small action camera", category: "camera", description: "Fixed-lens camera in its frame, pointing down.", massKg: 0.125, shape: "box", lengthM: 0.065, widthM: 0.045, heightM: 0.05, attachment: "1/4-20 UNC", dragAreaM2: 0.0035, offsetXM: 0, offsetZM: -0.075 },
+  { id: "tpl-survey-cam", name: "Survey camera on a pendulum", category: "camera", description: "Compact camera hanging on a self-levelling pendulum frame.", massKg: 0.42, shape: "box", lengthM: 0.14, widthM: 0.1, heightM: 0.16, attachment: "3/8-16 UNC", dragAreaM2: 0.014, offsetXM: 0, offsetZM: -0.13 },
+  { id: "tpl-th-logger", name: "Temperature/humidity logger", category: "sensor", description: "Logger in a small ventilated shield.", massKg: 0.06, shape: "cylinder", lengthM: 0.05, widthM: 0.05, heightM: 0.09, attachment: "1/4-20 UNC", dragAreaM2: 0.0045, offsetXM: 0, offsetZM: -0.095 },
+  { id: "tpl-aq-pod", name: "Air-quality sensor pod", category: "sensor", description: "Particle and gas sensors with a small fan and battery.", massKg: 0.23, shape: "box", lengthM: 0.12, widthM: 0.08, heightM: 0.07, attachment: "strap", dragAreaM2: 0.0084, offsetXM: 0, offsetZM: -0.085 },
+  { id: "tpl-relay-box", name: "Low-power radio relay box", category: "radio", description: "Relay board, battery and a short stub antenna.", massKg: 0.19, shape: "box", lengthM: 0.1, widthM: 0.07, heightM: 0.04, attachment: "1/4-20 UNC", dragAreaM2: 0.004, offsetXM: 0, offsetZM: -0.07 },
+  { id: "tpl-gps-tracker", name: "Position tracker", category: "radio", description: "Satellite position tracker that reports over a radio link.", massKg: 0.045, shape: "box", lengthM: 0.06, widthM: 0.04, heightM: 0.02, attachment: "strap", dragAreaM2: 0.0012, offsetXM: 0, offsetZM: -0.06 },
+  { id: "tpl-strobe", name: "White strobe", category: "light", description: "Battery strobe, visible for several kilometres at night.", massKg: 0.055, shape: "cylinder", lengthM: 0.04, widthM: 0.04, heightM: 0.07, attachment: "1/4-20 UNC", dragAreaM2: 0.0028, offsetXM: 0, offsetZM: -0.085 },
+  { id: "tpl-marker-light", name: "Red marker light", category: "light", description: "Steady red light for night flying.", massKg: 0.035, shape: "cylinder", lengthM: 0.035, widthM: 0.035, heightM: 0.05, attachment: "1/4-20 UNC", dragAreaM2: 0.0018, offsetXM: 0, offsetZM: -0.075 },
 ];
 
 export interface DemoSetupPayload {

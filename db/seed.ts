@@ -1,7 +1,6 @@
 import { hashPassword } from "better-auth/crypto";
 import { eq } from "drizzle-orm";
-import { deriveEnvelopeGeometry, demoHulls, evaluateBalance, type DemoHullName } from "@/lib/balance";
-import { worstFlagLevel } from "@/lib/setups/worst-flag";
+import { deriveEnvelopeGeometry, demoHulls, evaluateBalance, worstLevel, type DemoHullName } from "@/lib/balance";
 import { toBalanceInput, type SetupCatalogue } from "@/lib/setups/balance-input";
 import type { SetupDraft } from "@/lib/setups/setup-draft";
 import type { Database } from "./index";
@@ -149,7 +148,7 @@ export async function seedDemo(db: Database): Promise<SeedCounts> {
           tetherBreakingLoadN: DEMO_TETHER.tetherBreakingLoadN,
           status: s.status,
           resultJson: result,
-          worstFlag: worstFlagLevel(result.flags),
+          worstFlag: worstLevel(result.flags),
           cautionsAcknowledged: s.status !== "draft",
           submittedAt: s.status === "draft" ? null : new Date(at.getTime() - DAY_MS / 2),
           createdAt: new Date(at.getTime() - DAY_MS),

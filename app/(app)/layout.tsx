@@ -4,6 +4,7 @@ import { AppNav } from "@/components/shell/app-nav";
 import { navItemsFor } from "@/components/shell/nav-items";
 import { SignOutButton } from "@/components/shell/sign-out-button";
 import { Logo } from "@/components/ui/logo";
+import { QueryProvider } from "@/components/providers/query-provider";
 import { requirePageViewer } from "@/lib/auth/guard";
 
 export default async function AppLayout({ children }: { children: ReactNode }) {
@@ -22,7 +23,9 @@ export default async function AppLayout({ children }: { children: ReactNode }) {
           </div>
         </div>
       </header>
-      <main className="mx-auto max-w-7xl px-4 py-6">{children}</main>
+      <main className="mx-auto max-w-7xl px-4 py-6">
+        <QueryProvider>{children}</QueryProvider>
+      </main>
     </div>
   );
 }

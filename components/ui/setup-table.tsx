@@ -1,3 +1,5 @@
+import Link from "next/link";
+import type { ReactNode } from "react";
 import type { SetupListItem } from "@/db/queries/setups";
 import { FlagBadge } from "./flag-badge";
 
@@ -12,9 +14,13 @@ interface SetupTableProps {
   rows: SetupListItem[];
   showOwner?: boolean;
   testId?: string;
+  /** Where a row's name links to, if anywhere. */
+  hrefFor?: (row: SetupListItem) => string;
+  /** Extra controls at the end of each row. */
+  actionsFor?: (row: SetupListItem) => ReactNode;
 }
 
-export function SetupTable({ rows, showOwner = false, testId = "setup-table" }: SetupTableProps) {
+export function SetupTable({ rows, showOwner = false, testId = "setup-table", hrefFor, actionsFor }: SetupTableProps) {
   return (
     <table className="panel w-full border-separate border-spacing-0 text-sm" data-testid={testId}>
       <thead className="text-left text-muted">
@@ -25,17 +31,21 @@ export function SetupTable({ rows, showOwner = false, testId = "setup-table" }: 
           <th className="px-3 py-2 font-medium">Status</th>
           <th className="px-3 py-2 font-medium">Worst flag</th>
           <th className="px-3 py-2 font-medium">Last change</th>
+          {actionsFor && <th className="px-3 py-2 font-medium"><span className="sr-only">Actions</span></th>}
         </tr>
       </thead>
       <tbody>
         {rows.map((row) => (
           <tr key={row.id} className="border-t border-hairline" data-testid="setup-row">
-            <td className="border-t border-hairline px-3 py-2 font-medium">{row.name}</td>
+            <td className="border-t border-hairline px-3 py-2 font-medium">
+              {hrefFor ? <Link href={hrefFor(row)} className="text-accent underline-offset-2 hover:underline">{row.name}</Link> : row.name}
+            </td>
             {showOwner && <td className="border-t border-hairline px-3 py-2">{row.ownerName}</td>}
             <td className="border-t border-hairline px-3 py-2">{row.modelName}</td>
             <td className="border-t border-hairline px-3 py-2">{STATUS_LABEL[row.status]}</td>
             <td className="border-t border-hairline px-3 py-2">{row.worstFlag ? <FlagBadge level={row.worstFlag} /> : "not computed"}</td>
             <td className="figure border-t border-hairline px-3 py-2">{row.updatedAt.toISOString().slice(0, 10)}</td>
+            {actionsFor && <td className="border-t border-hairline px-3 py-2">{actionsFor(row)}</td>}
           </tr>
         ))}
       </tbody>

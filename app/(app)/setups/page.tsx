@@ -1,4 +1,7 @@
+import { listEnvelopeModels } from "@/db/queries/catalogue";
 import { listSetupsForOwner } from "@/db/queries/setups";
+import { NewSetupForm } from "@/components/setups/new-setup-form";
+import { SetupRowActions } from "@/components/setups/setup-row-actions";
 import { EmptyState } from "@/components/ui/empty-state";
 import { SetupTable } from "@/components/ui/setup-table";
 import { requirePageViewer } from "@/lib/auth/guard";
@@ -7,17 +10,20 @@ export const metadata = { title: "Setups" };
 
 export default async function SetupsPage() {
   const viewer = await requirePageViewer(undefined, "/setups");
-  const rows = await listSetupsForOwner({ ownerId: viewer.id });
+  const [rows, models] = await Promise.all([listSetupsForOwner({ ownerId: viewer.id }), listEnvelopeModels()]);
   return (
     <section className="space-y-4">
-      <h1 className="text-2xl">Setups</h1>
+      <div className="flex flex-wrap items-end justify-between gap-4">
+        <h1 className="text-2xl">Setups</h1>
+        <NewSetupForm models={models.filter((m) => m.active).map((m) => ({ id: m.id, name: m.name, gasVolumeM3: m.gasVolumeM3 }))} />
+      </div>
       {rows.length === 0 ? (
         <EmptyState title="No setups yet">
           A setup is one payload configuration on one envelope: the mount&apos;s place on the belly rail, the payloads, the
-          site, the gas and the tether. Your setups will be listed here with their status and worst flag.
+          site, the gas and the tether. Start one with “New setup”; it will be listed here with its status and worst flag.
         </EmptyState>
       ) : (
-        <SetupTable rows={rows} />
+        <SetupTable rows={rows} hrefFor={(row) => `/setups/${row.id}`} actionsFor={(row) => <SetupRowActions id={row.id} name={row.name} />} />
       )}
     </section>
   );

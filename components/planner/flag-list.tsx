@@ -1,0 +1,22 @@
+"use client";
+import type { Flag } from "@/lib/balance";
+import { FlagIcon } from "@/components/ui/flag-badge";
+
+const ORDER = { stop: 0, caution: 1, ok: 2 } as const;
+
+/** Every flag with its icon, its word and its plain message; the worst first. */
+export function FlagList({ flags }: { flags: readonly Flag[] }) {
+  const sorted = [...flags].sort((a, b) => ORDER[a.level] - ORDER[b.level]);
+  return (
+    <ul className="space-y-1.5" data-testid="flag-list">
+      {sorted.map((flag, i) => (
+        <li key={`${flag.code}-${flag.payloadIndex ?? ""}-${i}`} className="flex gap-2 text-sm" data-flag-code={flag.code} data-flag-level={flag.level}>
+          <span className="mt-0.5 shrink-0"><FlagIcon level={flag.level} /></span>
+          <span>
+            <span className="font-medium">{flag.level}</span> · {flag.message}
+          </span>
+        </li>
+      ))}
+    </ul>
+  );
+}

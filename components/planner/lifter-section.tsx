@@ -1,0 +1,59 @@
+"use client";
+import { usePlanner, usePlannerActions } from "./planner-context";
+import { Section } from "./section";
+
+const select = "mt-0.5 w-full rounded border border-hairline bg-white px-2 py-1";
+
+export function LifterSection() {
+  const catalogue = usePlanner((s) => s.catalogue);
+  const modelId = usePlanner((s) => s.draft.modelId);
+  const unitId = usePlanner((s) => s.draft.unitId);
+  const mountId = usePlanner((s) => s.draft.mountId);
+  const name = usePlanner((s) => s.draft.name);
+  const actions = usePlannerActions();
+  const units = catalogue.units.filter((u) => u.modelId === modelId);
+  return (
+    <Section title="Lifter" testId="section-lifter">
+      <div className="grid gap-3 sm:grid-cols-2">
+        <label className="block text-sm text-muted sm:col-span-2">
+          Setup name
+          <input
+            className={select}
+            defaultValue={name}
+            maxLength={120}
+            onBlur={(e) => {
+              const value = e.target.value.trim();
+              if (value) actions.setName(value);
+              else e.target.value = name;
+            }}
+          />
+        </label>
+        <label className="block text-sm text-muted">
+          Envelope model
+          <select className={select} value={modelId} onChange={(e) => actions.setModel(e.target.value)} data-testid="model-select">
+            {catalogue.models.map((m) => (
+              <option key={m.id} value={m.id}>{m.name} ({m.gasVolumeM3.toFixed(2)} m³)</option>
+            ))}
+          </select>
+        </label>
+        <label className="block text-sm text-muted">
+          Serial unit
+          <select className={select} value={unitId ?? ""} onChange={(e) => actions.setUnit(e.target.value || null)} data-testid="unit-select">
+            <option value="">none: the model&apos;s nominal mass</option>
+            {units.map((u) => (
+              <option key={u.id} value={u.id}>{u.serial} (weighed {(u.measuredMassKg * 1000).toFixed(0)} g)</option>
+            ))}
+          </select>
+        </label>
+        <label className="block text-sm text-muted sm:col-span-2">
+          Mount
+          <select className={select} value={mountId} onChange={(e) => actions.setMountId(e.target.value)} data-testid="mount-select">
+            {catalogue.mounts.map((m) => (
+              <option key={m.id} value={m.id}>{m.name}, rated {m.ratedLoadKg} kg</option>
+            ))}
+          </select>
+        </label>
+      </div>
+    </Section>
+  );
+}

@@ -1,0 +1,142 @@
+"use client";
+import { zodResolver } from "@hookform/resolvers/zod";
+import { useForm } from "react-hook-form";
+import { z } from "zod";
+import { ATTACHMENTS, PAYLOAD_CATEGORIES, PAYLOAD_SHAPES, type UnitSystem } from "@/db/schema";
+import { setupPayloadDraftSchema, type SetupPayloadDraft } from "@/lib/setups/setup-draft";
+import { fromDisplay, toDisplay, unitOf } from "@/lib/units";
+import type { PlannerAdapter } from "./types";
+
+// The form holds figures in the person's units; they become SI (and pass the setup schema) on submit.
+const displaySchema = z.object({
+  name: z.string().trim().min(1, "Give it a name.").max(120, "At most 120 characters."),
+  category: z.enum(PAYLOAD_CATEGORIES),
+  shape: z.enum(PAYLOAD_SHAPES),
+  mass: z.coerce.number<string>("Enter a number.").positive("Must be more than 0."),
+  length: z.coerce.number<string>("Enter a number.").positive("Must be more than 0."),
+  width: z.coerce.number<string>("Enter a number.").positive("Must be more than 0."),
+  height: z.coerce.number<string>("Enter a number.").positive("Must be more than 0."),
+  attachment: z.enum(ATTACHMENTS),
+  adapterId: z.string(),
+  offsetX: z.coerce.number<string>("Enter a number."),
+  offsetZ: z.coerce.number<string>("Enter a number."),
+  dragArea: z.coerce.number<string>("Enter a number.").min(0, "Cannot be negative."),
+});
+type DisplayValues = z.input<typeof displaySchema>;
+
+function toForm(p: SetupPayloadDraft, units: UnitSystem): DisplayValues {
+  const f = (q: Parameters<typeof toDisplay>[0], v: number) => String(Number(toDisplay(q, v, units).toFixed(3)));
+  return {
+    name: p.name,
+    category: p.category,
+    shape: p.shape,
+    mass: f("mass", p.massKg),
+    length: f("smallLength", p.lengthM),
+    width: f("smallLength", p.widthM),
+    height: f("smallLength", p.heightM),
+    attachment: p.attachment,
+    adapterId: p.adapterId ?? "",
+    offsetX: f("smallLength", p.offsetXM),
+    offsetZ: f("smallLength", p.offsetZM),
+    dragArea: f("area", p.dragAreaM2),
+  };
+}
+
+export const BLANK_PAYLOAD: SetupPayloadDraft = {
+  templateId: null,
+  name: "",
+  category: "other",
+  massKg: 0.1,
+  shape: "box",
+  lengthM: 0.08,
+  widthM: 0.06,
+  heightM: 0.05,
+  attachment: "1/4-20 UNC",
+  adapterId: null,
+  dragAreaM2: 0.003,
+  offsetXM: 0,
+  offsetZM: -0.075,
+};
+
+interface PayloadFormProps {
+  initial: SetupPayloadDraft;
+  units: UnitSystem;
+  adapters: PlannerAdapter[];
+  submitLabel: string;
+  onSubmit: (payload: SetupPayloadDraft) => void;
+  onCancel: () => void;
+}
+
+export function PayloadForm({ initial, units, adapters, submitLabel, onSubmit, onCancel }: PayloadFormProps) {
+  const {
+    register,
+    handleSubmit,
+    setError,
+    formState: { errors },
+  } = useForm<DisplayValues, unknown, z.output<typeof displaySchema>>({ resolver: zodResolver(displaySchema), defaultValues: toForm(initial, units) });
+
+  const submit = handleSubmit((v) => {
+    const candidate: SetupPayloadDraft = {
+      templateId: initial.templateId,
+      name: v.name,
+      category: v.category,
+      shape: v.shape,
+      massKg: fromDisplay("mass", v.mass, units),
+      lengthM: fromDisplay("smallLength", v.length, units),
+      widthM: fromDisplay("smallLength", v.width, units),
+      heightM: fromDisplay("smallLength", v.height, units),
+      attachment: v.attachment,
+      adapterId: v.adapterId || null,
+      offsetXM: fromDisplay("smallLength", v.offsetX, units),
+      offsetZM: fromDisplay("smallLength", v.offsetZ, units),
+      dragAreaM2: fromDisplay("area", v.dragArea, units),
+    };
+    const checked = setupPayloadDraftSchema.safeParse(candidate);
+    if (!checked.success) {
+      // Map the SI field names back onto the form's fields so the message lands beside the input.
+      const field: Record<string, keyof DisplayValues> = { massKg: "mass", lengthM: "length", widthM: "width", heightM: "height", offsetXM: "offsetX", offsetZM: "offsetZ", dragAreaM2: "dragArea", name: "name" };
+      for (const issue of checked.error.issues) {
+        const name = field[String(issue.path[0])] ?? "name";
+        setError(name, { message: issue.message });
+      }
+      return;
+    }
+    onSubmit(checked.data);
+  });
+
+  const input = "mt-0.5 w-full rounded border border-hairline bg-white px-2 py-1";
+  const err = (key: keyof DisplayValues) =>
+    errors[key] ? <span className="text-xs text-flag-stop" role="alert">{errors[key]?.message}</span> : null;
+  const small = unitOf("smallLength", units);
+  return (
+    <form onSubmit={submit} noValidate className="mt-3 grid grid-cols-2 gap-3 rounded border border-hairline bg-paper p-3 sm:grid-cols-4" data-testid="payload-form">
+      <label className="col-span-2 block text-sm text-muted">Name<input {...register("name")} className={input} />{err("name")}</label>
+      <label className="block text-sm text-muted">Category
+        <select {...register("category")} className={input}>{PAYLOAD_CATEGORIES.map((c) => <option key={c}>{c}</option>)}</select>
+      </label>
+      <label className="block text-sm text-muted">Shape
+        <select {...register("shape")} className={input}>{PAYLOAD_SHAPES.map((c) => <option key={c}>{c}</option>)}</select>
+      </label>
+      <label className="block text-sm text-muted">Mass ({unitOf("mass", units)})<input {...register("mass")} inputMode="decimal" className={input} data-testid="payload-mass" />{err("mass")}</label>
+      <label className="block text-sm text-muted">Length ({small})<input {...register("length")} inputMode="decimal" className={input} />{err("length")}</label>
+      <label className="block text-sm text-muted">Width ({small})<input {...register("width")} inputMode="decimal" className={input} />{err("width")}</label>
+      <label className="block text-sm text-muted">Height ({small})<input {...register("height")} inputMode="decimal" className={input} />{err("height")}</label>
+      <label className="block text-sm text-muted">Attachment
+        <select {...register("attachment")} className={input}>{ATTACHMENTS.map((c) => <option key={c}>{c}</option>)}</select>
+      </label>
+      <label className="block text-sm text-muted">Adapter
+        <select {...register("adapterId")} className={input}>
+          <option value="">none</option>
+          {adapters.map((a) => <option key={a.id} value={a.id}>{a.name}</option>)}
+        </select>
+      </label>
+      <label className="block text-sm text-muted">Offset fore/aft ({small}, aft +)<input {...register("offsetX")} inputMode="decimal" className={input} />{err("offsetX")}</label>
+      <label className="block text-sm text-muted">Offset up/down ({small}, below −)<input {...register("offsetZ")} inputMode="decimal" className={input} />{err("offsetZ")}</label>
+      <label className="block text-sm text-muted">Drag area ({unitOf("area", units)})<input {...register("dragArea")} inputMode="decimal" className={input} />{err("dragArea")}</label>
+      <div className="col-span-2 flex items-end gap-2 sm:col-span-3">
+        <button type="submit" className="rounded bg-accent px-3 py-1.5 text-sm text-white">{submitLabel}</button>
+        <button type="button" className="rounded border border-hairline px-3 py-1.5 text-sm" onClick={onCancel}>Cancel</button>
+      </div>
+    </form>
+  );
+}

@@ -1,0 +1,87 @@
+"use client";
+import { useMemo } from "react";
+import { useShallow } from "zustand/react/shallow";
+import { LifterCanvas, type ScenePayload } from "@/components/scene";
+import { formatQuantity } from "@/lib/units";
+import { usePlanner, usePlannerActions } from "./planner-context";
+import { displayedTrimDeg, modelOf } from "./store";
+import type { TrimCase } from "./types";
+
+const CASE_WORDS: Record<TrimCase, string> = { calm: "Calm", wind: "Wind", gust: "Gust" };
+
+/** Maps the planner store onto the scene's props; the scene itself only draws. */
+export function PlannerScene() {
+  const model = usePlanner((s) => modelOf(s.catalogue, s.draft.modelId));
+  const mountX = usePlanner((s) => s.draft.mountPositionXM);
+  const payloadDrafts = usePlanner((s) => s.draft.payloads);
+  const flags = usePlanner((s) => s.result.flags);
+  const centreOfMass = usePlanner((s) => s.result.centreOfMass);
+  const calmTrimDeg = usePlanner((s) => s.result.calmTrimDeg);
+  const trimDeg = usePlanner((s) => displayedTrimDeg(s));
+  const trimCase = usePlanner((s) => s.trimCase);
+  const units = usePlanner((s) => s.unitSystem);
+  const [windMS, tetherAngleDeg] = usePlanner(
+    useShallow((s) => {
+      const c = s.trimCase === "wind" ? s.result.wind : s.trimCase === "gust" ? s.result.gust : null;
+      return [c?.speedMS ?? 0, c?.tetherAngleDeg ?? 0] as const;
+    }),
+  );
+  const { setMountPosition, setTrimCase } = usePlannerActions();
+  const hull = model.hullJson as { lengthM: number; maxDiameterM: number };
+
+  const payloads = useMemo<ScenePayload[]>(
+    () =>
+      payloadDrafts.map((p, i) => {
+        const own = flags.filter((f) => f.payloadIndex === i);
+        const level = own.some((f) => f.level === "stop") ? "stop" : own.some((f) => f.level === "caution") ? "caution" : "ok";
+        return { key: `${i}-${p.name}`, label: p.name, shape: p.shape, lengthM: p.lengthM, widthM: p.widthM, heightM: p.heightM, offset: { x: p.offsetXM, z: p.offsetZM }, level };
+      }),
+    [payloadDrafts, flags],
+  );
+
+  const trimWords = (deg: number | null) => (deg === null ? "has no stable trim" : `trims ${Math.abs(deg).toFixed(1)}° ${deg >= 0 ? "nose up" : "nose down"}`);
+  const summary = `${model.name}: in calm air it ${trimWords(calmTrimDeg)}; shown ${CASE_WORDS[trimCase].toLowerCase()} case at ${trimDeg.toFixed(1)}°. Mount ${formatQuantity("length", mountX, units, 3)} from the nose; centre of mass ${formatQuantity("smallLength", Math.abs(centreOfMass.x - model.buoyancyCentreXM), units)} ${centreOfMass.x >= model.buoyancyCentreXM ? "aft of" : "forward of"} the centre of buoyancy.`;
+
+  return (
+    <div className="space-y-2">
+      <LifterCanvas
+        glbUrl={model.glbPath}
+        hullLengthM={hull.lengthM}
+        hullMaxDiameterM={hull.maxDiameterM}
+        rail={{ startX: model.railStartXM, endX: model.railEndXM, z: model.railZM }}
+        railTabCount={model.railTabCount}
+        mountX={mountX}
+        payloads={payloads}
+        buoyancyCentre={{ x: model.buoyancyCentreXM, z: model.buoyancyCentreZM }}
+        centreOfMass={centreOfMass}
+        tetherPoint={{ x: model.tetherPointXM, z: model.tetherPointZM }}
+        trimDeg={trimDeg}
+        tetherAngleDeg={tetherAngleDeg}
+        windMS={windMS}
+        windLabel={windMS > 0 ? formatQuantity("speed", windMS, units) : undefined}
+        onMountDrag={setMountPosition}
+        summary={summary}
+        mountSelected
+      />
+      <div className="flex flex-wrap items-center gap-2 text-sm">
+        <span className="text-muted">Show the lifter in:</span>
+        {(Object.keys(CASE_WORDS) as TrimCase[]).map((c) => (
+          <button
+            key={c}
+            type="button"
+            aria-pressed={trimCase === c}
+            onClick={() => setTrimCase(c)}
+            className={`rounded px-2 py-1 ${trimCase === c ? "bg-ink text-white" : "border border-hairline bg-white"}`}
+            data-testid={`trim-case-${c}`}
+          >
+            {CASE_WORDS[c]}
+          </button>
+        ))}
+        <span className="figure ml-auto" data-testid="scene-trim">
+          Trim {trimDeg.toFixed(1)}°
+        </span>
+      </div>
+      <p className="sr-only" data-testid="scene-summary">{summary}</p>
+    </div>
+  );
+}

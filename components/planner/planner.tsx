@@ -1,0 +1,33 @@
+"use client";
+import { BalancePanel } from "./balance-panel";
+import { LifterSection } from "./lifter-section";
+import { MountControls } from "./mount-controls";
+import { PayloadsSection } from "./payloads-section";
+import { PlannerProvider } from "./planner-context";
+import { PlannerScene } from "./planner-scene";
+import { PlannerToolbar } from "./planner-toolbar";
+import { GasSection, SiteSection, TetherSection } from "./site-gas-tether-sections";
+import type { PlannerData } from "./types";
+
+/** The Planner: the 3D view as the main area, the balance panel beside it (below on narrow screens). */
+export function Planner({ data }: { data: PlannerData }) {
+  return (
+    <PlannerProvider data={data}>
+      <div className="space-y-4" data-testid="planner">
+        <PlannerToolbar />
+        <div className="grid gap-4 lg:grid-cols-[minmax(0,1fr)_24rem]">
+          <div className="space-y-4">
+            <PlannerScene />
+            <MountControls />
+            <LifterSection />
+            <SiteSection />
+            <GasSection />
+            <TetherSection />
+            <PayloadsSection />
+          </div>
+          <BalancePanel />
+        </div>
+      </div>
+    </PlannerProvider>
+  );
+}

@@ -1,0 +1,88 @@
+"use client";
+import { usePlanner, usePlannerActions } from "./planner-context";
+import { QuantityInput } from "./quantity-input";
+import { Section } from "./section";
+
+export function SiteSection() {
+  const site = usePlanner((s) => s.draft.site);
+  const units = usePlanner((s) => s.unitSystem);
+  const { setSite } = usePlannerActions();
+  return (
+    <Section title="Site" testId="section-site">
+      <div className="grid grid-cols-2 gap-3 sm:grid-cols-3">
+        <label className="col-span-2 block text-sm text-muted sm:col-span-3">
+          Site name
+          <input
+            className="mt-0.5 w-full rounded border border-hairline bg-white px-2 py-1"
+            defaultValue={site.siteName}
+            maxLength={120}
+            onBlur={(e) => setSite({ siteName: e.target.value.trim() })}
+          />
+        </label>
+        <QuantityInput label="Altitude above sea level" quantity="length" valueSI={site.altitudeM} unitSystem={units} minSI={-500} maxSI={6000} onCommit={(v) => v !== null && setSite({ altitudeM: v })} testId="altitude-input" />
+        <QuantityInput label="Air temperature" quantity="temperature" valueSI={site.temperatureC} unitSystem={units} minSI={-60} maxSI={55} optional placeholder="standard" onCommit={(v) => setSite({ temperatureC: v })} testId="temperature-input" />
+        <QuantityInput label="Wind" quantity="speed" valueSI={site.windMS} unitSystem={units} minSI={0} maxSI={40} onCommit={(v) => v !== null && setSite({ windMS: v })} testId="wind-input" />
+        <QuantityInput label="Gusts" quantity="speed" valueSI={site.gustMS} unitSystem={units} minSI={0} maxSI={60} optional placeholder="none" onCommit={(v) => setSite({ gustMS: v })} testId="gust-input" />
+      </div>
+    </Section>
+  );
+}
+
+export function GasSection() {
+  const gas = usePlanner((s) => s.draft.gas);
+  const units = usePlanner((s) => s.unitSystem);
+  const { setGas } = usePlannerActions();
+  const percentField = (label: string, value: number, min: number, key: "purity" | "fillFraction", testId: string) => (
+    <label className="block text-sm text-muted">
+      {label}
+      <span className="mt-0.5 flex items-center gap-1">
+        <input
+          type="number"
+          step="0.5"
+          min={min * 100}
+          max={100}
+          defaultValue={Number((value * 100).toFixed(1))}
+          data-testid={testId}
+          className="figure w-24 rounded border border-hairline bg-white px-2 py-1"
+          onBlur={(e) => {
+            const v = Number(e.target.value);
+            if (Number.isFinite(v) && v >= min * 100 && v <= 100) setGas({ [key]: v / 100 });
+            else e.target.value = String(Number((value * 100).toFixed(1)));
+          }}
+        />
+        <span className="unit">%</span>
+      </span>
+    </label>
+  );
+  return (
+    <Section title="Gas" testId="section-gas" defaultOpen={false}>
+      <div className="grid grid-cols-2 gap-3 sm:grid-cols-3">
+        {percentField("Helium purity (rest is air)", gas.purity, 0.5, "purity", "purity-input")}
+        {percentField("Fill", gas.fillFraction, 0.05, "fillFraction", "fill-input")}
+        <QuantityInput label="Superheat (gas warmer than air)" quantity="temperatureDifference" valueSI={gas.superheatK} unitSystem={units} minSI={-20} maxSI={40} onCommit={(v) => v !== null && setGas({ superheatK: v })} />
+      </div>
+    </Section>
+  );
+}
+
+export function TetherSection() {
+  const tether = usePlanner((s) => s.draft.tether);
+  const units = usePlanner((s) => s.unitSystem);
+  const { setTether } = usePlannerActions();
+  const current = tether ?? { massPerMetreKg: 0.0012, lengthOutM: 30, breakingLoadN: 900 };
+  return (
+    <Section title="Tether" testId="section-tether" defaultOpen={false}>
+      <label className="flex items-center gap-2 text-sm">
+        <input type="checkbox" checked={tether !== null} onChange={(e) => setTether(e.target.checked ? current : null)} />
+        Include the tether line in the check
+      </label>
+      {tether && (
+        <div className="mt-3 grid grid-cols-2 gap-3 sm:grid-cols-3">
+          <QuantityInput label="Line mass" quantity="massPerLength" valueSI={tether.massPerMetreKg} unitSystem={units} minSI={0.00001} maxSI={1} onCommit={(v) => v !== null && setTether({ ...tether, massPerMetreKg: v })} />
+          <QuantityInput label="Line out" quantity="length" valueSI={tether.lengthOutM} unitSystem={units} minSI={0} maxSI={3000} onCommit={(v) => v !== null && setTether({ ...tether, lengthOutM: v })} testId="tether-length-input" />
+          <QuantityInput label="Breaking load" quantity="force" valueSI={tether.breakingLoadN} unitSystem={units} minSI={1} maxSI={1e6} onCommit={(v) => v !== null && setTether({ ...tether, breakingLoadN: v })} />
+        </div>
+      )}
+    </Section>
+  );
+}

@@ -1,0 +1,131 @@
+import { createStore, type StoreApi } from "zustand/vanilla";
+import type { SetupStatus, UnitSystem } from "@/db/schema";
+import { evaluateBalance, solveLevelTrimPositionX, type BalanceInput, type BalanceResult } from "@/lib/balance";
+import { toBalanceInput } from "@/lib/setups/balance-input";
+import type { SetupDraft, SetupPayloadDraft } from "@/lib/setups/setup-draft";
+import type { PlannerCatalogue, PlannerData, PlannerModel, TrimCase } from "./types";
+
+export interface PlannerActions {
+  setMountPosition: (positionXM: number) => void;
+  nudgeMount: (deltaM: number) => void;
+  levelIt: () => { ok: true; positionXM: number } | { ok: false; reason: string };
+  setName: (name: string) => void;
+  setModel: (modelId: string) => void;
+  setUnit: (unitId: string | null) => void;
+  setMountId: (mountId: string) => void;
+  setSite: (patch: Partial<SetupDraft["site"]>) => void;
+  setGas: (patch: Partial<SetupDraft["gas"]>) => void;
+  setTether: (tether: SetupDraft["tether"]) => void;
+  addPayload: (payload: SetupPayloadDraft) => void;
+  updatePayload: (index: number, payload: SetupPayloadDraft) => void;
+  removePayload: (index: number) => void;
+  setTrimCase: (trimCase: TrimCase) => void;
+  setUnitSystem: (unitSystem: UnitSystem) => void;
+  markSaved: (saved: { version: number; status: SetupStatus }) => void;
+}
+
+export interface PlannerState extends PlannerData {
+  /** The draft as last saved, to tell whether there is anything to save. */
+  savedDraft: SetupDraft;
+  input: BalanceInput;
+  result: BalanceResult;
+  trimCase: TrimCase;
+  /** performance.now() of the last edit, so the panel can measure edit-to-paint time. */
+  lastEditAtMs: number;
+  actions: PlannerActions;
+}
+
+export type PlannerStore = StoreApi<PlannerState>;
+
+export function modelOf(catalogue: PlannerCatalogue, modelId: string): PlannerModel {
+  return catalogue.models.find((m) => m.id === modelId) ?? catalogue.models[0];
+}
+
+/** The engine's input for a draft, from the catalogue the page was given. */
+export function inputFor(draft: SetupDraft, catalogue: PlannerCatalogue): BalanceInput {
+  const model = modelOf(catalogue, draft.modelId);
+  const unit = catalogue.units.find((u) => u.id === draft.unitId) ?? null;
+  const mount = catalogue.mounts.find((m) => m.id === draft.mountId) ?? catalogue.mounts[0];
+  const adaptersById = Object.fromEntries(catalogue.adapters.map((a) => [a.id, a]));
+  return toBalanceInput(draft, { model, unit, mount, adaptersById });
+}
+
+const now = (): number => (typeof performance === "undefined" ? 0 : performance.now());
+
+export function createPlannerStore(data: PlannerData): PlannerStore {
+  return createStore<PlannerState>()((set, get) => {
+    // Every edit goes through here: the engine runs once per change, in the same tick.
+    const withDraft = (draft: SetupDraft): Partial<PlannerState> => {
+      const input = inputFor(draft, get().catalogue);
+      return { draft, input, result: evaluateBalance(input), lastEditAtMs: now() };
+    };
+    const edit = (change: (draft: SetupDraft) => SetupDraft) => set(withDraft(change(get().draft)));
+
+    const initialInput = inputFor(data.draft, data.catalogue);
+    return {
+      ...data,
+      savedDraft: data.draft,
+      input: initialInput,
+      result: evaluateBalance(initialInput),
+      trimCase: data.draft.site.windMS > 0 ? "wind" : "calm",
+      lastEditAtMs: 0,
+      actions: {
+        setMountPosition: (positionXM) => {
+          if (positionXM === get().draft.mountPositionXM || !Number.isFinite(positionXM)) return;
+          edit((d) => ({ ...d, mountPositionXM: positionXM }));
+        },
+        nudgeMount: (deltaM) => {
+          const { draft, catalogue } = get();
+          const model = modelOf(catalogue, draft.modelId);
+          const next = Math.min(model.railEndXM, Math.max(model.railStartXM, draft.mountPositionXM + deltaM));
+          get().actions.setMountPosition(next);
+        },
+        levelIt: () => {
+          const { input, catalogue, draft } = get();
+          const solution = solveLevelTrimPositionX(input, 0);
+          if (!solution) return { ok: false, reason: "No mount position levels it: it needs free lift and a stable trim first." };
+          const model = modelOf(catalogue, draft.modelId);
+          if (!solution.withinRail) {
+            return { ok: false, reason: `Level trim needs the mount at ${solution.positionX.toFixed(3)} m, off the rail (${model.railStartXM.toFixed(2)}–${model.railEndXM.toFixed(2)} m).` };
+          }
+          get().actions.setMountPosition(solution.positionX);
+          return { ok: true, positionXM: solution.positionX };
+        },
+        setName: (name) => edit((d) => ({ ...d, name })),
+        setModel: (modelId) =>
+          edit((d) => {
+            const model = modelOf(get().catalogue, modelId);
+            const unitStays = get().catalogue.units.some((u) => u.id === d.unitId && u.modelId === modelId);
+            // Keep the mount where it was along the rail, in proportion, on the new model's rail.
+            const old = modelOf(get().catalogue, d.modelId);
+            const fraction = (d.mountPositionXM - old.railStartXM) / Math.max(1e-9, old.railEndXM - old.railStartXM);
+            const clamped = Math.min(1, Math.max(0, fraction));
+            return {
+              ...d,
+              modelId,
+              unitId: unitStays ? d.unitId : null,
+              mountPositionXM: model.railStartXM + clamped * (model.railEndXM - model.railStartXM),
+            };
+          }),
+        setUnit: (unitId) => edit((d) => ({ ...d, unitId })),
+        setMountId: (mountId) => edit((d) => ({ ...d, mountId })),
+        setSite: (patch) => edit((d) => ({ ...d, site: { ...d.site, ...patch } })),
+        setGas: (patch) => edit((d) => ({ ...d, gas: { ...d.gas, ...patch } })),
+        setTether: (tether) => edit((d) => ({ ...d, tether })),
+        addPayload: (payload) => edit((d) => ({ ...d, payloads: [...d.payloads, payload] })),
+        updatePayload: (index, payload) => edit((d) => ({ ...d, payloads: d.payloads.map((p, i) => (i === index ? payload : p)) })),
+        removePayload: (index) => edit((d) => ({ ...d, payloads: d.payloads.filter((_, i) => i !== index) })),
+        setTrimCase: (trimCase) => set({ trimCase }),
+        setUnitSystem: (unitSystem) => set({ unitSystem }),
+        markSaved: ({ version, status }) => set({ version, status, savedDraft: get().draft }),
+      },
+    };
+  });
+}
+
+/** The trim the scene shows for the chosen case, falling back to calm when that case has none. */
+export function displayedTrimDeg(state: Pick<PlannerState, "result" | "trimCase">): number {
+  const { result, trimCase } = state;
+  const windCase = trimCase === "wind" ? result.wind : trimCase === "gust" ? result.gust : null;
+  return windCase?.trimDeg ?? result.calmTrimDeg ?? 0;
+}

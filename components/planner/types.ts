@@ -1,0 +1,47 @@
+import type { SetupStatus, UnitSystem } from "@/db/schema";
+import type { AdapterSpec, ModelSpec, MountSpec } from "@/lib/setups/balance-input";
+import type { SetupDraft, SetupPayloadDraft } from "@/lib/setups/setup-draft";
+
+// Plain, serialisable catalogue records the server page hands to the Planner.
+export interface PlannerModel extends ModelSpec {
+  id: string;
+  name: string;
+  slug: string;
+  glbPath: string;
+  railTabCount: number;
+}
+export interface PlannerUnit {
+  id: string;
+  modelId: string;
+  serial: string;
+  measuredMassKg: number;
+  measuredGrossLiftKg: number;
+}
+export interface PlannerMount extends MountSpec {
+  id: string;
+  name: string;
+}
+export interface PlannerAdapter extends AdapterSpec {
+  id: string;
+  name: string;
+}
+export type PlannerTemplate = Omit<SetupPayloadDraft, "templateId" | "adapterId"> & { id: string; description: string };
+
+export interface PlannerCatalogue {
+  models: PlannerModel[];
+  units: PlannerUnit[];
+  mounts: PlannerMount[];
+  adapters: PlannerAdapter[];
+  templates: PlannerTemplate[];
+}
+
+export interface PlannerData {
+  setupId: string;
+  version: number;
+  status: SetupStatus;
+  draft: SetupDraft;
+  catalogue: PlannerCatalogue;
+  unitSystem: UnitSystem;
+}
+
+export type TrimCase = "calm" | "wind" | "gust";

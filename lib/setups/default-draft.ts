@@ -1,0 +1,24 @@
+import type { SetupDraft } from "./setup-draft";
+
+interface ModelForDefaults {
+  id: string;
+  name: string;
+  railStartXM: number;
+  railEndXM: number;
+}
+
+// A new setup starts as an empty mount in the middle of the rail at a sea-level site in a light
+// breeze, with a light braided line: a neutral start the customer edits.
+export function defaultDraft(model: ModelForDefaults, mountId: string, name?: string): SetupDraft {
+  return {
+    name: name ?? `New setup on ${model.name}`,
+    modelId: model.id,
+    unitId: null,
+    mountId,
+    mountPositionXM: (model.railStartXM + model.railEndXM) / 2,
+    site: { siteName: "", altitudeM: 0, temperatureC: null, pressurePa: null, windMS: 3, gustMS: 6 },
+    gas: { purity: 0.98, superheatK: 0, fillFraction: 1 },
+    tether: { massPerMetreKg: 0.0012, lengthOutM: 30, breakingLoadN: 900 },
+    payloads: [],
+  };
+}
