@@ -35,7 +35,7 @@ export function sceneScale(hullLengthM: number, hullMaxDiameterM: number, tether
   const target: [number, number, number] = [0.5 * lengthM, targetY, 0];
   return {
     lengthM,
-    groundY: tether.z - 1.4 * lengthM,
+    groundY: tether.z - 1.8 * lengthM,
     target,
     cameraPosition: [target[0] + 0.55 * lengthM, targetY + 0.35 * lengthM, 2.4 * lengthM],
     minDistanceM: 0.5 * lengthM,

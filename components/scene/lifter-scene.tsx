@@ -55,11 +55,11 @@ const Lifter = memo(function Lifter(props: LifterProps) {
   const tetherWorld = useMemo(() => [tetherPoint.x, tetherPoint.z, 0] as [number, number, number], [tetherPoint.x, tetherPoint.z]);
   const buoyancyWorld = useMemo(
     () => pitchedWorldPoint(buoyancyCentre, tetherPoint, trimDeg),
-    [buoyancyCentre.x, buoyancyCentre.z, tetherPoint.x, tetherPoint.z, trimDeg], // eslint-disable-line react-hooks/exhaustive-deps
+    [buoyancyCentre.x, buoyancyCentre.z, tetherPoint.x, tetherPoint.z, trimDeg],
   );
   const massWorld = useMemo(
     () => (centreOfMass ? pitchedWorldPoint(centreOfMass, tetherPoint, trimDeg) : null),
-    [centreOfMass?.x, centreOfMass?.z, tetherPoint.x, tetherPoint.z, trimDeg], // eslint-disable-line react-hooks/exhaustive-deps
+    [centreOfMass?.x, centreOfMass?.z, tetherPoint.x, tetherPoint.z, trimDeg],
   );
   const guideToY = tetherPoint.z - 0.12 * unitM;
   const guideFromY = 0.5 * hullMaxDiameterM + 0.12 * unitM;
@@ -71,10 +71,12 @@ const Lifter = memo(function Lifter(props: LifterProps) {
   return (
     <>
       <color attach="background" args={[PAPER]} />
+      {/* Fog into the paper colour hides the ground's edge at any zoom. */}
+      <fog attach="fog" args={[PAPER, 5 * unitM, 14 * unitM]} />
       <hemisphereLight args={["#ffffff", "#d8d2c4", 1.4]} />
       <directionalLight position={[2 * unitM, 4 * unitM, 3 * unitM]} intensity={1.6} />
       <directionalLight position={[-2 * unitM, 1 * unitM, -3 * unitM]} intensity={0.5} />
-      <Ground y={scale.groundY} sizeM={16 * unitM} centreX={scale.target[0]} />
+      <Ground y={scale.groundY} sizeM={40 * unitM} centreX={scale.target[0]} />
 
       {/* Pitch about the tether point: nose up (+) is a clockwise turn with the nose on the left. */}
       <group position={tetherWorld} rotation-z={-trimDeg * DEG}>

@@ -53,9 +53,10 @@ export const Tether = memo(function Tether({ top, tetherAngleDeg, groundY }: Tet
 export const Ground = memo(function Ground({ y, sizeM, centreX }: { y: number; sizeM: number; centreX: number }) {
   return (
     <group position={[centreX, y, 0]} name="ground">
+      {/* Unlit, so the ground reads as paper rather than as a grey slab. */}
       <mesh rotation-x={-Math.PI / 2} position-y={-0.001}>
         <planeGeometry args={[sizeM, sizeM]} />
-        <meshStandardMaterial color={GROUND} roughness={1} />
+        <meshBasicMaterial color={GROUND} toneMapped={false} />
       </mesh>
       <gridHelper args={[sizeM, 24, GRID_MAJOR, GRID_MINOR]} />
     </group>
