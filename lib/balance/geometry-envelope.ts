@@ -25,12 +25,15 @@ export interface DerivedEnvelopeGeometry {
 
 /** The rail runs ± this fraction of the hull length about the centre of buoyancy (our design). */
 const RAIL_HALF_LENGTH_FRACTION = 0.15;
-/** The bridle lines meet this many largest radii below the belly (our design). */
+/** The bridle lines meet this many largest radii below the belly (our design)... */
 const TETHER_DROP_RADII = 0.6;
+/** ...and this fraction of the length ahead of the centre of buoyancy, so that the sail's lift
+ *  acts well aft of the tether point and steadies the trim as the wind rises (our design). */
+const TETHER_FORWARD_FRACTION = 0.05;
 /** The sail is rigged so it still lifts with the hull level (our design). */
 const DEMO_ZERO_LIFT_TRIM_DEG = -6;
-/** Drag coefficient on the sail area for a blunt fabric lifter (assumed; a maker measures it). */
-const DEMO_DRAG_COEFFICIENT = 0.3;
+/** Drag coefficient on the sail area for a smooth fabric lifter (assumed; a maker measures it). */
+const DEMO_DRAG_COEFFICIENT = 0.15;
 
 export function deriveEnvelopeGeometry(params: Readonly<HullParams>): DerivedEnvelopeGeometry {
   const integrals = integrateHullProfile(params);
@@ -63,7 +66,7 @@ export function deriveEnvelopeGeometry(params: Readonly<HullParams>): DerivedEnv
     fabricMassCentre: integrals.fabricMassCentre,
     surfaceAreaM2: integrals.surfaceAreaM2,
     fabricMassKg: integrals.fabricMassKg,
-    tetherPoint: { x: bx, z: -radiusM * (1 + TETHER_DROP_RADII) },
+    tetherPoint: { x: bx - TETHER_FORWARD_FRACTION * params.lengthM, z: -radiusM * (1 + TETHER_DROP_RADII) },
     rail: {
       startX: railStartX,
       endX: railEndX,
