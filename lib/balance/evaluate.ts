@@ -12,6 +12,7 @@ import { grossLiftKg as grossLift, liftGasDensityKgM3 } from "./gas";
 import { DEFAULT_CYLINDER_CONTENT_M3, DEFAULT_LOSS_PER_DAY_FRACTION, heliumBudget, type HeliumBudget } from "./helium";
 import { payloadCentre, setupMass } from "./mass";
 import type { BalanceInput, DeepReadonly } from "./schema";
+import { rulesFlags } from "./rules";
 import { maxTetherOutM, tetherFlags } from "./tether";
 import { calmTrim, pitchStatics, type CalmTrim } from "./trim";
 import { STANDARD_GRAVITY_MS2, degreesToRadians } from "./units-si";
@@ -237,6 +238,8 @@ export function evaluateBalance(input: Input): BalanceResult {
       `when free lift falls below ${percent(limits.cautionFreeLiftRatio)} of gross lift.`,
       helium.daysToTopUp * 86_400));
   }
+
+  rulesFlags(envelope.gasVolumeM3, hull ? hull.maxDiameterM : null, input.tether?.lengthOutM ?? null, flags);
 
   return {
     airDensityKgM3: air.densityKgM3,

@@ -26,6 +26,8 @@ export const FLAG_CODES = [
   "tether-length",
   "tether-strength",
   "helium-top-up",
+  "moored-balloon-rules",
+  "tether-height",
 ] as const;
 
 export type FlagCode = (typeof FLAG_CODES)[number];

@@ -10,6 +10,7 @@ export * from "./attachment";
 export * from "./clearance";
 export * from "./tether";
 export * from "./helium";
+export * from "./rules";
 export * from "./flags";
 export * from "./solvers";
 export * from "./geometry";
