@@ -31,7 +31,7 @@ const createdAt = () =>
 const updatedAt = () =>
   integer("updated_at", { mode: "timestamp_ms" }).notNull().default(sql`(cast(unixepoch('subsec') * 1000 as integer))`);
 
-// ---------------------------------------------------------------- better-auth (core + admin plugin)
+// ---------------------------------------------------------------- better-auth (core tables + our role and units)
 
 export const user = sqliteTable(
   "user",
@@ -42,9 +42,6 @@ export const user = sqliteTable(
     emailVerified: integer("email_verified", { mode: "boolean" }).notNull().default(false),
     image: text("image"),
     role: text("role", { enum: ROLES }).notNull().default("customer"),
-    banned: integer("banned", { mode: "boolean" }).default(false),
-    banReason: text("ban_reason"),
-    banExpires: integer("ban_expires", { mode: "timestamp_ms" }),
     unitSystem: text("unit_system", { enum: UNIT_SYSTEMS }).notNull().default("metric"),
     createdAt: createdAt(),
     updatedAt: updatedAt(),
@@ -66,7 +63,6 @@ export const session = sqliteTable(
     userId: text("user_id")
       .notNull()
       .references(() => user.id, { onDelete: "cascade" }),
-    impersonatedBy: text("impersonated_by"),
     createdAt: createdAt(),
     updatedAt: updatedAt(),
   },

@@ -9,7 +9,8 @@ export const authOptionsBase = {
   emailAndPassword: { enabled: true, minPasswordLength: 8, autoSignIn: true },
   user: {
     additionalFields: {
-      // Set only through our own preference action, never from the sign-up body.
+      // Role and units are ours: never taken from a sign-up body; roles change only by the maker.
+      role: { type: "string", required: false, defaultValue: "customer", input: false },
       unitSystem: { type: "string", required: false, defaultValue: "metric", input: false },
     },
   },

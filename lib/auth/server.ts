@@ -2,7 +2,6 @@ import "server-only";
 import { betterAuth } from "better-auth";
 import { drizzleAdapter } from "better-auth/adapters/drizzle";
 import { nextCookies } from "better-auth/next-js";
-import { admin } from "better-auth/plugins";
 import { getDb } from "@/db";
 import * as schema from "@/db/schema";
 import { authOptionsBase } from "./options";
@@ -20,5 +19,5 @@ export const auth = betterAuth({
     },
   }),
   // nextCookies must stay last: it lets server actions set the session cookie.
-  plugins: [admin({ defaultRole: "customer", adminRoles: ["maker"] }), nextCookies()],
+  plugins: [nextCookies()],
 });

@@ -71,7 +71,8 @@ export function attachmentFlags(
     out.push(makeFlag("thread-mismatch", "ok",
       `${payload.name} fits the mount (${payload.attachment}${adapter ? " via adapter" : ""}).`,
       undefined, undefined, i));
-    const ownCapacityN = adapter
+    // A bridging adapter joins two threads (a strap plate never reaches here: strap payloads skip).
+    const ownCapacityN = adapter && adapter.from !== "strap"
       ? weaker(adapter.from, adapter.to, proofPa)
       : threadProofLoadN(payload.attachment, proofPa);
     const use = ((payload.massKg + (adapter?.massKg ?? 0)) * STANDARD_GRAVITY_MS2 * limits.loadFactor) /

@@ -116,9 +116,10 @@ export const payloadSchema = z.object({
   massKg: quantity("payload mass (kg)", 0, 10_000),
   offset: vecSchema,
   attachment: attachmentSchema,
+  /** `from` is the payload's side ("strap" for a clamp plate), `to` the mount's screw. */
   adapter: z.object({
     massKg: quantity("adapter mass (kg)", 0, 1000),
-    from: threadSchema,
+    from: attachmentSchema,
     to: threadSchema,
   }).optional(),
   size: z.object({

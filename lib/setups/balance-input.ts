@@ -87,5 +87,5 @@ export function toBalanceInput(draft: SetupDraft, catalogue: SetupCatalogue): Ba
       };
     }),
     ...(draft.tether ? { tether: { ...draft.tether } } : {}),
-  } as BalanceInput;
+  };
 }
