@@ -18,7 +18,7 @@ export const kgToPounds = (kg: number): number => kg / KG_PER_POUND;
 export const celsiusToFahrenheit = (c: number): number => (c * 9) / 5 + 32;
 export const fahrenheitToCelsius = (f: number): number => ((f - 32) * 5) / 9;
 
-export type Quantity = "mass" | "length" | "smallLength" | "volume" | "speed" | "temperature" | "temperatureDifference" | "force" | "massPerLength" | "area";
+export type Quantity = "mass" | "itemMass" | "length" | "smallLength" | "volume" | "speed" | "temperature" | "temperatureDifference" | "force" | "massPerLength" | "area";
 
 interface UnitDef {
   unit: string;
@@ -39,6 +39,7 @@ const linear = (unit: string, siPerUnit: number, decimals: number): UnitDef => (
 const UNITS: Record<UnitSystem, Record<Quantity, UnitDef>> = {
   metric: {
     mass: linear("g", 0.001, 0),
+    itemMass: linear("g", 0.001, 0),
     length: linear("m", 1, 2),
     smallLength: linear("cm", 0.01, 1),
     volume: linear("m³", 1, 3),
@@ -50,7 +51,9 @@ const UNITS: Record<UnitSystem, Record<Quantity, UnitDef>> = {
     area: linear("cm²", 0.0001, 0),
   },
   imperial: {
-    mass: linear("oz", KG_PER_OUNCE, 1),
+    // Lift and totals read in pounds; a single payload item in ounces, as the trade weighs them.
+    mass: linear("lb", KG_PER_POUND, 2),
+    itemMass: linear("oz", KG_PER_OUNCE, 1),
     length: linear("ft", METRES_PER_FOOT, 2),
     smallLength: linear("in", 0.0254, 2),
     volume: linear("ft³", CUBIC_METRES_PER_CUBIC_FOOT, 2),

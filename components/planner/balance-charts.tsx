@@ -27,7 +27,7 @@ function altitudeSweep(input: BalanceInput, units: UnitSystem) {
     const altitudeM = (ALTITUDE_MAX_M * i) / (ALTITUDE_POINTS - 1);
     // Standard atmosphere at each altitude: the site's own temperature and pressure belong to one place.
     const r = evaluateBalance({ ...input, site: { altitudeM, windMS: 0 } });
-    rows.push({ altitude: Math.round(toDisplay("length", altitudeM, units)), freeLift: Number(toDisplay("mass", r.freeLiftKg, units).toFixed(1)) });
+    rows.push({ altitude: Math.round(toDisplay("length", altitudeM, units)), freeLift: Number(toDisplay("mass", r.freeLiftKg, units).toFixed(units === "metric" ? 0 : 2)) });
   }
   return rows;
 }

@@ -22,11 +22,13 @@ export function BalancePanel() {
   const payloads = usePlanner((s) => s.draft.payloads);
   const tetherOutM = usePlanner((s) => s.draft.tether?.lengthOutM ?? null);
 
-  // Edit-to-panel time: from the edit (a pointer move on the mount) to the frame after this commit.
+  // Edit-to-panel time, measured by the page: to this commit (the panel's DOM holds the new figures)
+  // and to the next animation frame (they are on screen, after the 3D view's own frame).
   useLayoutEffect(() => {
     if (lastEditAtMs <= 0) return;
+    performance.measure("trimrail:edit-to-panel", { start: lastEditAtMs, end: performance.now() });
     const frame = requestAnimationFrame(() => {
-      performance.measure("trimrail:edit-to-panel", { start: lastEditAtMs, end: performance.now() });
+      performance.measure("trimrail:edit-to-frame", { start: lastEditAtMs, end: performance.now() });
     });
     return () => cancelAnimationFrame(frame);
   }, [lastEditAtMs]);

@@ -30,7 +30,7 @@ function toForm(p: SetupPayloadDraft, units: UnitSystem): DisplayValues {
     name: p.name,
     category: p.category,
     shape: p.shape,
-    mass: f("mass", p.massKg),
+    mass: f("itemMass", p.massKg),
     length: f("smallLength", p.lengthM),
     width: f("smallLength", p.widthM),
     height: f("smallLength", p.heightM),
@@ -81,7 +81,7 @@ export function PayloadForm({ initial, units, adapters, submitLabel, onSubmit, o
       name: v.name,
       category: v.category,
       shape: v.shape,
-      massKg: fromDisplay("mass", v.mass, units),
+      massKg: fromDisplay("itemMass", v.mass, units),
       lengthM: fromDisplay("smallLength", v.length, units),
       widthM: fromDisplay("smallLength", v.width, units),
       heightM: fromDisplay("smallLength", v.height, units),
@@ -117,7 +117,7 @@ export function PayloadForm({ initial, units, adapters, submitLabel, onSubmit, o
       <label className="block text-sm text-muted">Shape
         <select {...register("shape")} className={input}>{PAYLOAD_SHAPES.map((c) => <option key={c}>{c}</option>)}</select>
       </label>
-      <label className="block text-sm text-muted">Mass ({unitOf("mass", units)})<input {...register("mass")} inputMode="decimal" className={input} data-testid="payload-mass" />{err("mass")}</label>
+      <label className="block text-sm text-muted">Mass ({unitOf("itemMass", units)})<input {...register("mass")} inputMode="decimal" className={input} data-testid="payload-mass" />{err("mass")}</label>
       <label className="block text-sm text-muted">Length ({small})<input {...register("length")} inputMode="decimal" className={input} />{err("length")}</label>
       <label className="block text-sm text-muted">Width ({small})<input {...register("width")} inputMode="decimal" className={input} />{err("width")}</label>
       <label className="block text-sm text-muted">Height ({small})<input {...register("height")} inputMode="decimal" className={input} />{err("height")}</label>

@@ -30,7 +30,7 @@ export function PayloadsSection() {
           <li key={`${p.name}-${i}`} className="py-2" data-testid="payload-item">
             <div className="flex flex-wrap items-center gap-2 text-sm">
               <span className="font-medium">{p.name}</span>
-              <span className="figure text-muted">{formatQuantity("mass", p.massKg, units)}</span>
+              <span className="figure text-muted">{formatQuantity("itemMass", p.massKg, units)}</span>
               <span className="text-muted">{p.attachment}{p.adapterId ? " + adapter" : ""}</span>
               <span className="ml-auto flex gap-2">
                 <button type="button" className="text-accent underline" onClick={() => setEditing({ mode: "edit", index: i })}>Edit</button>
@@ -59,7 +59,7 @@ export function PayloadsSection() {
           From the catalogue
           <select value={templateId} onChange={(e) => setTemplateId(e.target.value)} className="mt-0.5 block rounded border border-hairline bg-white px-2 py-1" data-testid="template-select">
             {catalogue.templates.map((t) => (
-              <option key={t.id} value={t.id}>{t.name} ({formatQuantity("mass", t.massKg, units)})</option>
+              <option key={t.id} value={t.id}>{t.name} ({formatQuantity("itemMass", t.massKg, units)})</option>
             ))}
           </select>
         </label>
