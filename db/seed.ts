@@ -25,7 +25,7 @@ const SEED_EPOCH_MS = Date.UTC(2026, 10, 30, 12, 0, 0);
 
 export type SeedCounts = Record<"users" | "models" | "units" | "mounts" | "adapters" | "templates" | "setups", number>;
 
-function modelRow(m: (typeof DEMO_MODELS)[number]): typeof t.envelopeModels.$inferInsert {
+export function demoModelRow(m: (typeof DEMO_MODELS)[number]): typeof t.envelopeModels.$inferInsert {
   const hull = demoHulls[m.hullKey as DemoHullName];
   const g = deriveEnvelopeGeometry(hull);
   return {
@@ -54,7 +54,7 @@ function modelRow(m: (typeof DEMO_MODELS)[number]): typeof t.envelopeModels.$inf
   };
 }
 
-function draftOf(s: DemoSetup, railStartXM: number, railEndXM: number): SetupDraft {
+export function demoSetupDraft(s: DemoSetup, railStartXM: number, railEndXM: number): SetupDraft {
   return {
     name: s.name,
     modelId: s.modelId,
@@ -109,7 +109,7 @@ export async function seedDemo(db: Database): Promise<SeedCounts> {
     });
   }
 
-  const models = DEMO_MODELS.map(modelRow);
+  const models = DEMO_MODELS.map(demoModelRow);
   await db.insert(t.envelopeModels).values(models).onConflictDoNothing();
   await db.insert(t.envelopeUnits).values(DEMO_UNITS.map((u) => ({ ...u, createdAt: new Date(SEED_EPOCH_MS - 100 * DAY_MS) }))).onConflictDoNothing();
   await db.insert(t.mounts).values([...DEMO_MOUNTS]).onConflictDoNothing();
@@ -122,7 +122,7 @@ export async function seedDemo(db: Database): Promise<SeedCounts> {
     const mount = DEMO_MOUNTS.find((m) => m.id === s.mountId);
     if (!model || !mount) throw new Error(`seed: setup ${s.id} names an unknown model or mount`);
     const unit = s.unitId ? (DEMO_UNITS.find((u) => u.id === s.unitId) ?? null) : null;
-    const draft = draftOf(s, model.railStartXM, model.railEndXM);
+    const draft = demoSetupDraft(s, model.railStartXM, model.railEndXM);
     const catalogue: SetupCatalogue = { model: model as SetupCatalogue["model"], unit, mount, adaptersById };
     const result = evaluateBalance(toBalanceInput(draft, catalogue));
     const at = new Date(SEED_EPOCH_MS - s.daysAgo * DAY_MS);
