@@ -39,6 +39,15 @@ async function audit(tx: Tx, actorId: string, action: string, setupId: string, d
   await tx.insert(auditLog).values({ id: randomUUID(), actorId, action, entityType: "setup", entityId: setupId, detailJson: detail });
 }
 
+/** The owner's view of a setup's version and status, read inside the writing transaction. */
+async function readOwnedVersion(tx: Tx, id: string, ownerId: string): Promise<{ version: number; status: SetupStatus } | null> {
+  const [row] = await tx
+    .select({ version: setups.version, status: setups.status })
+    .from(setups)
+    .where(and(eq(setups.id, id), eq(setups.ownerId, ownerId)));
+  return row ?? null;
+}
+
 export interface Evaluated {
   result: unknown;
   worstFlag: FlagLevel;
@@ -74,10 +83,7 @@ export async function saveSetup({
   evaluated: Evaluated;
 }): Promise<SaveOutcome> {
   return getDb().transaction(async (tx) => {
-    const [current] = await tx
-      .select({ version: setups.version, status: setups.status })
-      .from(setups)
-      .where(and(eq(setups.id, id), eq(setups.ownerId, ownerId)));
+    const current = await readOwnedVersion(tx, id, ownerId);
     if (!current) return { kind: "not_found" };
     if (current.version !== expectedVersion) return { kind: "conflict", currentVersion: current.version };
     const status: SetupStatus = current.status === "changes_requested" ? "changes_requested" : "draft";
@@ -115,10 +121,7 @@ export async function markSetupSubmitted({
   evaluated: Evaluated;
 }): Promise<SubmitOutcome> {
   return getDb().transaction(async (tx) => {
-    const [current] = await tx
-      .select({ version: setups.version, status: setups.status })
-      .from(setups)
-      .where(and(eq(setups.id, id), eq(setups.ownerId, ownerId)));
+    const current = await readOwnedVersion(tx, id, ownerId);
     if (!current) return { kind: "not_found" };
     if (current.version !== expectedVersion) return { kind: "conflict", currentVersion: current.version };
     if (current.status !== "draft" && current.status !== "changes_requested") return { kind: "wrong_status", status: current.status };

@@ -1,4 +1,5 @@
-import { fail, ok, type Result } from "@/lib/errors";
+import type { z } from "zod";
+import { fail, issuesFromZod, ok, type Result } from "@/lib/errors";
 
 export const MAX_JSON_BODY_BYTES = 256 * 1024;
 
@@ -17,4 +18,16 @@ export async function readJsonBody(request: Request, maxBytes = MAX_JSON_BODY_BY
   } catch {
     return fail("bad_request", "The body is not valid JSON.");
   }
+}
+
+/** Reads a JSON body and validates it; bad JSON, a huge body or a schema failure is a typed 4xx. */
+export async function readValidBody<T>(
+  request: Request,
+  schema: { safeParse: (data: unknown) => { success: true; data: T } | { success: false; error: z.ZodError } },
+  message: string,
+): Promise<Result<T>> {
+  const body = await readJsonBody(request);
+  if (!body.ok) return body;
+  const parsed = schema.safeParse(body.data);
+  return parsed.success ? ok(parsed.data) : fail("bad_request", message, issuesFromZod(parsed.error));
 }

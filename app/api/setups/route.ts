@@ -1,8 +1,8 @@
 import { listSetupsForOwner } from "@/db/queries/setups";
 import { createSetup } from "@/db/queries/setup-writes";
 import { requireApiViewer } from "@/lib/auth/guard";
-import { errorResponse, issuesFromZod } from "@/lib/errors";
-import { readJsonBody } from "@/lib/http/read-json-body";
+import { errorResponse } from "@/lib/errors";
+import { readValidBody } from "@/lib/http/read-json-body";
 import { evaluateDraftOnServer } from "@/lib/setups/evaluate-on-server";
 import { createSetupBodySchema } from "./schema";
 
@@ -18,10 +18,8 @@ export async function GET() {
 export async function POST(request: Request) {
   const access = await requireApiViewer();
   if (!access.ok) return access.response;
-  const body = await readJsonBody(request);
-  if (!body.ok) return errorResponse(body.error);
-  const parsed = createSetupBodySchema.safeParse(body.data);
-  if (!parsed.success) return errorResponse({ code: "bad_request", message: "The setup is not valid.", issues: issuesFromZod(parsed.error) });
+  const parsed = await readValidBody(request, createSetupBodySchema, "The setup is not valid.");
+  if (!parsed.ok) return errorResponse(parsed.error);
   const evaluated = await evaluateDraftOnServer({ draft: parsed.data.draft, ownerId: access.viewer.id });
   if (!evaluated.ok) return errorResponse(evaluated.error);
   const id = await createSetup({ ownerId: access.viewer.id, draft: parsed.data.draft, evaluated: evaluated.data });

@@ -2,8 +2,8 @@ import { z } from "zod";
 import { UNIT_SYSTEMS } from "@/db/schema";
 import { setUnitSystem } from "@/db/queries/users";
 import { requireApiViewer } from "@/lib/auth/guard";
-import { errorResponse, issuesFromZod } from "@/lib/errors";
-import { readJsonBody } from "@/lib/http/read-json-body";
+import { errorResponse } from "@/lib/errors";
+import { readValidBody } from "@/lib/http/read-json-body";
 
 const preferencesSchema = z.object({ unitSystem: z.enum(UNIT_SYSTEMS, { message: "unitSystem must be metric or imperial" }) });
 
@@ -11,10 +11,8 @@ const preferencesSchema = z.object({ unitSystem: z.enum(UNIT_SYSTEMS, { message:
 export async function PUT(request: Request) {
   const access = await requireApiViewer();
   if (!access.ok) return access.response;
-  const body = await readJsonBody(request);
-  if (!body.ok) return errorResponse(body.error);
-  const parsed = preferencesSchema.safeParse(body.data);
-  if (!parsed.success) return errorResponse({ code: "bad_request", message: "Invalid preferences.", issues: issuesFromZod(parsed.error) });
+  const parsed = await readValidBody(request, preferencesSchema, "Invalid preferences.");
+  if (!parsed.ok) return errorResponse(parsed.error);
   await setUnitSystem({ userId: access.viewer.id, unitSystem: parsed.data.unitSystem });
   return Response.json({ unitSystem: parsed.data.unitSystem });
 }

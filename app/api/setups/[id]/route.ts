@@ -1,8 +1,8 @@
 import { getSetupById } from "@/db/queries/planner";
 import { deleteSetups, saveSetup } from "@/db/queries/setup-writes";
 import { requireApiViewer } from "@/lib/auth/guard";
-import { errorResponse, issuesFromZod } from "@/lib/errors";
-import { readJsonBody } from "@/lib/http/read-json-body";
+import { errorResponse } from "@/lib/errors";
+import { readValidBody } from "@/lib/http/read-json-body";
 import { evaluateDraftOnServer } from "@/lib/setups/evaluate-on-server";
 import { saveSetupBodySchema, setupIdSchema } from "../schema";
 
@@ -26,10 +26,8 @@ export async function PUT(request: Request, ctx: RouteContext<"/api/setups/[id]"
   if (!access.ok) return access.response;
   const id = setupIdSchema.safeParse((await ctx.params).id);
   if (!id.success) return notFound();
-  const body = await readJsonBody(request);
-  if (!body.ok) return errorResponse(body.error);
-  const parsed = saveSetupBodySchema.safeParse(body.data);
-  if (!parsed.success) return errorResponse({ code: "bad_request", message: "The setup is not valid.", issues: issuesFromZod(parsed.error) });
+  const parsed = await readValidBody(request, saveSetupBodySchema, "The setup is not valid.");
+  if (!parsed.ok) return errorResponse(parsed.error);
   const evaluated = await evaluateDraftOnServer({ draft: parsed.data.draft, ownerId: access.viewer.id });
   if (!evaluated.ok) return errorResponse(evaluated.error);
   const outcome = await saveSetup({ id: id.data, ownerId: access.viewer.id, expectedVersion: parsed.data.version, draft: parsed.data.draft, evaluated: evaluated.data });

@@ -1,8 +1,8 @@
 import { getSetupById } from "@/db/queries/planner";
 import { markSetupSubmitted } from "@/db/queries/setup-writes";
 import { requireApiViewer } from "@/lib/auth/guard";
-import { errorResponse, issuesFromZod } from "@/lib/errors";
-import { readJsonBody } from "@/lib/http/read-json-body";
+import { errorResponse } from "@/lib/errors";
+import { readValidBody } from "@/lib/http/read-json-body";
 import { evaluateDraftOnServer } from "@/lib/setups/evaluate-on-server";
 import { setupIdSchema, submitSetupBodySchema } from "../../schema";
 
@@ -15,10 +15,8 @@ export async function POST(request: Request, ctx: RouteContext<"/api/setups/[id]
   if (!access.ok) return access.response;
   const id = setupIdSchema.safeParse((await ctx.params).id);
   if (!id.success) return errorResponse({ code: "not_found", message: "No such setup among yours." });
-  const body = await readJsonBody(request);
-  if (!body.ok) return errorResponse(body.error);
-  const parsed = submitSetupBodySchema.safeParse(body.data);
-  if (!parsed.success) return errorResponse({ code: "bad_request", message: "Invalid submit request.", issues: issuesFromZod(parsed.error) });
+  const parsed = await readValidBody(request, submitSetupBodySchema, "Invalid submit request.");
+  if (!parsed.ok) return errorResponse(parsed.error);
 
   const setup = await getSetupById({ id: id.data, ownerId: access.viewer.id });
   if (!setup) return errorResponse({ code: "not_found", message: "No such setup among yours." });

@@ -1,8 +1,8 @@
 import { setUserRole } from "@/db/queries/users";
 import { MAKER_ONLY } from "@/lib/auth/access";
 import { requireApiViewer } from "@/lib/auth/guard";
-import { errorResponse, issuesFromZod } from "@/lib/errors";
-import { readJsonBody } from "@/lib/http/read-json-body";
+import { errorResponse } from "@/lib/errors";
+import { readValidBody } from "@/lib/http/read-json-body";
 import { roleChangeSchema, userIdSchema } from "./schema";
 
 /** PUT /api/users/:id/role — the maker changes one account's role. */
@@ -11,10 +11,8 @@ export async function PUT(request: Request, ctx: RouteContext<"/api/users/[id]/r
   if (!access.ok) return access.response;
   const id = userIdSchema.safeParse((await ctx.params).id);
   if (!id.success) return errorResponse({ code: "bad_request", message: "Bad account id." });
-  const body = await readJsonBody(request);
-  if (!body.ok) return errorResponse(body.error);
-  const parsed = roleChangeSchema.safeParse(body.data);
-  if (!parsed.success) return errorResponse({ code: "bad_request", message: "Invalid role change.", issues: issuesFromZod(parsed.error) });
+  const parsed = await readValidBody(request, roleChangeSchema, "Invalid role change.");
+  if (!parsed.ok) return errorResponse(parsed.error);
   if (id.data === access.viewer.id && parsed.data.role !== "maker") {
     return errorResponse({ code: "bad_request", message: "You cannot take the maker role from your own account." });
   }
