@@ -49,13 +49,37 @@ async function engineResultFor(draft: SetupDraft): Promise<BalanceResult> {
   return evaluateBalance(toBalanceInput(draft, await catalogueFor(draft)));
 }
 
-async function storedRow(id: string) {
+interface StoredRow {
+  version: unknown;
+  status: unknown;
+  name: unknown;
+  mount_position_x_m: unknown;
+  result_json: unknown;
+  worst_flag: unknown;
+  updated_at: unknown;
+  cautions_acknowledged: unknown;
+  payloads: Array<Record<string, unknown>>;
+}
+
+async function storedRow(id: string): Promise<StoredRow | null> {
   const rows = await database.client.execute({
     sql: "select version, status, name, mount_position_x_m, result_json, worst_flag, updated_at, cautions_acknowledged from setups where id = ?",
     args: [id],
   });
   const payloads = await database.client.execute({ sql: "select name, mass_kg, sort_order from setup_payloads where setup_id = ? order by sort_order", args: [id] });
-  return rows.rows[0] ? { ...rows.rows[0], payloads: payloads.rows.map((r) => ({ ...r })) } : null;
+  const row = rows.rows[0];
+  if (!row) return null;
+  return {
+    version: row.version,
+    status: row.status,
+    name: row.name,
+    mount_position_x_m: row.mount_position_x_m,
+    result_json: row.result_json,
+    worst_flag: row.worst_flag,
+    updated_at: row.updated_at,
+    cautions_acknowledged: row.cautions_acknowledged,
+    payloads: payloads.rows.map((r) => ({ name: r.name, mass_kg: r.mass_kg, sort_order: r.sort_order })),
+  };
 }
 
 async function countSetups(): Promise<number> {
