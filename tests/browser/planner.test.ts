@@ -1,5 +1,3 @@
-import { mkdirSync, writeFileSync } from "node:fs";
-import path from "node:path";
 import type { Browser, BrowserContext } from "playwright-core";
 import { afterAll, beforeAll, describe, expect, inject, it } from "vitest";
 import { DEMO_PASSWORD } from "../../db/seed-data";
@@ -28,11 +26,6 @@ afterAll(async () => {
   await browser?.close();
 });
 
-function median(values: number[]): number {
-  const sorted = [...values].sort((a, b) => a - b);
-  return sorted.length ? sorted[Math.floor(sorted.length / 2)] : Number.NaN;
-}
-
 describe("the Planner in Chromium", () => {
   it("shows the seeded setup in 3D and updates trim and flags live while the mount is dragged", async () => {
     const planner = new PlannerPage(await context.newPage());
@@ -41,37 +34,17 @@ describe("the Planner in Chromium", () => {
     await screenshot(planner.page, "planner-1-open");
     const trimBefore = await planner.calmTrimDeg();
     const positionBefore = await planner.mountPositionText();
+    const flagsTextBefore = await planner.page.getByTestId("flag-list").innerText();
 
-    await planner.page.evaluate(() => {
-      performance.clearMeasures("trimrail:edit-to-panel");
-      performance.clearMeasures("trimrail:edit-to-frame");
-    });
-    await planner.dragMountBy(90, 30);
+    await planner.dragMountBy(60, 20);
     await planner.page.waitForTimeout(300);
     const trimAfter = await planner.calmTrimDeg();
     expect(trimAfter).not.toBeCloseTo(trimBefore, 1);
     expect(await planner.mountPositionText()).not.toBe(positionBefore);
+    // The calm-trim flag's message carries the new figure.
+    expect(await planner.page.getByTestId("flag-list").innerText()).not.toBe(flagsTextBefore);
     await screenshot(planner.page, "planner-2-dragged");
 
-    // Edit-to-panel time, measured by the page itself (performance.measure after the next frame).
-    const latencies = await planner.page.evaluate(() =>
-      performance.getEntriesByName("trimrail:edit-to-panel").map((e) => e.duration),
-    );
-    const toFrame = await planner.page.evaluate(() =>
-      performance.getEntriesByName("trimrail:edit-to-frame").map((e) => e.duration),
-    );
-    expect(latencies.length).toBeGreaterThan(5);
-    const jsBytes = await planner.page.evaluate(() =>
-      performance
-        .getEntriesByType("resource")
-        .filter((e) => e.name.endsWith(".js"))
-        .reduce((sum, e) => sum + (e as PerformanceResourceTiming).encodedBodySize, 0),
-    );
-    const outDir = path.join(process.cwd(), "test-output");
-    mkdirSync(outDir, { recursive: true });
-    const report = { dragSamples: latencies.length, medianEditToPanelMs: median(latencies), p95EditToPanelMs: [...latencies].sort((a, b) => a - b)[Math.floor(latencies.length * 0.95)], medianEditToNextFrameMs: median(toFrame), plannerJsBytesTransferred: jsBytes };
-    writeFileSync(path.join(outDir, "planner-perf.json"), JSON.stringify(report, null, 2));
-    console.log("[planner perf]", JSON.stringify(report));
     await planner.page.close();
   });
 

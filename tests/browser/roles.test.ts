@@ -61,6 +61,24 @@ describe("signing in as each demo role in Chromium", () => {
     });
   }
 
+  it("lets the maker change a role in the Workshop, and the change holds after a reload", async () => {
+    const context = await newPersonContext(browser, baseURL);
+    const page = await context.newPage();
+    const signIn = new SignInPage(page);
+    await signIn.open("/workshop");
+    await signIn.signIn("maker@trimrail.test", DEMO_PASSWORD);
+    await page.waitForURL(/\/workshop$/);
+    const orrinRole = page.getByTestId("workshop-users").getByRole("row", { name: /orrin@trimrail\.test/ }).getByLabel("Role");
+    await expect(orrinRole.inputValue()).resolves.toBe("support");
+    await orrinRole.selectOption("customer");
+    await expect.poll(() => page.getByTestId("workshop-users").getByRole("status").first().innerText()).toBe("saved");
+    await page.reload();
+    await expect(orrinRole.inputValue()).resolves.toBe("customer");
+    await orrinRole.selectOption("support");
+    await expect.poll(() => page.getByTestId("workshop-users").getByRole("status").first().innerText()).toBe("saved");
+    await context.close();
+  });
+
   it("shows a clear message for a wrong password and stays on sign-in", async () => {
     const context = await newPersonContext(browser, baseURL);
     const page = await context.newPage();

@@ -1,87 +1,10 @@
-import { spawn, spawnSync, type ChildProcess } from "node:child_process";
-import { randomBytes } from "node:crypto";
-import { mkdtempSync, rmSync } from "node:fs";
-import { createServer } from "node:net";
-import os from "node:os";
-import path from "node:path";
 import type { TestProject } from "vitest/node";
-import { openDatabase } from "../../db/index";
-import { migrateDatabase } from "../../db/migrate";
-import { seedDemo } from "../../db/seed";
+import { startAppServer } from "./app-server";
 
-async function freePort(): Promise<number> {
-  return new Promise((resolve, reject) => {
-    const server = createServer();
-    server.once("error", reject);
-    server.listen(0, "127.0.0.1", () => {
-      const address = server.address();
-      const port = typeof address === "object" && address ? address.port : 0;
-      server.close(() => resolve(port));
-    });
-  });
-}
-
-async function waitForServer(url: string, child: ChildProcess, timeoutMs: number): Promise<void> {
-  const deadline = Date.now() + timeoutMs;
-  while (Date.now() < deadline) {
-    if (child.exitCode !== null) throw new Error(`next start exited with ${child.exitCode}`);
-    try {
-      const response = await fetch(url);
-      if (response.ok) return;
-    } catch {
-      // not listening yet
-    }
-    await new Promise((r) => setTimeout(r, 250));
-  }
-  throw new Error(`server at ${url} did not answer within ${timeoutMs} ms`);
-}
-
-/**
- * The e2e project's world: a fresh SQLite file with migrations and demo data, a production build
- * (`next build`, skipped with TRIMRAIL_REUSE_BUILD=1 when one exists) and `next start` on a free port.
- */
+/** The e2e project's world: its own database and server (TRIMRAIL_REUSE_BUILD=1 skips the build). */
 export default async function setup(project: TestProject): Promise<() => Promise<void>> {
-  const dir = mkdtempSync(path.join(os.tmpdir(), "trimrail-e2e-"));
-  const databaseUrl = `file:${path.join(dir, "e2e.db")}`;
-  const { db, client } = openDatabase(databaseUrl);
-  await migrateDatabase(db);
-  await seedDemo(db);
-  client.close();
-
-  const port = await freePort();
-  const baseURL = `http://127.0.0.1:${port}`;
-  const env = {
-    ...process.env,
-    NODE_ENV: "production" as const,
-    DATABASE_URL: databaseUrl,
-    BETTER_AUTH_SECRET: randomBytes(32).toString("base64url"),
-    BETTER_AUTH_URL: baseURL,
-    NEXT_TELEMETRY_DISABLED: "1",
-  };
-
-  if (process.env.TRIMRAIL_REUSE_BUILD !== "1") {
-    const build = spawnSync("npx", ["next", "build"], { stdio: "inherit", env });
-    if (build.status !== 0) throw new Error(`next build failed with ${build.status}`);
-  }
-
-  const server = spawn("npx", ["next", "start", "-p", String(port), "-H", "127.0.0.1"], {
-    env,
-    stdio: ["ignore", "inherit", "inherit"],
-    detached: true,
-  });
-  await waitForServer(`${baseURL}/sign-in`, server, 60_000);
-
-  project.provide("baseURL", baseURL);
-  project.provide("databaseUrl", databaseUrl);
-
-  return async () => {
-    if (server.pid) {
-      try {
-        process.kill(-server.pid, "SIGTERM");
-      } catch {
-        // already gone
-      }
-    }
-    rmSync(dir, { recursive: true, force: true });
-  };
+  const app = await startAppServer({ build: process.env.TRIMRAIL_REUSE_BUILD !== "1" });
+  project.provide("baseURL", app.baseURL);
+  project.provide("databaseUrl", app.databaseUrl);
+  return app.stop;
 }

@@ -1,0 +1,71 @@
+/**
+ * `npm run bench:planner`: the Planner measured in Debian's Chromium against a production build.
+ *  - edit-to-panel: from a pointer move that drags the mount to the balance panel's commit, and to
+ *    the next animation frame (target ≤ 16 ms median), as the page records them with performance.measure;
+ *  - the JavaScript the Planner loads on first visit (compressed as served, and uncompressed).
+ * Reuses an existing `.next` build when TRIMRAIL_REUSE_BUILD=1.
+ */
+import { DEMO_PASSWORD } from "../db/seed-data";
+import { startAppServer } from "../tests/support/app-server";
+import { SignInPage, launchBrowser, newPersonContext } from "../tests/support/browser";
+import { PlannerPage } from "../tests/support/planner-page";
+
+const SETUP_ID = "set-tobin-draft";
+const SWEEPS = 6;
+const STEPS_PER_SWEEP = 40;
+const SWEEP_PX = 60;
+
+const percentile = (values: number[], p: number): number => {
+  const sorted = [...values].sort((a, b) => a - b);
+  return sorted[Math.min(sorted.length - 1, Math.floor(sorted.length * p))];
+};
+
+const app = await startAppServer({ build: process.env.TRIMRAIL_REUSE_BUILD !== "1" });
+const browser = await launchBrowser();
+try {
+  const context = await newPersonContext(browser, app.baseURL);
+  const page = await context.newPage();
+  const signIn = new SignInPage(page);
+  await signIn.open(`/setups/${SETUP_ID}`);
+  await signIn.signIn("tobin@trimrail.test", DEMO_PASSWORD);
+  await page.waitForURL(new RegExp(`/setups/${SETUP_ID}$`));
+  const planner = new PlannerPage(page);
+  await planner.page.getByTestId("planner").waitFor();
+  await planner.waitForScene();
+
+  const js = await page.evaluate(() =>
+    performance
+      .getEntriesByType("resource")
+      .filter((e) => e.name.endsWith(".js"))
+      .reduce(
+        (sum, e) => ({ encoded: sum.encoded + (e as PerformanceResourceTiming).encodedBodySize, decoded: sum.decoded + (e as PerformanceResourceTiming).decodedBodySize, files: sum.files + 1 }),
+        { encoded: 0, decoded: 0, files: 0 },
+      ),
+  );
+
+  await page.evaluate(() => performance.clearMeasures());
+  const start = await planner.mountScreenPoint();
+  await page.mouse.move(start.x, start.y);
+  await page.mouse.down();
+  for (let sweep = 0; sweep < SWEEPS; sweep++) {
+    const direction = sweep % 2 === 0 ? 1 : -1;
+    for (let i = 1; i <= STEPS_PER_SWEEP; i++) {
+      const offset = direction === 1 ? (SWEEP_PX * i) / STEPS_PER_SWEEP : SWEEP_PX - (SWEEP_PX * i) / STEPS_PER_SWEEP;
+      await page.mouse.move(start.x + offset - SWEEP_PX / 2, start.y);
+    }
+  }
+  await page.mouse.up();
+  await page.waitForTimeout(300);
+  const [toPanel, toFrame] = await page.evaluate(() => [
+    performance.getEntriesByName("trimrail:edit-to-panel").map((e) => e.duration),
+    performance.getEntriesByName("trimrail:edit-to-frame").map((e) => e.duration),
+  ]);
+
+  console.log(`planner drag: ${toPanel.length} edits measured`);
+  console.log(`  edit → panel commit   median ${percentile(toPanel, 0.5).toFixed(1)} ms, p95 ${percentile(toPanel, 0.95).toFixed(1)} ms`);
+  console.log(`  edit → next frame     median ${percentile(toFrame, 0.5).toFixed(1)} ms, p95 ${percentile(toFrame, 0.95).toFixed(1)} ms   (target ≤ 16 ms median)`);
+  console.log(`planner first load: ${js.files} JS files, ${(js.encoded / 1024).toFixed(0)} KiB as served (compressed), ${(js.decoded / 1024).toFixed(0)} KiB uncompressed`);
+} finally {
+  await browser.close();
+  await app.stop();
+}
