@@ -50,6 +50,10 @@ export function PlannerToolbar() {
   });
 
   const canSubmit = !dirty && worst !== "stop" && (worst !== "caution" || acknowledged) && (status === "draft" || status === "changes_requested");
+  const reopensHint =
+    dirty && (status === "submitted" || status === "approved")
+      ? "Saving changes takes this setup back to draft; it will need a new review."
+      : null;
   const submitHint =
     worst === "stop"
       ? "A stop flag blocks submitting; a draft can still be saved."
@@ -100,6 +104,7 @@ export function PlannerToolbar() {
         </button>
       </div>
       {submitHint && <p className="basis-full text-xs text-muted" data-testid="submit-hint">{submitHint}</p>}
+      {reopensHint && <p className="basis-full text-xs text-flag-caution" data-testid="reopens-hint">{reopensHint}</p>}
       {message && (
         <p role={message.kind === "error" ? "alert" : "status"} className={`basis-full text-sm ${message.kind === "error" ? "text-flag-stop" : "text-flag-ok"}`} data-testid="save-message">
           {message.text}

@@ -45,6 +45,16 @@ describe("signing in as each demo role in Chromium", () => {
       expect(await shell.role()).toBe(demo.role);
       await screenshot(page, `foundation-${demo.role}-setups`);
 
+      if (demo.role === "customer") {
+        // Signing out ends the session on the server: the app pages send the browser to sign-in again.
+        await page.getByRole("button", { name: "Sign out" }).click();
+        await page.waitForURL(/\/sign-in$/);
+        await page.goto("/setups");
+        await page.waitForURL(/\/sign-in\?next=%2Fsetups/);
+        await signIn.signIn(demo.email, DEMO_PASSWORD);
+        await page.waitForURL(/\/setups$/);
+      }
+
       if (demo.refusedAt) {
         const response = await page.goto(demo.refusedAt);
         expect(response?.status()).toBe(403);
