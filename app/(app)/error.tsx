@@ -10,7 +10,7 @@ export default function AppError({ error, reset }: { error: Error & { digest?: s
     <div className="panel mx-auto max-w-xl p-6" role="alert">
       <h1 className="text-xl">Something went wrong on our side</h1>
       <p className="mt-2 text-sm text-muted">
-        Nothing you entered was lost unless you saw an error beside it. Try again; if it keeps happening, tell the workshop
+        Your saved setups are safe. Try again; if it keeps happening, tell the workshop
         {error.digest ? ` and quote ${error.digest}` : ""}.
       </p>
       <button type="button" onClick={reset} className="mt-4 rounded bg-accent px-3 py-1.5 text-sm text-white">Try again</button>
