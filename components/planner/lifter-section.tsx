@@ -41,7 +41,7 @@ export function LifterSection() {
           <select className={select} value={unitId ?? ""} onChange={(e) => actions.setUnit(e.target.value || null)} data-testid="unit-select">
             <option value="">none: the model&apos;s nominal mass</option>
             {units.map((u) => (
-              <option key={u.id} value={u.id}>{u.serial} (weighed {(u.measuredMassKg * 1000).toFixed(0)} g)</option>
+              <option key={u.id} value={u.id}>{u.serial} (weighs {(u.measuredMassKg * 1000).toFixed(0)} g, lifted {(u.measuredGrossLiftKg * 1000).toFixed(0)} g when tested)</option>
             ))}
           </select>
         </label>

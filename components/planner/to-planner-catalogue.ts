@@ -26,7 +26,10 @@ export function toPlannerCatalogue(rows: {
 }): PlannerCatalogue {
   return {
     models: rows.models.map(toPlannerModel),
-    units: rows.units.map((u) => ({ id: u.id, modelId: u.modelId, serial: u.serial, measuredMassKg: u.measuredMassKg, measuredGrossLiftKg: u.measuredGrossLiftKg })),
+    units: rows.units.map((u) => ({
+      id: u.id, modelId: u.modelId, serial: u.serial, measuredMassKg: u.measuredMassKg,
+      measuredGrossLiftKg: u.measuredGrossLiftKg, measuredAtTemperatureC: u.measuredAtTemperatureC, measuredAtAltitudeM: u.measuredAtAltitudeM,
+    })),
     mounts: rows.mounts.map((m) => ({ id: m.id, name: m.name, thread: m.thread, massKg: m.massKg, ratedLoadKg: m.ratedLoadKg, safetyLineBreakingLoadN: m.safetyLineBreakingLoadN })),
     adapters: rows.adapters.map((a) => ({ id: a.id, name: a.name, fromThread: a.fromThread, toThread: a.toThread, massKg: a.massKg })),
     templates: rows.templates.map((t) => ({

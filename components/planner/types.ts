@@ -1,5 +1,5 @@
 import type { SetupStatus, UnitSystem } from "@/db/schema";
-import type { AdapterSpec, ModelSpec, MountSpec } from "@/lib/setups/balance-input";
+import type { AdapterSpec, ModelSpec, MountSpec, UnitSpec } from "@/lib/setups/balance-input";
 import type { SetupDraft, SetupPayloadDraft } from "@/lib/setups/setup-draft";
 
 // Plain, serialisable catalogue records the server page hands to the Planner.
@@ -10,12 +10,10 @@ export interface PlannerModel extends ModelSpec {
   glbPath: string;
   railTabCount: number;
 }
-export interface PlannerUnit {
+export interface PlannerUnit extends UnitSpec {
   id: string;
   modelId: string;
   serial: string;
-  measuredMassKg: number;
-  measuredGrossLiftKg: number;
 }
 export interface PlannerMount extends MountSpec {
   id: string;

@@ -1,4 +1,4 @@
-import type { BalanceInput } from "@/lib/balance";
+import { gasVolumeFromLiftMeasurementM3, type BalanceInput } from "@/lib/balance";
 import type { SetupDraft } from "./setup-draft";
 
 // The catalogue facts a setup refers to, in the shape the database rows already have.
@@ -20,6 +20,9 @@ export interface ModelSpec {
 }
 export interface UnitSpec {
   measuredMassKg: number;
+  measuredGrossLiftKg: number;
+  measuredAtTemperatureC: number;
+  measuredAtAltitudeM: number;
 }
 export interface MountSpec {
   thread: "1/4-20 UNC" | "3/8-16 UNC";
@@ -42,14 +45,17 @@ export interface SetupCatalogue {
 /**
  * Turns a setup and the catalogue rows it names into the engine's input. The same function runs in
  * the Planner (live) and on the server (stored result), so both always agree.
- * A serial unit's weighed mass replaces the model's nominal mass.
+ * A serial unit's weighed mass replaces the model's nominal mass, and its weighed gross lift gives
+ * the gas volume it really holds in place of the model's drawn volume.
  */
 export function toBalanceInput(draft: SetupDraft, catalogue: SetupCatalogue): BalanceInput {
   const { model, unit, mount, adaptersById } = catalogue;
   const site = draft.site;
   return {
     envelope: {
-      gasVolumeM3: model.gasVolumeM3,
+      gasVolumeM3: unit
+        ? gasVolumeFromLiftMeasurementM3({ grossLiftKg: unit.measuredGrossLiftKg, altitudeM: unit.measuredAtAltitudeM, temperatureC: unit.measuredAtTemperatureC })
+        : model.gasVolumeM3,
       massKg: unit?.measuredMassKg ?? model.nominalMassKg,
       buoyancyCentre: { x: model.buoyancyCentreXM, z: model.buoyancyCentreZM },
       massCentre: { x: model.massCentreXM, z: model.massCentreZM },

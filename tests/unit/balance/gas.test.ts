@@ -5,6 +5,7 @@ import {
   CUBIC_FOOT_M3,
   airDensityKgM3,
   fahrenheitToKelvin,
+  gasVolumeFromLiftMeasurementM3,
   grossLiftKg,
   heliumDensityKgM3,
   inchesOfMercuryToPascals,
@@ -128,5 +129,36 @@ describe("grossLiftKg", () => {
     const gas = liftGasDensityKgM3(air.pressurePa, air.temperatureK, 0.95);
     const grams = 1000 * grossLiftKg(0.75 * CUBIC_FOOT_M3, 1, air.densityKgM3, gas);
     expect(Math.abs(grams - 20)).toBeLessThan(2);
+  });
+});
+
+describe("gasVolumeFromLiftMeasurementM3", () => {
+  it("returns 1 m³ for 1.0558 kg weighed at ISA sea level, 15 °C, pure helium (net lift derived from ISA)", () => {
+    const volume = gasVolumeFromLiftMeasurementM3({ grossLiftKg: derivedNetLift(1), altitudeM: 0, temperatureC: 15 });
+    expect(Math.abs(volume - 1)).toBeLessThan(1e-4); // CODATA vs ISA gas constant differ by ~2e-5
+    expect(Math.abs(gasVolumeFromLiftMeasurementM3({ grossLiftKg: 1.0558, altitudeM: 0, temperatureC: 15 }) - 1)).toBeLessThan(2e-4);
+  });
+
+  it("returns the volume that gives back the weighed lift at the weighing's air (round trip)", () => {
+    fc.assert(
+      fc.property(
+        fc.double({ min: 0.05, max: 50, noNaN: true }),
+        fc.double({ min: -100, max: 3000, noNaN: true }),
+        fc.double({ min: -20, max: 40, noNaN: true }),
+        fc.double({ min: 0.8, max: 1, noNaN: true }),
+        (volumeM3, altitudeM, temperatureC, purity) => {
+          const air = siteAir({ altitudeM, temperatureC });
+          const gas = liftGasDensityKgM3(air.pressurePa, air.temperatureK, purity);
+          const lift = grossLiftKg(volumeM3, 1, air.densityKgM3, gas);
+          const back = gasVolumeFromLiftMeasurementM3({ grossLiftKg: lift, altitudeM, temperatureC, purity });
+          return Math.abs(back / volumeM3 - 1) < 1e-12;
+        },
+      ),
+    );
+  });
+
+  it("returns a smaller volume when the purity is unknown than when a lower one is known (safe side)", () => {
+    const weighing = { grossLiftKg: 1.1, altitudeM: 40, temperatureC: 18 };
+    expect(gasVolumeFromLiftMeasurementM3(weighing)).toBeLessThan(gasVolumeFromLiftMeasurementM3({ ...weighing, purity: 0.97 }));
   });
 });
