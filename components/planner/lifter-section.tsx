@@ -1,4 +1,5 @@
 "use client";
+import { formatQuantity } from "@/lib/units";
 import { usePlanner, usePlannerActions } from "./planner-context";
 import { Section } from "./section";
 
@@ -10,6 +11,7 @@ export function LifterSection() {
   const unitId = usePlanner((s) => s.draft.unitId);
   const mountId = usePlanner((s) => s.draft.mountId);
   const name = usePlanner((s) => s.draft.name);
+  const unitSystem = usePlanner((s) => s.unitSystem);
   const actions = usePlannerActions();
   const units = catalogue.units.filter((u) => u.modelId === modelId);
   return (
@@ -32,7 +34,7 @@ export function LifterSection() {
           Envelope model
           <select className={select} value={modelId} onChange={(e) => actions.setModel(e.target.value)} data-testid="model-select">
             {catalogue.models.map((m) => (
-              <option key={m.id} value={m.id}>{m.name} ({m.gasVolumeM3.toFixed(2)} m³)</option>
+              <option key={m.id} value={m.id}>{m.name} ({formatQuantity("volume", m.gasVolumeM3, unitSystem)})</option>
             ))}
           </select>
         </label>
@@ -41,7 +43,7 @@ export function LifterSection() {
           <select className={select} value={unitId ?? ""} onChange={(e) => actions.setUnit(e.target.value || null)} data-testid="unit-select">
             <option value="">none: the model&apos;s nominal mass</option>
             {units.map((u) => (
-              <option key={u.id} value={u.id}>{u.serial} (weighs {(u.measuredMassKg * 1000).toFixed(0)} g, lifted {(u.measuredGrossLiftKg * 1000).toFixed(0)} g when tested)</option>
+              <option key={u.id} value={u.id}>{u.serial} (weighs {formatQuantity("itemMass", u.measuredMassKg, unitSystem)}, lifted {formatQuantity("itemMass", u.measuredGrossLiftKg, unitSystem)} when tested)</option>
             ))}
           </select>
         </label>
@@ -49,7 +51,7 @@ export function LifterSection() {
           Mount
           <select className={select} value={mountId} onChange={(e) => actions.setMountId(e.target.value)} data-testid="mount-select">
             {catalogue.mounts.map((m) => (
-              <option key={m.id} value={m.id}>{m.name}, rated {m.ratedLoadKg} kg</option>
+              <option key={m.id} value={m.id}>{m.name}, rated {formatQuantity("mass", m.ratedLoadKg, unitSystem)}</option>
             ))}
           </select>
         </label>
