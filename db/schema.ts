@@ -194,23 +194,28 @@ export const adapters = sqliteTable(
   ],
 );
 
+/** What a payload is, the same in the catalogue's templates and on a setup's mount. */
+const payloadColumns = () => ({
+  category: text("category", { enum: PAYLOAD_CATEGORIES }).notNull(),
+  massKg: real("mass_kg").notNull(),
+  shape: text("shape", { enum: PAYLOAD_SHAPES }).notNull(),
+  lengthM: real("length_m").notNull(),
+  widthM: real("width_m").notNull(),
+  heightM: real("height_m").notNull(),
+  attachment: text("attachment", { enum: ATTACHMENTS }).notNull(),
+  dragAreaM2: real("drag_area_m2").notNull().default(0),
+  // The payload's centre of mass from the mount's attachment point (z negative hangs below).
+  offsetXM: real("offset_x_m").notNull().default(0),
+  offsetZM: real("offset_z_m").notNull(),
+});
+
 export const payloadTemplates = sqliteTable(
   "payload_templates",
   {
     id: text("id").primaryKey(),
     name: text("name").notNull().unique(),
-    category: text("category", { enum: PAYLOAD_CATEGORIES }).notNull(),
     description: text("description").notNull().default(""),
-    massKg: real("mass_kg").notNull(),
-    shape: text("shape", { enum: PAYLOAD_SHAPES }).notNull(),
-    lengthM: real("length_m").notNull(),
-    widthM: real("width_m").notNull(),
-    heightM: real("height_m").notNull(),
-    attachment: text("attachment", { enum: ATTACHMENTS }).notNull(),
-    dragAreaM2: real("drag_area_m2").notNull(),
-    // The payload's centre of mass from the mount's attachment point (z negative hangs below).
-    offsetXM: real("offset_x_m").notNull().default(0),
-    offsetZM: real("offset_z_m").notNull(),
+    ...payloadColumns(),
   },
   (t) => [
     check("payload_templates_category_check", inList("category", PAYLOAD_CATEGORIES)),
@@ -278,17 +283,8 @@ export const setupPayloads = sqliteTable(
     templateId: text("template_id").references(() => payloadTemplates.id, { onDelete: "set null" }),
     sortOrder: integer("sort_order").notNull(),
     name: text("name").notNull(),
-    category: text("category", { enum: PAYLOAD_CATEGORIES }).notNull(),
-    massKg: real("mass_kg").notNull(),
-    shape: text("shape", { enum: PAYLOAD_SHAPES }).notNull(),
-    lengthM: real("length_m").notNull(),
-    widthM: real("width_m").notNull(),
-    heightM: real("height_m").notNull(),
-    attachment: text("attachment", { enum: ATTACHMENTS }).notNull(),
     adapterId: text("adapter_id").references(() => adapters.id),
-    dragAreaM2: real("drag_area_m2").notNull().default(0),
-    offsetXM: real("offset_x_m").notNull().default(0),
-    offsetZM: real("offset_z_m").notNull(),
+    ...payloadColumns(),
   },
   (t) => [
     uniqueIndex("setup_payloads_order_idx").on(t.setupId, t.sortOrder),

@@ -19,15 +19,8 @@ import { STANDARD_GRAVITY_MS2, degreesToRadians } from "./units-si";
 import type { Vec } from "./vec";
 import { solveWindCase, type WindCase, type WindModel, type WindOutcome } from "./wind";
 
-export interface WindSummary {
-  readonly speedMS: number;
-  readonly trimDeg: number;
-  readonly tetherAngleDeg: number;
-  readonly tensionN: number;
-  readonly dynamicPressurePa: number;
-  readonly liftN: number;
-  readonly dragN: number;
-}
+/** The wind or gust case as the report gives it: the solver's own result. */
+export type WindSummary = WindCase;
 
 export interface BalanceResult {
   readonly airDensityKgM3: number;
@@ -82,14 +75,6 @@ export function buildWindModel(input: Input, statics: WindModel["statics"], cent
     cx: (aero?.pressureCentre.x ?? tether.x) - tether.x,
     cz: (aero?.pressureCentre.z ?? tether.z) - tether.z,
     payloadDrag,
-  };
-}
-
-function summarise(outcome: WindOutcome): WindSummary | null {
-  const c: WindCase | null = outcome.case;
-  return c && {
-    speedMS: c.speedMS, trimDeg: c.trimDeg, tetherAngleDeg: c.tetherAngleDeg, tensionN: c.tensionN,
-    dynamicPressurePa: c.dynamicPressurePa, liftN: c.liftN, dragN: c.dragN,
   };
 }
 
@@ -252,8 +237,8 @@ export function evaluateBalance(input: Input): BalanceResult {
     freeLiftRatio,
     centreOfMass: mass.centreOfMass,
     calmTrimDeg: calm.trimDeg,
-    wind: summarise(windOutcome),
-    gust: gustOutcome ? summarise(gustOutcome) : null,
+    wind: windOutcome.case,
+    gust: gustOutcome ? gustOutcome.case : null,
     maxTetherOutM: maxOutM,
     helium,
     payloadCentres,
