@@ -79,7 +79,7 @@ export function BalancePanel() {
 
       <div className="panel p-4">
         <h2 className="text-lg">Flags</h2>
-        <div className="mt-2"><FlagList flags={result.flags} /></div>
+        <div className="mt-2"><FlagList flags={result.flags} unitSystem={units} /></div>
       </div>
 
       <BalanceCharts />

@@ -1,11 +1,13 @@
 "use client";
+import type { UnitSystem } from "@/db/schema";
 import type { Flag } from "@/lib/balance";
+import { flagTextIn } from "@/lib/flag-text";
 import { FlagIcon } from "@/components/ui/flag-badge";
 
 const ORDER = { stop: 0, caution: 1, ok: 2 } as const;
 
 /** Every flag with its icon, its word and its plain message; the worst first. */
-export function FlagList({ flags }: { flags: readonly Flag[] }) {
+export function FlagList({ flags, unitSystem = "metric" }: { flags: readonly Flag[]; unitSystem?: UnitSystem }) {
   const sorted = [...flags].sort((a, b) => ORDER[a.level] - ORDER[b.level]);
   return (
     <ul className="space-y-1.5" data-testid="flag-list">
@@ -13,7 +15,7 @@ export function FlagList({ flags }: { flags: readonly Flag[] }) {
         <li key={`${flag.code}-${flag.payloadIndex ?? ""}-${i}`} className="flex gap-2 text-sm" data-flag-code={flag.code} data-flag-level={flag.level}>
           <span className="mt-0.5 shrink-0"><FlagIcon level={flag.level} /></span>
           <span>
-            <span className="font-medium">{flag.level}</span> · {flag.message}
+            <span className="font-medium">{flag.level}</span> · {flagTextIn(flag.message, unitSystem)}
           </span>
         </li>
       ))}
