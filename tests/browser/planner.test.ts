@@ -115,6 +115,9 @@ describe("the Planner in Chromium", () => {
     await expect.poll(() => planner.page.getByTestId("gross-lift").innerText()).toMatch(/ lb$/);
     await expect(planner.page.getByTestId("max-tether").innerText()).resolves.toMatch(/ ft$/);
     await expect(planner.page.getByTestId("mount-controls").innerText()).resolves.toMatch(/ft/);
+    const flagText = await planner.page.getByTestId("flag-list").innerText();
+    expect(flagText).toMatch(/ lb\b/);
+    expect(flagText).not.toMatch(/\d kg\b/);
     await screenshot(planner.page, "planner-7-imperial");
     await planner.page.reload();
     await planner.page.getByTestId("planner").waitFor();
