@@ -28,7 +28,14 @@ afterAll(async () => {
 
 describe("the Planner in Chromium", () => {
   it("shows the seeded setup in 3D and updates trim and flags live while the mount is dragged", async () => {
-    const planner = new PlannerPage(await context.newPage());
+    const page = await context.newPage();
+    // Nothing may need the internet at run time: every request stays on the app's own origin.
+    const foreignRequests: string[] = [];
+    page.on("request", (request) => {
+      const url = new URL(request.url());
+      if (!["data:", "blob:"].includes(url.protocol) && url.origin !== new URL(baseURL).origin) foreignRequests.push(request.url());
+    });
+    const planner = new PlannerPage(page);
     await planner.open(SETUP_ID);
     await planner.waitForScene();
     await screenshot(planner.page, "planner-1-open");
@@ -44,6 +51,7 @@ describe("the Planner in Chromium", () => {
     // The calm-trim flag's message carries the new figure.
     expect(await planner.page.getByTestId("flag-list").innerText()).not.toBe(flagsTextBefore);
     await screenshot(planner.page, "planner-2-dragged");
+    expect(foreignRequests).toEqual([]);
 
     await planner.page.close();
   });
