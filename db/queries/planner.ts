@@ -91,7 +91,7 @@ export function draftFromRows(row: SetupRow, payloadRows: (typeof setupPayloads.
   };
 }
 
-/** A setup with its payloads, or null; owners only unless `anyOwner` (the review desk reads all). */
+/** A setup with its payloads, or null: only its owner's when `ownerId` is given, any when it is null (staff). */
 export async function getSetupById({ id, ownerId }: { id: string; ownerId: string | null }): Promise<StoredSetup | null> {
   const db = getDb();
   const where = ownerId === null ? eq(setups.id, id) : and(eq(setups.id, id), eq(setups.ownerId, ownerId));

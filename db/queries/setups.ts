@@ -1,5 +1,5 @@
 import "server-only";
-import { and, desc, eq, inArray } from "drizzle-orm";
+import { desc, eq, inArray } from "drizzle-orm";
 import { getDb } from "@/db";
 import { envelopeModels, setups, user, type SetupStatus } from "@/db/schema";
 
@@ -44,6 +44,6 @@ export async function listReviewQueue({
     .from(setups)
     .innerJoin(envelopeModels, eq(setups.modelId, envelopeModels.id))
     .innerJoin(user, eq(setups.ownerId, user.id))
-    .where(and(inArray(setups.status, statuses)))
+    .where(inArray(setups.status, statuses))
     .orderBy(setups.submittedAt);
 }
