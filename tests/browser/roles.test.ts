@@ -58,7 +58,7 @@ describe("signing in as each demo role in Chromium", () => {
       if (demo.refusedAt) {
         const response = await page.goto(demo.refusedAt);
         expect(response?.status()).toBe(403);
-        await expect(page.getByTestId("forbidden").isVisible()).resolves.toBe(true);
+        await page.getByTestId("forbidden").waitFor();
         await screenshot(page, `foundation-${demo.role}-refused`);
       } else {
         for (const path of ["/review", "/workshop", "/insight"]) {

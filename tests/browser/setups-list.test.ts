@@ -41,7 +41,7 @@ describe("the Setups list in Chromium", () => {
     await screenshot(page, "setups-list-duplicated");
 
     await page.getByRole("button", { name: "Delete Copy of New setup on Ridge 0.6" }).click();
-    await expect(page.getByRole("group", { name: "Confirm delete" }).isVisible()).resolves.toBe(true);
+    await page.getByRole("group", { name: "Confirm delete" }).waitFor();
     await page.getByTestId("confirm-delete").click();
     await expect.poll(() => rows.count()).toBe(before + 1);
     await expect(page.getByText("Copy of New setup on Ridge 0.6").count()).resolves.toBe(0);
@@ -57,7 +57,9 @@ describe("the Setups list in Chromium", () => {
     const signIn = new SignInPage(page);
     await signIn.signIn("kasper@trimrail.test", DEMO_PASSWORD);
     await page.waitForURL(/\/setups\/set-wren-whip$/);
-    await expect(page.getByRole("heading", { name: "Nothing here" }).isVisible()).resolves.toBe(true);
+    await page.getByRole("heading", { name: "Nothing here" }).waitFor();
+    const direct = await page.goto("/setups/set-wren-whip");
+    expect(direct?.status()).toBe(404);
     await context.close();
   });
 });
