@@ -19,10 +19,14 @@ export function PlannerToolbar() {
   const worst = usePlanner((s) => worstLevel(s.result.flags));
   const unitSystem = usePlanner((s) => s.unitSystem);
   const [acknowledged, setAcknowledged] = useState(false);
-  const [message, setMessage] = useState<{ kind: "ok" | "error"; text: string } | null>(null);
+  const [message, setMessage] = useState<{ kind: "ok" | "error"; text: string; conflict?: boolean } | null>(null);
 
   const report = (error: unknown) =>
-    setMessage({ kind: "error", text: error instanceof ApiError ? error.message : "The server could not be reached; nothing was saved." });
+    setMessage({
+      kind: "error",
+      text: error instanceof ApiError ? error.message : "The server could not be reached; nothing was saved.",
+      conflict: error instanceof ApiError && error.status === 409,
+    });
 
   const save = useMutation({
     mutationFn: () => {
@@ -108,6 +112,11 @@ export function PlannerToolbar() {
       {message && (
         <p role={message.kind === "error" ? "alert" : "status"} className={`basis-full text-sm ${message.kind === "error" ? "text-flag-stop" : "text-flag-ok"}`} data-testid="save-message">
           {message.text}
+          {message.conflict && (
+            <button type="button" className="ml-2 underline" onClick={() => window.location.reload()} data-testid="load-saved-version">
+              Load the saved version
+            </button>
+          )}
         </p>
       )}
     </div>

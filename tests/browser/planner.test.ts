@@ -109,7 +109,7 @@ describe("the Planner in Chromium", () => {
     expect(conflict).toMatch(/saved elsewhere/);
     await screenshot(second.page, "planner-6-conflict");
 
-    await second.page.reload();
+    await Promise.all([second.page.waitForEvent("load"), second.page.getByTestId("load-saved-version").click()]);
     await second.page.getByTestId("planner").waitFor();
     expect(await second.mountPositionText()).toBe(savedPosition);
     await first.page.close();
