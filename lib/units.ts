@@ -1,22 +1,13 @@
 import type { UnitSystem } from "@/db/schema";
+import { CUBIC_FOOT_M3, FOOT_M, INCH_M, POUND_FORCE_N, POUND_KG } from "@/lib/balance/units-si";
 
-// Display units only: the engine and the database stay in SI. Exact definitions:
-// 1 ft = 0.3048 m, 1 lb = 0.45359237 kg (international yard and pound, 1959), 1 oz = 1/16 lb,
-// 1 knot = 1852 m per hour, 1 mph = 1609.344 m per hour, 1 lbf = 4.4482216152605 N (lb × g0).
-export const METRES_PER_FOOT = 0.3048;
-export const KG_PER_POUND = 0.45359237;
-export const KG_PER_OUNCE = KG_PER_POUND / 16;
-export const CUBIC_METRES_PER_CUBIC_FOOT = METRES_PER_FOOT ** 3;
-export const MS_PER_KNOT = 1852 / 3600;
-export const MS_PER_MPH = 1609.344 / 3600;
-export const NEWTONS_PER_POUND_FORCE = KG_PER_POUND * 9.80665;
-
-export const feetToMetres = (feet: number): number => feet * METRES_PER_FOOT;
-export const metresToFeet = (metres: number): number => metres / METRES_PER_FOOT;
-export const poundsToKg = (pounds: number): number => pounds * KG_PER_POUND;
-export const kgToPounds = (kg: number): number => kg / KG_PER_POUND;
-export const celsiusToFahrenheit = (c: number): number => (c * 9) / 5 + 32;
-export const fahrenheitToCelsius = (f: number): number => ((f - 32) * 5) / 9;
+// Display units only: the engine and the database stay in SI. The exact definitions (1 ft = 0.3048 m,
+// 1 lb = 0.45359237 kg, lbf = lb × g0) are the engine's own; here only what a display adds:
+// 1 oz = 1/16 lb, 1 mph = 1609.344 m per hour, °F from °C.
+const OUNCE_KG = POUND_KG / 16;
+const MPH_MS = 1609.344 / 3600;
+const celsiusToFahrenheit = (c: number): number => (c * 9) / 5 + 32;
+const fahrenheitToCelsius = (f: number): number => ((f - 32) * 5) / 9;
 
 export type Quantity = "mass" | "itemMass" | "length" | "smallLength" | "volume" | "speed" | "temperature" | "temperatureDifference" | "force" | "massPerLength" | "area";
 
@@ -52,17 +43,17 @@ const UNITS: Record<UnitSystem, Record<Quantity, UnitDef>> = {
   },
   imperial: {
     // Lift and totals read in pounds; a single payload item in ounces, as the trade weighs them.
-    mass: linear("lb", KG_PER_POUND, 2),
-    itemMass: linear("oz", KG_PER_OUNCE, 1),
-    length: linear("ft", METRES_PER_FOOT, 2),
-    smallLength: linear("in", 0.0254, 2),
-    volume: linear("ft³", CUBIC_METRES_PER_CUBIC_FOOT, 2),
-    speed: linear("mph", MS_PER_MPH, 1),
+    mass: linear("lb", POUND_KG, 2),
+    itemMass: linear("oz", OUNCE_KG, 1),
+    length: linear("ft", FOOT_M, 2),
+    smallLength: linear("in", INCH_M, 2),
+    volume: linear("ft³", CUBIC_FOOT_M3, 2),
+    speed: linear("mph", MPH_MS, 1),
     temperature: { unit: "°F", toDisplay: celsiusToFahrenheit, toSI: fahrenheitToCelsius, decimals: 1 },
     temperatureDifference: linear("°F", 5 / 9, 1),
-    force: linear("lbf", NEWTONS_PER_POUND_FORCE, 2),
-    massPerLength: linear("oz/ft", KG_PER_OUNCE / METRES_PER_FOOT, 3),
-    area: linear("in²", 0.0254 ** 2, 1),
+    force: linear("lbf", POUND_FORCE_N, 2),
+    massPerLength: linear("oz/ft", OUNCE_KG / FOOT_M, 3),
+    area: linear("in²", INCH_M ** 2, 1),
   },
 };
 

@@ -7,7 +7,6 @@ import { FigureRow } from "./figure-row";
 import { FlagList } from "./flag-list";
 import { FreeLiftBar } from "./free-lift-bar";
 import { usePlanner } from "./planner-context";
-import { modelOf } from "./store";
 import { BalanceCharts } from "./balance-charts";
 
 const deg = (value: number | null | undefined): string => (value === null || value === undefined ? "none" : `${value.toFixed(1)}°`);
@@ -18,9 +17,7 @@ export function BalancePanel() {
   const input = usePlanner((s) => s.input);
   const units = usePlanner((s) => s.unitSystem);
   const lastEditAtMs = usePlanner((s) => s.lastEditAtMs);
-  const hull = usePlanner((s) => modelOf(s.catalogue, s.draft.modelId).hullJson as { maxDiameterM?: number } | null);
   const payloads = usePlanner((s) => s.draft.payloads);
-  const tetherOutM = usePlanner((s) => s.draft.tether?.lengthOutM ?? null);
 
   // Edit-to-panel time, measured by the page: to this commit (the panel's DOM holds the new figures)
   // and to the next animation frame (they are on screen, after the 3D view's own frame).
@@ -84,13 +81,7 @@ export function BalancePanel() {
 
       <BalanceCharts />
 
-      <Cautions
-        gasVolumeM3={input.envelope.gasVolumeM3}
-        maxDiameterM={hull?.maxDiameterM ?? null}
-        tetherOutM={tetherOutM}
-        hasAntenna={payloads.some((p) => p.category === "antenna")}
-        result={result}
-      />
+      <Cautions hasAntenna={payloads.some((p) => p.category === "antenna")} result={result} />
     </section>
   );
 }

@@ -25,12 +25,17 @@ const listColumns = {
   submittedAt: setups.submittedAt,
 };
 
-export async function listSetupsForOwner({ ownerId }: { ownerId: string }): Promise<SetupListItem[]> {
+/** A setup list row: the setup with its model's and its owner's names. */
+function selectSetupList() {
   return getDb()
     .select(listColumns)
     .from(setups)
     .innerJoin(envelopeModels, eq(setups.modelId, envelopeModels.id))
-    .innerJoin(user, eq(setups.ownerId, user.id))
+    .innerJoin(user, eq(setups.ownerId, user.id));
+}
+
+export async function listSetupsForOwner({ ownerId }: { ownerId: string }): Promise<SetupListItem[]> {
+  return selectSetupList()
     .where(eq(setups.ownerId, ownerId))
     .orderBy(desc(setups.updatedAt));
 }
@@ -39,11 +44,7 @@ export async function listSetupsForOwner({ ownerId }: { ownerId: string }): Prom
 export async function listReviewQueue({
   statuses = ["submitted"],
 }: { statuses?: SetupStatus[] } = {}): Promise<SetupListItem[]> {
-  return getDb()
-    .select(listColumns)
-    .from(setups)
-    .innerJoin(envelopeModels, eq(setups.modelId, envelopeModels.id))
-    .innerJoin(user, eq(setups.ownerId, user.id))
+  return selectSetupList()
     .where(inArray(setups.status, statuses))
     .orderBy(setups.submittedAt);
 }
