@@ -4,24 +4,17 @@ import { check, index, integer, real, sqliteTable, text, uniqueIndex } from "dri
 // One file for the whole product so later work extends these tables instead of rewriting them.
 // TS names are camelCase, SQL names snake_case; every enum column carries a CHECK constraint.
 
-export const ROLES = ["customer", "support", "maker"] as const;
-export type Role = (typeof ROLES)[number];
-export const UNIT_SYSTEMS = ["metric", "imperial"] as const;
-export type UnitSystem = (typeof UNIT_SYSTEMS)[number];
-export const SETUP_STATUSES = ["draft", "submitted", "changes_requested", "approved"] as const;
-export type SetupStatus = (typeof SETUP_STATUSES)[number];
-export const FLAG_LEVELS = ["ok", "caution", "stop"] as const;
-export type FlagLevel = (typeof FLAG_LEVELS)[number];
-export const THREADS = ["1/4-20 UNC", "3/8-16 UNC"] as const;
-export type Thread = (typeof THREADS)[number];
-export const ATTACHMENTS = ["1/4-20 UNC", "3/8-16 UNC", "strap"] as const;
-export type Attachment = (typeof ATTACHMENTS)[number];
-export const PAYLOAD_CATEGORIES = ["antenna", "camera", "sensor", "radio", "light", "other"] as const;
-export type PayloadCategory = (typeof PAYLOAD_CATEGORIES)[number];
-export const PAYLOAD_SHAPES = ["box", "cylinder", "rod"] as const;
-export type PayloadShape = (typeof PAYLOAD_SHAPES)[number];
-export const DECISION_OUTCOMES = ["approved", "changes_requested"] as const;
-export type DecisionOutcome = (typeof DECISION_OUTCOMES)[number];
+import {
+  ATTACHMENTS,
+  DECISION_OUTCOMES,
+  FLAG_LEVELS,
+  PAYLOAD_CATEGORIES,
+  PAYLOAD_SHAPES,
+  ROLES,
+  SETUP_STATUSES,
+  THREADS,
+  UNIT_SYSTEMS,
+} from "../lib/domain";
 
 const inList = (column: string, values: readonly string[]) =>
   sql.raw(`${column} in (${values.map((v) => `'${v.replace(/'/g, "''")}'`).join(", ")})`);

@@ -1,4 +1,4 @@
-import type { Attachment, PayloadCategory, PayloadShape, Role, SetupStatus, Thread } from "./schema";
+import type { Attachment, PayloadCategory, PayloadShape, Role, SetupStatus, Thread } from "../lib/domain";
 
 // The invented demo scenario: a small workshop that sews three envelope models of its own naming,
 // a few customers who fly antennas, cameras and sensors under them, and a support desk.

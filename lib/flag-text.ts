@@ -1,4 +1,4 @@
-import type { UnitSystem } from "@/db/schema";
+import type { UnitSystem } from "@/lib/domain";
 import { toDisplay, type Quantity } from "./units";
 
 // The engine words its flags in SI. For a person who reads imperial, the figures in those messages

@@ -1,4 +1,4 @@
-import type { UnitSystem } from "@/db/schema";
+import type { UnitSystem } from "@/lib/domain";
 import { CUBIC_FOOT_M3, FOOT_M, INCH_M, POUND_FORCE_N, POUND_KG } from "@/lib/balance/units-si";
 
 // Display units only: the engine and the database stay in SI. The exact definitions (1 ft = 0.3048 m,

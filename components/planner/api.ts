@@ -1,4 +1,4 @@
-import type { SetupStatus, UnitSystem } from "@/db/schema";
+import type { SetupStatus, UnitSystem } from "@/lib/domain";
 import type { AppError } from "@/lib/errors";
 import type { SetupDraft } from "@/lib/setups/setup-draft";
 

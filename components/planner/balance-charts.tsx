@@ -2,7 +2,7 @@
 import { useDeferredValue, useMemo } from "react";
 import { CartesianGrid, Line, LineChart, ReferenceLine, ResponsiveContainer, Tooltip, XAxis, YAxis } from "recharts";
 import { evaluateBalance, resolveLimits, type BalanceInput } from "@/lib/balance";
-import type { UnitSystem } from "@/db/schema";
+import type { UnitSystem } from "@/lib/domain";
 import { toDisplay, unitOf } from "@/lib/units";
 import { usePlanner } from "./planner-context";
 

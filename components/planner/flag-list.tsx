@@ -1,5 +1,5 @@
 "use client";
-import type { UnitSystem } from "@/db/schema";
+import type { UnitSystem } from "@/lib/domain";
 import type { Flag } from "@/lib/balance";
 import { flagTextIn } from "@/lib/flag-text";
 import { FlagIcon } from "@/components/ui/flag-badge";

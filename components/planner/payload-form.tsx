@@ -2,7 +2,7 @@
 import { zodResolver } from "@hookform/resolvers/zod";
 import { useForm } from "react-hook-form";
 import { z } from "zod";
-import { ATTACHMENTS, PAYLOAD_CATEGORIES, PAYLOAD_SHAPES, type UnitSystem } from "@/db/schema";
+import { ATTACHMENTS, PAYLOAD_CATEGORIES, PAYLOAD_SHAPES, type UnitSystem } from "@/lib/domain";
 import { setupPayloadDraftSchema, type SetupPayloadDraft } from "@/lib/setups/setup-draft";
 import { fromDisplay, toDisplay, unitOf } from "@/lib/units";
 import type { PlannerAdapter } from "./types";

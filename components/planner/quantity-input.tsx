@@ -1,6 +1,6 @@
 "use client";
 import { useEffect, useId, useState } from "react";
-import type { UnitSystem } from "@/db/schema";
+import type { UnitSystem } from "@/lib/domain";
 import { decimalsOf, fromDisplay, toDisplay, unitOf, type Quantity } from "@/lib/units";
 
 interface QuantityInputProps {

@@ -1,5 +1,5 @@
 import { createStore, type StoreApi } from "zustand/vanilla";
-import type { SetupStatus, UnitSystem } from "@/db/schema";
+import type { SetupStatus, UnitSystem } from "@/lib/domain";
 import { evaluateBalance, solveLevelTrimPositionX, type BalanceInput, type BalanceResult } from "@/lib/balance";
 import { toBalanceInput } from "@/lib/setups/balance-input";
 import type { SetupDraft, SetupPayloadDraft } from "@/lib/setups/setup-draft";

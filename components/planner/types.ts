@@ -1,4 +1,4 @@
-import type { SetupStatus, UnitSystem } from "@/db/schema";
+import type { SetupStatus, UnitSystem } from "@/lib/domain";
 import type { AdapterSpec, ModelSpec, MountSpec, UnitSpec } from "@/lib/setups/balance-input";
 import type { SetupDraft, SetupPayloadDraft } from "@/lib/setups/setup-draft";
 

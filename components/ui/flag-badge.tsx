@@ -1,4 +1,4 @@
-import type { FlagLevel } from "@/db/schema";
+import type { FlagLevel } from "@/lib/domain";
 
 const LABEL: Record<FlagLevel, string> = { ok: "ok", caution: "caution", stop: "stop" };
 const COLOUR: Record<FlagLevel, string> = {

@@ -1,7 +1,7 @@
 "use client";
 import { useState, useTransition } from "react";
 import { changeRoleAction } from "@/app/(app)/workshop/actions";
-import { ROLES, type Role } from "@/db/schema";
+import { ROLES, type Role } from "@/lib/domain";
 
 interface RoleSelectProps {
   userId: string;

@@ -2,7 +2,8 @@ import "server-only";
 import { and, eq, inArray } from "drizzle-orm";
 import { randomUUID } from "node:crypto";
 import { getDb } from "@/db";
-import { auditLog, setupPayloads, setups, type FlagLevel, type SetupStatus } from "@/db/schema";
+import { auditLog, setupPayloads, setups } from "@/db/schema";
+import type { FlagLevel, SetupStatus } from "@/lib/domain";
 import type { SetupDraft } from "@/lib/setups/setup-draft";
 
 type Tx = Parameters<Parameters<ReturnType<typeof getDb>["transaction"]>[0]>[0];

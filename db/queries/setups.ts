@@ -1,7 +1,8 @@
 import "server-only";
 import { desc, eq, inArray } from "drizzle-orm";
 import { getDb } from "@/db";
-import { envelopeModels, setups, user, type SetupStatus } from "@/db/schema";
+import { envelopeModels, setups, user } from "@/db/schema";
+import type { SetupStatus } from "@/lib/domain";
 
 export interface SetupListItem {
   id: string;

@@ -2,7 +2,8 @@ import "server-only";
 import { asc, eq } from "drizzle-orm";
 import { randomUUID } from "node:crypto";
 import { getDb } from "@/db";
-import { auditLog, user, type Role, type UnitSystem } from "@/db/schema";
+import { auditLog, user } from "@/db/schema";
+import type { Role, UnitSystem } from "@/lib/domain";
 
 export interface UserListItem {
   id: string;

@@ -1,4 +1,4 @@
-import type { Role, UnitSystem } from "@/db/schema";
+import type { Role, UnitSystem } from "@/lib/domain";
 
 export interface Viewer {
   id: string;
@@ -16,7 +16,3 @@ export function checkAccess(viewer: Viewer | null, allowedRoles?: readonly Role[
   if (allowedRoles && !allowedRoles.includes(viewer.role)) return "forbidden";
   return "ok";
 }
-
-export const STAFF_ROLES = ["support", "maker"] as const satisfies readonly Role[];
-export const MAKER_ONLY = ["maker"] as const satisfies readonly Role[];
-export const CUSTOMER_ONLY = ["customer"] as const satisfies readonly Role[];

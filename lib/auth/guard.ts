@@ -1,7 +1,7 @@
 import "server-only";
 import { headers } from "next/headers";
 import { forbidden, redirect } from "next/navigation";
-import { ROLES, UNIT_SYSTEMS, type Role } from "@/db/schema";
+import { ROLES, UNIT_SYSTEMS, type Role } from "@/lib/domain";
 import { fail, errorResponse, type Result } from "@/lib/errors";
 import { checkAccess, type Viewer } from "./access";
 import { auth } from "./server";

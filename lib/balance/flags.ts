@@ -5,32 +5,9 @@
 import type { LimitsInput } from "./schema";
 import { ksiToPascals } from "./units-si";
 
-export type FlagLevel = "ok" | "caution" | "stop";
+import { FLAG_CODES, FLAG_LEVELS, type FlagCode, type FlagLevel } from "../domain/flags";
 
-export const FLAG_CODES = [
-  "free-lift",
-  "trim-calm",
-  "trim-unstable",
-  "trim-wind",
-  "trim-gust",
-  "tether-angle-wind",
-  "tether-angle-gust",
-  "mount-off-rail",
-  "thread-mismatch",
-  "adapter-mismatch",
-  "mount-rated-load",
-  "thread-capacity",
-  "safety-line",
-  "clearance-hull",
-  "clearance-tether",
-  "tether-length",
-  "tether-strength",
-  "helium-top-up",
-  "moored-balloon-rules",
-  "tether-height",
-] as const;
-
-export type FlagCode = (typeof FLAG_CODES)[number];
+export { FLAG_CODES, FLAG_LEVELS, type FlagCode, type FlagLevel };
 
 export interface Flag {
   readonly code: FlagCode;

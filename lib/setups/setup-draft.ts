@@ -1,5 +1,5 @@
 import { z } from "zod";
-import { ATTACHMENTS, PAYLOAD_CATEGORIES, PAYLOAD_SHAPES } from "@/db/schema";
+import { ATTACHMENTS, PAYLOAD_CATEGORIES, PAYLOAD_SHAPES } from "@/lib/domain";
 
 // What a person edits in the Planner and what the server stores: the inputs of a setup, never its
 // computed balance (the server recomputes that from these and the catalogue).

@@ -1,5 +1,5 @@
 import { EmptyState } from "@/components/ui/empty-state";
-import { MAKER_ONLY } from "@/lib/auth/access";
+import { MAKER_ONLY } from "@/lib/domain";
 import { requirePageViewer } from "@/lib/auth/guard";
 
 export const metadata = { title: "Insight" };

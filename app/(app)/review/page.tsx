@@ -1,7 +1,7 @@
 import { listReviewQueue } from "@/db/queries/setups";
 import { EmptyState } from "@/components/ui/empty-state";
 import { SetupTable } from "@/components/ui/setup-table";
-import { STAFF_ROLES } from "@/lib/auth/access";
+import { STAFF_ROLES } from "@/lib/domain";
 import { requirePageViewer } from "@/lib/auth/guard";
 
 export const metadata = { title: "Review desk" };

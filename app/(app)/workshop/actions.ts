@@ -3,7 +3,7 @@ import { revalidatePath } from "next/cache";
 import { z } from "zod";
 import { roleChangeSchema, userIdSchema } from "@/app/api/users/[id]/role/schema";
 import { setUserRole } from "@/db/queries/users";
-import { MAKER_ONLY } from "@/lib/auth/access";
+import { MAKER_ONLY } from "@/lib/domain";
 import { requireActionViewer } from "@/lib/auth/guard";
 import { fail, issuesFromZod, ok, type Result } from "@/lib/errors";
 

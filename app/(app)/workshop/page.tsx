@@ -1,7 +1,7 @@
 import { listEnvelopeModels, listEnvelopeUnits, listMounts, listPayloadTemplates } from "@/db/queries/catalogue";
 import { listUsers } from "@/db/queries/users";
 import { RoleSelect } from "@/components/workshop/role-select";
-import { MAKER_ONLY } from "@/lib/auth/access";
+import { MAKER_ONLY } from "@/lib/domain";
 import { requirePageViewer } from "@/lib/auth/guard";
 
 export const metadata = { title: "Workshop" };

@@ -1,5 +1,6 @@
 import { describe, expect, it } from "vitest";
-import { MAKER_ONLY, STAFF_ROLES, checkAccess, type Viewer } from "@/lib/auth/access";
+import { checkAccess, type Viewer } from "@/lib/auth/access";
+import { MAKER_ONLY, STAFF_ROLES } from "@/lib/domain";
 import { navItemsFor } from "@/components/shell/nav-items";
 
 const viewerWith = (role: Viewer["role"]): Viewer => ({ id: "u1", name: "Test", email: "t@example.test", role, unitSystem: "metric" });

@@ -1,5 +1,5 @@
 import { z } from "zod";
-import { UNIT_SYSTEMS } from "@/db/schema";
+import { UNIT_SYSTEMS } from "@/lib/domain";
 import { setUnitSystem } from "@/db/queries/users";
 import { requireApiViewer } from "@/lib/auth/guard";
 import { errorResponse } from "@/lib/errors";

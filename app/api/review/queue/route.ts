@@ -1,5 +1,5 @@
 import { listReviewQueue } from "@/db/queries/setups";
-import { STAFF_ROLES } from "@/lib/auth/access";
+import { STAFF_ROLES } from "@/lib/domain";
 import { requireApiViewer } from "@/lib/auth/guard";
 
 /** GET /api/review/queue — submitted setups from every customer; support and maker only. */

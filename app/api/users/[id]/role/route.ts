@@ -1,5 +1,5 @@
 import { setUserRole } from "@/db/queries/users";
-import { MAKER_ONLY } from "@/lib/auth/access";
+import { MAKER_ONLY } from "@/lib/domain";
 import { requireApiViewer } from "@/lib/auth/guard";
 import { errorResponse } from "@/lib/errors";
 import { readValidBody } from "@/lib/http/read-json-body";

@@ -1,5 +1,5 @@
 import { z } from "zod";
-import { ROLES } from "@/db/schema";
+import { ROLES } from "@/lib/domain";
 
 export const roleChangeSchema = z.object({
   role: z.enum(ROLES, { message: `Role must be one of ${ROLES.join(", ")}.` }),

@@ -1,0 +1,4 @@
+export * from "./catalogue";
+export * from "./flags";
+export * from "./roles";
+export * from "./setups";
