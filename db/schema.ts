@@ -15,6 +15,9 @@ import {
   THREADS,
   UNIT_SYSTEMS,
 } from "../lib/domain";
+import type { BalanceInput, BalanceResult, HullParams, LimitsInput } from "../lib/balance";
+
+type AeroInput = NonNullable<BalanceInput["envelope"]["aero"]>;
 
 const inList = (column: string, values: readonly string[]) =>
   sql.raw(`${column} in (${values.map((v) => `'${v.replace(/'/g, "''")}'`).join(", ")})`);
@@ -113,7 +116,7 @@ export const envelopeModels = sqliteTable("envelope_models", {
   name: text("name").notNull(),
   description: text("description").notNull().default(""),
   // Parametric hull (lib/balance geometry's HullParams), kept as JSON so the GLB can be rebuilt.
-  hullJson: text("hull_json", { mode: "json" }).notNull(),
+  hullJson: text("hull_json", { mode: "json" }).$type<HullParams>().notNull(),
   gasVolumeM3: real("gas_volume_m3").notNull(),
   nominalMassKg: real("nominal_mass_kg").notNull(),
   buoyancyCentreXM: real("buoyancy_centre_x_m").notNull(),
@@ -127,9 +130,9 @@ export const envelopeModels = sqliteTable("envelope_models", {
   railZM: real("rail_z_m").notNull(),
   railTabCount: integer("rail_tab_count").notNull(),
   // { sailAreaM2, liftSlopePerRad, zeroLiftTrimDeg, dragCoefficient, pressureCentre: { x, z } }
-  aeroJson: text("aero_json", { mode: "json" }),
+  aeroJson: text("aero_json", { mode: "json" }).$type<AeroInput>(),
   // Flag limits for this model; missing keys fall back to the engine's defaults.
-  limitsJson: text("limits_json", { mode: "json" }).notNull().default(sql`'{}'`),
+  limitsJson: text("limits_json", { mode: "json" }).$type<LimitsInput>().notNull().default(sql`'{}'`),
   glbPath: text("glb_path").notNull(),
   active: integer("active", { mode: "boolean" }).notNull().default(true),
   createdAt: createdAt(),
@@ -251,7 +254,7 @@ export const setups = sqliteTable(
     // Optimistic concurrency: every write must name the version it read, and bumps it.
     version: integer("version").notNull().default(1),
     // The server's own evaluation of the stored input (a BalanceResult), never the client's.
-    resultJson: text("result_json", { mode: "json" }),
+    resultJson: text("result_json", { mode: "json" }).$type<BalanceResult>(),
     worstFlag: text("worst_flag", { enum: FLAG_LEVELS }),
     cautionsAcknowledged: integer("cautions_acknowledged", { mode: "boolean" }).notNull().default(false),
     submittedAt: integer("submitted_at", { mode: "timestamp_ms" }),
@@ -316,7 +319,7 @@ export const decisions = sqliteTable(
     outcome: text("outcome", { enum: DECISION_OUTCOMES }).notNull(),
     setupVersion: integer("setup_version").notNull(),
     // Reason codes (e.g. "trim", "free-lift", "attachment") so Insight can count why setups fail.
-    reasonsJson: text("reasons_json", { mode: "json" }).notNull().default(sql`'[]'`),
+    reasonsJson: text("reasons_json", { mode: "json" }).$type<string[]>().notNull().default(sql`'[]'`),
     note: text("note").notNull().default(""),
     createdAt: createdAt(),
   },
@@ -353,7 +356,7 @@ export const auditLog = sqliteTable(
     action: text("action").notNull(), // e.g. "setup.save", "user.role"
     entityType: text("entity_type").notNull(),
     entityId: text("entity_id").notNull(),
-    detailJson: text("detail_json", { mode: "json" }).notNull().default(sql`'{}'`),
+    detailJson: text("detail_json", { mode: "json" }).$type<Record<string, unknown>>().notNull().default(sql`'{}'`),
     createdAt: createdAt(),
   },
   (t) => [index("audit_log_entity_idx").on(t.entityType, t.entityId)],

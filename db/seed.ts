@@ -3,6 +3,7 @@ import { eq } from "drizzle-orm";
 import { deriveEnvelopeGeometry, demoHulls, evaluateBalance, worstLevel, type DemoHullName } from "@/lib/balance";
 import { toBalanceInput, type SetupCatalogue } from "@/lib/setups/balance-input";
 import type { SetupDraft } from "@/lib/setups/setup-draft";
+import { columnsFromDraft, payloadRowsFromDraft } from "./setup-columns";
 import type { Database } from "./index";
 import * as t from "./schema";
 import {
@@ -132,20 +133,7 @@ export async function seedDemo(db: Database): Promise<SeedCounts> {
         .values({
           id: s.id,
           ownerId: s.ownerId,
-          name: s.name,
-          modelId: s.modelId,
-          unitId: s.unitId,
-          mountId: s.mountId,
-          mountPositionXM: draft.mountPositionXM,
-          siteName: s.siteName,
-          altitudeM: s.altitudeM,
-          temperatureC: s.temperatureC,
-          windMS: s.windMS,
-          gustMS: s.gustMS,
-          purity: s.purity,
-          tetherMassPerMetreKg: DEMO_TETHER.tetherMassPerMetreKg,
-          tetherLengthOutM: s.tetherLengthOutM,
-          tetherBreakingLoadN: DEMO_TETHER.tetherBreakingLoadN,
+          ...columnsFromDraft(draft),
           status: s.status,
           resultJson: result,
           worstFlag: worstLevel(result.flags),
@@ -157,7 +145,7 @@ export async function seedDemo(db: Database): Promise<SeedCounts> {
         .onConflictDoNothing()
         .returning({ id: t.setups.id });
       if (inserted.length === 0) return;
-      await tx.insert(t.setupPayloads).values(draft.payloads.map((p, i) => ({ ...p, id: `${s.id}-p${i}`, setupId: s.id, sortOrder: i })));
+      if (draft.payloads.length) await tx.insert(t.setupPayloads).values(payloadRowsFromDraft(s.id, draft, (i) => `${s.id}-p${i}`));
     });
   }
 

@@ -9,8 +9,11 @@ export const ERROR_STATUS = {
   not_found: 404,
   conflict: 409,
   payload_too_large: 413,
+  unsupported_media_type: 415,
   unprocessable: 422,
+  too_many_requests: 429,
   internal: 500,
+  unavailable: 503,
 } as const;
 
 export type ErrorCode = keyof typeof ERROR_STATUS;
@@ -24,6 +27,8 @@ export interface AppError {
   code: ErrorCode;
   message: string;
   issues?: FieldIssue[];
+  /** Set on `internal` errors: the id under which the server logged what went wrong. */
+  requestId?: string;
 }
 
 export type Result<T> = { ok: true; data: T } | { ok: false; error: AppError };

@@ -1,6 +1,6 @@
 import Link from "next/link";
 import { Logo } from "@/components/ui/logo";
-import { getViewer } from "@/lib/auth/guard";
+import { getViewer } from "@/lib/server/viewer";
 
 export default async function LandingPage() {
   const viewer = await getViewer();

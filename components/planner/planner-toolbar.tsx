@@ -3,7 +3,7 @@ import { useMutation } from "@tanstack/react-query";
 import { useState } from "react";
 import { worstLevel } from "@/lib/balance";
 import { FlagBadge } from "@/components/ui/flag-badge";
-import { ApiError, savePreferencesRequest, saveSetupRequest, submitSetupRequest } from "./api";
+import { ApiError, savePreferencesRequest, saveSetupRequest, submitSetupRequest } from "@/lib/client/api";
 import { usePlanner, usePlannerActions, usePlannerStoreApi } from "./planner-context";
 
 const STATUS_WORDS = { draft: "draft", submitted: "submitted for review", changes_requested: "changes requested", approved: "approved" } as const;

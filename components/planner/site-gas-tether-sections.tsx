@@ -1,4 +1,5 @@
 "use client";
+import { DEFAULT_TETHER, INPUT_LIMITS as L, MAX_NAME_LENGTH } from "@/lib/domain";
 import { usePlanner, usePlannerActions } from "./planner-context";
 import { QuantityInput } from "./quantity-input";
 import { Section } from "./section";
@@ -15,14 +16,14 @@ export function SiteSection() {
           <input
             className="mt-0.5 w-full rounded border border-hairline bg-white px-2 py-1"
             defaultValue={site.siteName}
-            maxLength={120}
+            maxLength={MAX_NAME_LENGTH}
             onBlur={(e) => setSite({ siteName: e.target.value.trim() })}
           />
         </label>
-        <QuantityInput label="Altitude above sea level" quantity="length" valueSI={site.altitudeM} unitSystem={units} minSI={-500} maxSI={6000} onCommit={(v) => v !== null && setSite({ altitudeM: v })} testId="altitude-input" />
-        <QuantityInput label="Air temperature" quantity="temperature" valueSI={site.temperatureC} unitSystem={units} minSI={-60} maxSI={55} optional placeholder="standard" onCommit={(v) => setSite({ temperatureC: v })} testId="temperature-input" />
-        <QuantityInput label="Wind" quantity="speed" valueSI={site.windMS} unitSystem={units} minSI={0} maxSI={40} onCommit={(v) => v !== null && setSite({ windMS: v })} testId="wind-input" />
-        <QuantityInput label="Gusts" quantity="speed" valueSI={site.gustMS} unitSystem={units} minSI={0} maxSI={60} optional placeholder="none" onCommit={(v) => setSite({ gustMS: v })} testId="gust-input" />
+        <QuantityInput label="Altitude above sea level" quantity="length" valueSI={site.altitudeM} unitSystem={units} minSI={L.altitudeM.min} maxSI={L.altitudeM.max} onCommit={(v) => v !== null && setSite({ altitudeM: v })} testId="altitude-input" />
+        <QuantityInput label="Air temperature" quantity="temperature" valueSI={site.temperatureC} unitSystem={units} minSI={L.temperatureC.min} maxSI={L.temperatureC.max} optional placeholder="standard" onCommit={(v) => setSite({ temperatureC: v })} testId="temperature-input" />
+        <QuantityInput label="Wind" quantity="speed" valueSI={site.windMS} unitSystem={units} minSI={L.windMS.min} maxSI={L.windMS.max} onCommit={(v) => v !== null && setSite({ windMS: v })} testId="wind-input" />
+        <QuantityInput label="Gusts" quantity="speed" valueSI={site.gustMS} unitSystem={units} minSI={L.gustMS.min} maxSI={L.gustMS.max} optional placeholder="none" onCommit={(v) => setSite({ gustMS: v })} testId="gust-input" />
       </div>
     </Section>
   );
@@ -57,9 +58,9 @@ export function GasSection() {
   return (
     <Section title="Gas" testId="section-gas" defaultOpen={false}>
       <div className="grid grid-cols-2 gap-3 sm:grid-cols-3">
-        {percentField("Helium purity (rest is air)", gas.purity, 0.5, "purity", "purity-input")}
-        {percentField("Fill", gas.fillFraction, 0.05, "fillFraction", "fill-input")}
-        <QuantityInput label="Superheat (gas warmer than air)" quantity="temperatureDifference" valueSI={gas.superheatK} unitSystem={units} minSI={-20} maxSI={40} onCommit={(v) => v !== null && setGas({ superheatK: v })} />
+        {percentField("Helium purity (rest is air)", gas.purity, L.purity.min, "purity", "purity-input")}
+        {percentField("Fill", gas.fillFraction, L.fillFraction.min, "fillFraction", "fill-input")}
+        <QuantityInput label="Superheat (gas warmer than air)" quantity="temperatureDifference" valueSI={gas.superheatK} unitSystem={units} minSI={L.superheatK.min} maxSI={L.superheatK.max} onCommit={(v) => v !== null && setGas({ superheatK: v })} />
       </div>
     </Section>
   );
@@ -69,7 +70,7 @@ export function TetherSection() {
   const tether = usePlanner((s) => s.draft.tether);
   const units = usePlanner((s) => s.unitSystem);
   const { setTether } = usePlannerActions();
-  const current = tether ?? { massPerMetreKg: 0.0012, lengthOutM: 30, breakingLoadN: 900 };
+  const current = tether ?? DEFAULT_TETHER;
   return (
     <Section title="Tether" testId="section-tether" defaultOpen={false}>
       <label className="flex items-center gap-2 text-sm">
@@ -78,9 +79,9 @@ export function TetherSection() {
       </label>
       {tether && (
         <div className="mt-3 grid grid-cols-2 gap-3 sm:grid-cols-3">
-          <QuantityInput label="Line mass" quantity="massPerLength" valueSI={tether.massPerMetreKg} unitSystem={units} minSI={0.00001} maxSI={1} onCommit={(v) => v !== null && setTether({ ...tether, massPerMetreKg: v })} />
-          <QuantityInput label="Line out" quantity="length" valueSI={tether.lengthOutM} unitSystem={units} minSI={0} maxSI={3000} onCommit={(v) => v !== null && setTether({ ...tether, lengthOutM: v })} testId="tether-length-input" />
-          <QuantityInput label="Breaking load" quantity="force" valueSI={tether.breakingLoadN} unitSystem={units} minSI={1} maxSI={1e6} onCommit={(v) => v !== null && setTether({ ...tether, breakingLoadN: v })} />
+          <QuantityInput label="Line mass" quantity="massPerLength" valueSI={tether.massPerMetreKg} unitSystem={units} minSI={L.tetherMassPerMetreKg.min} maxSI={L.tetherMassPerMetreKg.max} onCommit={(v) => v !== null && setTether({ ...tether, massPerMetreKg: v })} />
+          <QuantityInput label="Line out" quantity="length" valueSI={tether.lengthOutM} unitSystem={units} minSI={L.tetherLengthOutM.min} maxSI={L.tetherLengthOutM.max} onCommit={(v) => v !== null && setTether({ ...tether, lengthOutM: v })} testId="tether-length-input" />
+          <QuantityInput label="Breaking load" quantity="force" valueSI={tether.breakingLoadN} unitSystem={units} minSI={L.tetherBreakingLoadN.min} maxSI={L.tetherBreakingLoadN.max} onCommit={(v) => v !== null && setTether({ ...tether, breakingLoadN: v })} />
         </div>
       )}
     </Section>

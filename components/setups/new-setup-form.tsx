@@ -1,15 +1,27 @@
 "use client";
-import { useActionState } from "react";
-import { createSetupAction } from "@/app/(app)/setups/actions";
+import { useMutation } from "@tanstack/react-query";
+import { useRouter } from "next/navigation";
+import { createSetupRequest } from "@/lib/client/api";
 
 interface NewSetupFormProps {
   models: { id: string; name: string; gasVolumeM3: number }[];
 }
 
 export function NewSetupForm({ models }: NewSetupFormProps) {
-  const [state, action, pending] = useActionState(createSetupAction, null);
+  const router = useRouter();
+  const create = useMutation({
+    mutationFn: (modelId: string) => createSetupRequest({ modelId }),
+    onSuccess: ({ id }) => router.push(`/setups/${id}`),
+  });
   return (
-    <form action={action} className="flex flex-wrap items-end gap-2" data-testid="new-setup-form">
+    <form
+      className="flex flex-wrap items-end gap-2"
+      data-testid="new-setup-form"
+      onSubmit={(event) => {
+        event.preventDefault();
+        create.mutate(String(new FormData(event.currentTarget).get("modelId") ?? ""));
+      }}
+    >
       <label className="text-sm text-muted">
         Envelope model
         <select name="modelId" className="mt-0.5 block rounded border border-hairline bg-white px-2 py-1">
@@ -18,10 +30,10 @@ export function NewSetupForm({ models }: NewSetupFormProps) {
           ))}
         </select>
       </label>
-      <button type="submit" disabled={pending} className="rounded bg-accent px-3 py-1.5 text-sm font-medium text-white disabled:opacity-60" data-testid="new-setup">
+      <button type="submit" disabled={create.isPending || create.isSuccess} className="rounded bg-accent px-3 py-1.5 text-sm font-medium text-white disabled:opacity-60" data-testid="new-setup">
         New setup
       </button>
-      {state && !state.ok && <p role="alert" className="text-sm text-flag-stop">{state.error.message}</p>}
+      {create.error && <p role="alert" className="text-sm text-flag-stop">{create.error.message}</p>}
     </form>
   );
 }

@@ -1,31 +1,29 @@
 "use client";
+import { useMutation } from "@tanstack/react-query";
 import { useRouter } from "next/navigation";
-import { useState, useTransition } from "react";
-import { deleteSetupAction, duplicateSetupAction } from "@/app/(app)/setups/actions";
+import { useState } from "react";
+import { deleteSetupRequest, duplicateSetupRequest } from "@/lib/client/api";
 
 export function SetupRowActions({ id, name }: { id: string; name: string }) {
   const router = useRouter();
   const [confirming, setConfirming] = useState(false);
-  const [error, setError] = useState<string | null>(null);
-  const [pending, startTransition] = useTransition();
-  const run = (work: () => Promise<{ ok: boolean; error?: { message: string } }>) =>
-    startTransition(async () => {
-      const result = await work();
-      if (!result.ok) setError(result.error?.message ?? "That did not work.");
-      else {
-        setConfirming(false);
-        router.refresh();
-      }
-    });
+  const done = () => {
+    setConfirming(false);
+    router.refresh();
+  };
+  const duplicate = useMutation({ mutationFn: () => duplicateSetupRequest(id), onSuccess: done });
+  const remove = useMutation({ mutationFn: () => deleteSetupRequest(id), onSuccess: done });
+  const pending = duplicate.isPending || remove.isPending;
+  const error = duplicate.error ?? remove.error;
   return (
     <span className="flex flex-wrap items-center gap-2 text-sm">
-      <button type="button" disabled={pending} className="text-accent underline" onClick={() => run(() => duplicateSetupAction({ id }))} aria-label={`Duplicate ${name}`}>
+      <button type="button" disabled={pending} className="text-accent underline" onClick={() => duplicate.mutate()} aria-label={`Duplicate ${name}`}>
         Duplicate
       </button>
       {confirming ? (
         <span className="flex items-center gap-1" role="group" aria-label="Confirm delete">
           <span>Delete for good?</span>
-          <button type="button" disabled={pending} className="rounded bg-flag-stop px-2 py-0.5 text-white" onClick={() => run(() => deleteSetupAction({ id }))} data-testid="confirm-delete">
+          <button type="button" disabled={pending} className="rounded bg-flag-stop px-2 py-0.5 text-white" onClick={() => remove.mutate()} data-testid="confirm-delete">
             Delete
           </button>
           <button type="button" className="underline" onClick={() => setConfirming(false)}>Keep</button>
@@ -35,7 +33,7 @@ export function SetupRowActions({ id, name }: { id: string; name: string }) {
           Delete
         </button>
       )}
-      {error && <span role="alert" className="text-flag-stop">{error}</span>}
+      {error && <span role="alert" className="text-flag-stop">{error.message}</span>}
     </span>
   );
 }

@@ -1,6 +1,7 @@
 "use client";
-import { useState, useTransition } from "react";
-import { changeRoleAction } from "@/app/(app)/workshop/actions";
+import { useMutation } from "@tanstack/react-query";
+import { useState } from "react";
+import { changeRoleRequest } from "@/lib/client/api";
 import { ROLES, type Role } from "@/lib/domain";
 
 interface RoleSelectProps {
@@ -11,27 +12,22 @@ interface RoleSelectProps {
 
 export function RoleSelect({ userId, role, disabled = false }: RoleSelectProps) {
   const [value, setValue] = useState<Role>(role);
-  const [message, setMessage] = useState<string | null>(null);
-  const [pending, startTransition] = useTransition();
+  const change = useMutation({
+    mutationFn: ({ next }: { next: Role; previous: Role }) => changeRoleRequest(userId, next),
+    onError: (_error, { previous }) => setValue(previous),
+  });
+  const message = change.isSuccess ? "saved" : (change.error?.message ?? null);
   return (
     <span className="inline-flex items-center gap-2">
       <select
         aria-label="Role"
         value={value}
-        disabled={disabled || pending}
+        disabled={disabled || change.isPending}
         className="rounded border border-hairline bg-white px-2 py-1"
         onChange={(event) => {
           const next = event.target.value as Role;
-          const previous = value;
+          change.mutate({ next, previous: value });
           setValue(next);
-          startTransition(async () => {
-            const result = await changeRoleAction({ userId, role: next });
-            if (result.ok) setMessage("saved");
-            else {
-              setValue(previous);
-              setMessage(result.error.message);
-            }
-          });
         }}
       >
         {ROLES.map((r) => (

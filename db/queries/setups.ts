@@ -1,51 +1,197 @@
 import "server-only";
-import { desc, eq, inArray } from "drizzle-orm";
-import { getDb } from "@/db";
-import { envelopeModels, setups, user } from "@/db/schema";
-import type { SetupStatus } from "@/lib/domain";
+import { and, desc, eq, inArray } from "drizzle-orm";
+import { randomUUID } from "node:crypto";
+import { getDb, type Database } from "@/db";
+import { auditLog, envelopeModels, setupPayloads, setups, user, type SetupRow } from "@/db/schema";
+import { columnsFromDraft, draftFromRows, payloadRowsFromDraft } from "@/db/setup-columns";
+import type { BalanceResult } from "@/lib/balance";
+import type { FlagLevel, SetupStatus } from "@/lib/domain";
+import type { SetupDraft } from "@/lib/setups/setup-draft";
+
+type Tx = Parameters<Parameters<Database["transaction"]>[0]>[0];
+
+// ---------------------------------------------------------------- reads
 
 export interface SetupListItem {
   id: string;
   name: string;
   status: SetupStatus;
-  worstFlag: "ok" | "caution" | "stop" | null;
+  worstFlag: FlagLevel | null;
   modelName: string;
   ownerName: string;
   updatedAt: Date;
   submittedAt: Date | null;
 }
 
-const listColumns = {
-  id: setups.id,
-  name: setups.name,
-  status: setups.status,
-  worstFlag: setups.worstFlag,
-  modelName: envelopeModels.name,
-  ownerName: user.name,
-  updatedAt: setups.updatedAt,
-  submittedAt: setups.submittedAt,
-};
-
-/** A setup list row: the setup with its model's and its owner's names. */
+/** A setup list row: the setup with its model's and its owner's names (never the stored result). */
 function selectSetupList() {
   return getDb()
-    .select(listColumns)
+    .select({
+      id: setups.id,
+      name: setups.name,
+      status: setups.status,
+      worstFlag: setups.worstFlag,
+      modelName: envelopeModels.name,
+      ownerName: user.name,
+      updatedAt: setups.updatedAt,
+      submittedAt: setups.submittedAt,
+    })
     .from(setups)
     .innerJoin(envelopeModels, eq(setups.modelId, envelopeModels.id))
     .innerJoin(user, eq(setups.ownerId, user.id));
 }
 
 export async function listSetupsForOwner({ ownerId }: { ownerId: string }): Promise<SetupListItem[]> {
-  return selectSetupList()
-    .where(eq(setups.ownerId, ownerId))
-    .orderBy(desc(setups.updatedAt));
+  return selectSetupList().where(eq(setups.ownerId, ownerId)).orderBy(desc(setups.updatedAt));
 }
 
-/** The review desk's queue: what customers have submitted, oldest first, and what was sent back. */
-export async function listReviewQueue({
-  statuses = ["submitted"],
-}: { statuses?: SetupStatus[] } = {}): Promise<SetupListItem[]> {
-  return selectSetupList()
-    .where(inArray(setups.status, statuses))
-    .orderBy(setups.submittedAt);
+/** The review desk's queue: what customers have submitted, oldest first. */
+export async function listReviewQueue({ statuses = ["submitted"] }: { statuses?: SetupStatus[] } = {}): Promise<SetupListItem[]> {
+  return selectSetupList().where(inArray(setups.status, statuses)).orderBy(setups.submittedAt);
+}
+
+export interface StoredSetup {
+  row: SetupRow;
+  draft: SetupDraft;
+}
+
+/** A setup with its payloads, or null: only its owner's when `ownerId` is given, any when it is null (staff). */
+export async function getSetupById({ id, ownerId }: { id: string; ownerId: string | null }): Promise<StoredSetup | null> {
+  const db = getDb();
+  const where = ownerId === null ? eq(setups.id, id) : and(eq(setups.id, id), eq(setups.ownerId, ownerId));
+  const [row] = await db.select().from(setups).where(where);
+  if (!row) return null;
+  const payloadRows = await db.select().from(setupPayloads).where(eq(setupPayloads.setupId, id));
+  return { row, draft: draftFromRows(row, payloadRows) };
+}
+
+// ---------------------------------------------------------------- writes
+
+export interface Evaluated {
+  result: BalanceResult;
+  worstFlag: FlagLevel;
+}
+
+async function replacePayloads(tx: Tx, setupId: string, draft: SetupDraft): Promise<void> {
+  await tx.delete(setupPayloads).where(eq(setupPayloads.setupId, setupId));
+  if (draft.payloads.length === 0) return;
+  await tx.insert(setupPayloads).values(payloadRowsFromDraft(setupId, draft, () => randomUUID()));
+}
+
+async function audit(tx: Tx, actorId: string, action: string, setupId: string, detail: Record<string, unknown> = {}): Promise<void> {
+  await tx.insert(auditLog).values({ id: randomUUID(), actorId, action, entityType: "setup", entityId: setupId, detailJson: detail });
+}
+
+/** The owner's view of a setup's version and status, read inside the writing transaction. */
+async function readOwnedVersion(tx: Tx, id: string, ownerId: string): Promise<{ version: number; status: SetupStatus } | null> {
+  const [row] = await tx
+    .select({ version: setups.version, status: setups.status })
+    .from(setups)
+    .where(and(eq(setups.id, id), eq(setups.ownerId, ownerId)));
+  return row ?? null;
+}
+
+export async function createSetup({ ownerId, draft, evaluated }: { ownerId: string; draft: SetupDraft; evaluated: Evaluated }): Promise<string> {
+  const id = randomUUID();
+  await getDb().transaction(async (tx) => {
+    await tx.insert(setups).values({ id, ownerId, ...columnsFromDraft(draft), status: "draft", version: 1, resultJson: evaluated.result, worstFlag: evaluated.worstFlag });
+    await replacePayloads(tx, id, draft);
+    await audit(tx, ownerId, "setup.create", id);
+  });
+  return id;
+}
+
+export type SaveOutcome = { kind: "saved"; version: number; status: SetupStatus } | { kind: "not_found" } | { kind: "conflict"; currentVersion: number };
+
+/**
+ * Writes a setup only if nobody saved since `expectedVersion` was read (optimistic concurrency).
+ * A change to a submitted or approved setup takes it back to draft: the review was of other numbers.
+ */
+export async function saveSetup({
+  id,
+  ownerId,
+  expectedVersion,
+  draft,
+  evaluated,
+}: {
+  id: string;
+  ownerId: string;
+  expectedVersion: number;
+  draft: SetupDraft;
+  evaluated: Evaluated;
+}): Promise<SaveOutcome> {
+  return getDb().transaction(async (tx) => {
+    const current = await readOwnedVersion(tx, id, ownerId);
+    if (!current) return { kind: "not_found" };
+    if (current.version !== expectedVersion) return { kind: "conflict", currentVersion: current.version };
+    const status: SetupStatus = current.status === "changes_requested" ? "changes_requested" : "draft";
+    const updated = await tx
+      .update(setups)
+      .set({
+        ...columnsFromDraft(draft),
+        status,
+        version: expectedVersion + 1,
+        resultJson: evaluated.result,
+        worstFlag: evaluated.worstFlag,
+        cautionsAcknowledged: false,
+        updatedAt: new Date(),
+      })
+      .where(and(eq(setups.id, id), eq(setups.version, expectedVersion)))
+      .returning({ version: setups.version });
+    if (updated.length === 0) return { kind: "conflict", currentVersion: expectedVersion + 1 };
+    await replacePayloads(tx, id, draft);
+    await audit(tx, ownerId, "setup.save", id, { version: expectedVersion + 1 });
+    return { kind: "saved", version: expectedVersion + 1, status };
+  });
+}
+
+export type SubmitOutcome =
+  | { kind: "submitted"; version: number }
+  | { kind: "not_found" }
+  | { kind: "conflict"; currentVersion: number }
+  | { kind: "wrong_status"; status: SetupStatus };
+
+export async function markSetupSubmitted({
+  id,
+  ownerId,
+  expectedVersion,
+  evaluated,
+}: {
+  id: string;
+  ownerId: string;
+  expectedVersion: number;
+  evaluated: Evaluated;
+}): Promise<SubmitOutcome> {
+  return getDb().transaction(async (tx) => {
+    const current = await readOwnedVersion(tx, id, ownerId);
+    if (!current) return { kind: "not_found" };
+    if (current.version !== expectedVersion) return { kind: "conflict", currentVersion: current.version };
+    if (current.status !== "draft" && current.status !== "changes_requested") return { kind: "wrong_status", status: current.status };
+    await tx
+      .update(setups)
+      .set({
+        status: "submitted",
+        version: expectedVersion + 1,
+        resultJson: evaluated.result,
+        worstFlag: evaluated.worstFlag,
+        cautionsAcknowledged: evaluated.worstFlag === "caution",
+        submittedAt: new Date(),
+        updatedAt: new Date(),
+      })
+      .where(eq(setups.id, id));
+    await audit(tx, ownerId, "setup.submit", id, { version: expectedVersion + 1, worstFlag: evaluated.worstFlag });
+    return { kind: "submitted", version: expectedVersion + 1 };
+  });
+}
+
+/** Deletes one of the owner's setups (its payloads, comments and decisions go with it); false when it is not theirs. */
+export async function deleteSetup({ id, ownerId }: { id: string; ownerId: string }): Promise<boolean> {
+  return getDb().transaction(async (tx) => {
+    const deleted = await tx
+      .delete(setups)
+      .where(and(eq(setups.id, id), eq(setups.ownerId, ownerId)))
+      .returning({ id: setups.id });
+    if (deleted.length) await audit(tx, ownerId, "setup.delete", id);
+    return deleted.length > 0;
+  });
 }

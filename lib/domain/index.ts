@@ -2,3 +2,4 @@ export * from "./catalogue";
 export * from "./flags";
 export * from "./roles";
 export * from "./setups";
+export * from "./input-limits";

@@ -1,4 +1,5 @@
-import { gasVolumeFromLiftMeasurementM3, type BalanceInput } from "@/lib/balance";
+import { gasVolumeFromLiftMeasurementM3, type BalanceInput, type HullParams, type LimitsInput } from "@/lib/balance";
+import type { Attachment, Thread } from "@/lib/domain";
 import type { SetupDraft } from "./setup-draft";
 
 // The catalogue facts a setup refers to, in the shape the database rows already have.
@@ -14,9 +15,9 @@ export interface ModelSpec {
   railStartXM: number;
   railEndXM: number;
   railZM: number;
-  hullJson: unknown;
-  aeroJson: unknown;
-  limitsJson: unknown;
+  hullJson: HullParams;
+  aeroJson: NonNullable<BalanceInput["envelope"]["aero"]> | null;
+  limitsJson: LimitsInput;
 }
 export interface UnitSpec {
   measuredMassKg: number;
@@ -25,14 +26,14 @@ export interface UnitSpec {
   measuredAtAltitudeM: number;
 }
 export interface MountSpec {
-  thread: "1/4-20 UNC" | "3/8-16 UNC";
+  thread: Thread;
   massKg: number;
   ratedLoadKg: number;
   safetyLineBreakingLoadN: number;
 }
 export interface AdapterSpec {
-  fromThread: "1/4-20 UNC" | "3/8-16 UNC" | "strap";
-  toThread: "1/4-20 UNC" | "3/8-16 UNC";
+  fromThread: Attachment;
+  toThread: Thread;
   massKg: number;
 }
 export interface SetupCatalogue {
@@ -61,9 +62,9 @@ export function toBalanceInput(draft: SetupDraft, catalogue: SetupCatalogue): Ba
       massCentre: { x: model.massCentreXM, z: model.massCentreZM },
       tetherPoint: { x: model.tetherPointXM, z: model.tetherPointZM },
       rail: { startX: model.railStartXM, endX: model.railEndXM, z: model.railZM },
-      ...(model.aeroJson ? { aero: model.aeroJson as NonNullable<BalanceInput["envelope"]["aero"]> } : {}),
-      ...(model.limitsJson ? { limits: model.limitsJson as NonNullable<BalanceInput["envelope"]["limits"]> } : {}),
-      ...(model.hullJson ? { hull: model.hullJson as NonNullable<BalanceInput["envelope"]["hull"]> } : {}),
+      ...(model.aeroJson ? { aero: model.aeroJson } : {}),
+      limits: model.limitsJson,
+      hull: model.hullJson,
     },
     gas: { purity: draft.gas.purity, superheatK: draft.gas.superheatK, fillFraction: draft.gas.fillFraction },
     site: {

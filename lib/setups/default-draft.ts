@@ -1,3 +1,4 @@
+import { DEFAULT_TETHER } from "@/lib/domain";
 import type { SetupDraft } from "./setup-draft";
 
 interface ModelForDefaults {
@@ -18,7 +19,7 @@ export function defaultDraft(model: ModelForDefaults, mountId: string, name?: st
     mountPositionXM: (model.railStartXM + model.railEndXM) / 2,
     site: { siteName: "", altitudeM: 0, temperatureC: null, pressurePa: null, windMS: 3, gustMS: 6 },
     gas: { purity: 0.98, superheatK: 0, fillFraction: 1 },
-    tether: { massPerMetreKg: 0.0012, lengthOutM: 30, breakingLoadN: 900 },
+    tether: { ...DEFAULT_TETHER },
     payloads: [],
   };
 }

@@ -1,4 +1,4 @@
-import { listEnvelopeModels } from "@/db/queries/catalogue";
+import { listActiveEnvelopeModels } from "@/db/queries/catalogue";
 import { listSetupsForOwner } from "@/db/queries/setups";
 import { NewSetupForm } from "@/components/setups/new-setup-form";
 import { SetupRowActions } from "@/components/setups/setup-row-actions";
@@ -10,12 +10,12 @@ export const metadata = { title: "Setups" };
 
 export default async function SetupsPage() {
   const viewer = await requirePageViewer(undefined, "/setups");
-  const [rows, models] = await Promise.all([listSetupsForOwner({ ownerId: viewer.id }), listEnvelopeModels()]);
+  const [rows, models] = await Promise.all([listSetupsForOwner({ ownerId: viewer.id }), listActiveEnvelopeModels()]);
   return (
     <section className="space-y-4">
       <div className="flex flex-wrap items-end justify-between gap-4">
         <h1 className="text-2xl">Setups</h1>
-        <NewSetupForm models={models.filter((m) => m.active).map((m) => ({ id: m.id, name: m.name, gasVolumeM3: m.gasVolumeM3 }))} />
+        <NewSetupForm models={models.map((m) => ({ id: m.id, name: m.name, gasVolumeM3: m.gasVolumeM3 }))} />
       </div>
       {rows.length === 0 ? (
         <EmptyState title="No setups yet">

@@ -1,20 +1,18 @@
 import { notFound } from "next/navigation";
-import { getPlannerCatalogue, getSetupById } from "@/db/queries/planner";
+import { getPlannerCatalogue } from "@/db/queries/catalogue";
 import { Planner } from "@/components/planner/planner";
 import { toPlannerCatalogue } from "@/components/planner/to-planner-catalogue";
 import { requirePageViewer } from "@/lib/auth/guard";
+import { getOwnSetup } from "@/lib/server/setups";
 
 export const metadata = { title: "Planner" };
 
 export default async function PlannerPage({ params }: PageProps<"/setups/[id]">) {
   const { id } = await params;
   const viewer = await requirePageViewer(undefined, `/setups/${id}`);
-  const setup = await getSetupById({ id, ownerId: viewer.id });
-  if (!setup) notFound();
+  const setup = await getOwnSetup({ viewer, id });
+  if (!setup.ok) notFound();
   const catalogue = toPlannerCatalogue(await getPlannerCatalogue({ ownerId: viewer.id }));
-  return (
-    <Planner
-      data={{ setupId: setup.row.id, version: setup.row.version, status: setup.row.status, draft: setup.draft, catalogue, unitSystem: viewer.unitSystem }}
-    />
-  );
+  const { id: setupId, version, status, draft } = setup.data;
+  return <Planner data={{ setupId, version, status, draft, catalogue, unitSystem: viewer.unitSystem }} />;
 }

@@ -1,0 +1,77 @@
+import type { SetupDraft } from "../lib/setups/setup-draft";
+import type { setupPayloads, setups } from "./schema";
+
+// The one mapping between a setup's editable draft and its rows, used by the app's writes and by
+// the seed alike, so demo rows are exactly what the app itself would store.
+
+type SetupRow = typeof setups.$inferSelect;
+type SetupPayloadRow = typeof setupPayloads.$inferSelect;
+
+/** The setup columns a draft decides (everything but identity, status, version and the result). */
+export function columnsFromDraft(draft: SetupDraft) {
+  return {
+    name: draft.name,
+    modelId: draft.modelId,
+    unitId: draft.unitId,
+    mountId: draft.mountId,
+    mountPositionXM: draft.mountPositionXM,
+    siteName: draft.site.siteName,
+    altitudeM: draft.site.altitudeM,
+    temperatureC: draft.site.temperatureC,
+    pressurePa: draft.site.pressurePa,
+    windMS: draft.site.windMS,
+    gustMS: draft.site.gustMS,
+    purity: draft.gas.purity,
+    superheatK: draft.gas.superheatK,
+    fillFraction: draft.gas.fillFraction,
+    tetherMassPerMetreKg: draft.tether?.massPerMetreKg ?? null,
+    tetherLengthOutM: draft.tether?.lengthOutM ?? null,
+    tetherBreakingLoadN: draft.tether?.breakingLoadN ?? null,
+  } satisfies Partial<SetupRow>;
+}
+
+/** The payload rows of a draft, in mount order; ids come from the caller (random in the app, fixed in the seed). */
+export function payloadRowsFromDraft(setupId: string, draft: SetupDraft, idFor: (index: number) => string) {
+  return draft.payloads.map((p, i) => ({ ...p, id: idFor(i), setupId, sortOrder: i })) satisfies SetupPayloadRow[];
+}
+
+export function draftFromRows(row: SetupRow, payloadRows: readonly SetupPayloadRow[]): SetupDraft {
+  const tether =
+    row.tetherMassPerMetreKg !== null && row.tetherLengthOutM !== null && row.tetherBreakingLoadN !== null
+      ? { massPerMetreKg: row.tetherMassPerMetreKg, lengthOutM: row.tetherLengthOutM, breakingLoadN: row.tetherBreakingLoadN }
+      : null;
+  return {
+    name: row.name,
+    modelId: row.modelId,
+    unitId: row.unitId,
+    mountId: row.mountId,
+    mountPositionXM: row.mountPositionXM,
+    site: {
+      siteName: row.siteName,
+      altitudeM: row.altitudeM,
+      temperatureC: row.temperatureC,
+      pressurePa: row.pressurePa,
+      windMS: row.windMS,
+      gustMS: row.gustMS,
+    },
+    gas: { purity: row.purity, superheatK: row.superheatK, fillFraction: row.fillFraction },
+    tether,
+    payloads: [...payloadRows]
+      .sort((a, b) => a.sortOrder - b.sortOrder)
+      .map((p) => ({
+        templateId: p.templateId,
+        name: p.name,
+        category: p.category,
+        massKg: p.massKg,
+        shape: p.shape,
+        lengthM: p.lengthM,
+        widthM: p.widthM,
+        heightM: p.heightM,
+        attachment: p.attachment,
+        adapterId: p.adapterId,
+        dragAreaM2: p.dragAreaM2,
+        offsetXM: p.offsetXM,
+        offsetZM: p.offsetZM,
+      })),
+  };
+}

@@ -1,0 +1,47 @@
+import type { BalanceResult } from "@/lib/balance";
+import type { Role, SetupStatus, UnitSystem } from "@/lib/domain";
+import type { AppError } from "@/lib/errors";
+import type { SetupDraft } from "@/lib/setups/setup-draft";
+
+// The UI's one way to change anything: the same JSON route handlers that scripts use, called from
+// TanStack Query mutations. A failure arrives as an ApiError with the server's typed error.
+
+export class ApiError extends Error {
+  constructor(
+    readonly status: number,
+    readonly error: AppError,
+  ) {
+    super(error.message);
+  }
+}
+
+async function call<T>(method: string, url: string, body?: unknown): Promise<T> {
+  const response = await fetch(url, {
+    method,
+    headers: body === undefined ? {} : { "content-type": "application/json" },
+    body: body === undefined ? undefined : JSON.stringify(body),
+  });
+  if (response.status === 204) return null as T;
+  const data = (await response.json().catch(() => ({}))) as T & { error?: AppError };
+  if (!response.ok) throw new ApiError(response.status, data.error ?? { code: "internal", message: `The server answered ${response.status}.` });
+  return data;
+}
+
+const setupUrl = (id: string, rest = "") => `/api/setups/${encodeURIComponent(id)}${rest}`;
+
+export const createSetupRequest = (input: { modelId: string } | { draft: SetupDraft }) =>
+  call<{ id: string; version: number; result: BalanceResult }>("POST", "/api/setups", input);
+
+export const duplicateSetupRequest = (id: string) => call<{ id: string }>("POST", setupUrl(id, "/duplicate"));
+
+export const deleteSetupRequest = (id: string) => call<null>("DELETE", setupUrl(id));
+
+export const saveSetupRequest = (id: string, version: number, draft: SetupDraft) =>
+  call<{ version: number; status: SetupStatus }>("PUT", setupUrl(id), { version, draft });
+
+export const submitSetupRequest = (id: string, version: number, acknowledgeCautions: boolean) =>
+  call<{ version: number; status: SetupStatus }>("POST", setupUrl(id, "/submit"), { version, acknowledgeCautions });
+
+export const savePreferencesRequest = (unitSystem: UnitSystem) => call<{ unitSystem: UnitSystem }>("PUT", "/api/me/preferences", { unitSystem });
+
+export const changeRoleRequest = (userId: string, role: Role) => call<{ id: string; role: Role }>("PUT", `/api/users/${encodeURIComponent(userId)}/role`, { role });

@@ -1,0 +1,39 @@
+import "server-only";
+import { getCatalogueForDraft } from "@/db/queries/catalogue";
+import { balanceInputSchema, evaluateBalance, worstLevel, type BalanceResult, type FlagLevel } from "@/lib/balance";
+import { fail, issuesFromZod, ok, type FieldIssue, type Result } from "@/lib/errors";
+import { toBalanceInput } from "@/lib/setups/balance-input";
+import type { SetupDraft } from "@/lib/setups/setup-draft";
+
+export interface ServerEvaluation {
+  result: BalanceResult;
+  worstFlag: FlagLevel;
+}
+
+const badName = (message: string, issues: FieldIssue[]) => fail("bad_request", message, issues);
+
+/**
+ * The server's own balance of a draft: it looks the named catalogue rows up itself and never takes
+ * a number from the client's result. A name that does not exist is a 400 with the field at fault,
+ * found here rather than by a foreign-key check in the middle of a write.
+ */
+export async function evaluateDraft({ draft, ownerId, path = "draft" }: { draft: SetupDraft; ownerId: string; path?: string }): Promise<Result<ServerEvaluation>> {
+  const found = await getCatalogueForDraft({ draft, ownerId });
+  if (!found.model) return badName("That envelope model does not exist.", [{ path: `${path}.modelId`, message: "unknown envelope model" }]);
+  if (!found.mount) return badName("That mount does not exist.", [{ path: `${path}.mountId`, message: "unknown mount" }]);
+  if (draft.unitId !== null && !found.unit) return badName("That serial unit is not one of yours.", [{ path: `${path}.unitId`, message: "unknown serial unit" }]);
+  if (found.unit && found.unit.modelId !== found.model.id) {
+    return badName("That serial unit is of another envelope model.", [{ path: `${path}.unitId`, message: "serial unit of another model" }]);
+  }
+  const unknownNames: FieldIssue[] = draft.payloads.flatMap((p, i) => [
+    ...(p.templateId !== null && !found.knownTemplateIds.has(p.templateId) ? [{ path: `${path}.payloads[${i}].templateId`, message: "unknown payload template" }] : []),
+    ...(p.adapterId !== null && !found.adaptersById[p.adapterId] ? [{ path: `${path}.payloads[${i}].adapterId`, message: "unknown adapter" }] : []),
+  ]);
+  if (unknownNames.length) return badName("A payload names a template or adapter that does not exist.", unknownNames);
+
+  const input = toBalanceInput(draft, { model: found.model, unit: found.unit, mount: found.mount, adaptersById: found.adaptersById });
+  const checked = balanceInputSchema.safeParse(input);
+  if (!checked.success) return fail("bad_request", "The setup does not make a valid balance input.", issuesFromZod(checked.error));
+  const result = evaluateBalance(checked.data);
+  return ok({ result, worstFlag: worstLevel(result.flags) });
+}

@@ -1,0 +1,89 @@
+import "server-only";
+import type { z } from "zod";
+import type { Viewer } from "@/lib/auth/access";
+import type { Role } from "@/lib/domain";
+import { errorResponse, issuesFromZod, type AppError, type Result } from "@/lib/errors";
+import { readJsonBody } from "@/lib/http/read-json-body";
+import { authorise } from "./authorise";
+import { internalError } from "./internal-error";
+import { getViewer } from "./viewer";
+
+type Schema<T> = z.ZodType<T>;
+
+export interface RouteSpec<P, Q, B> {
+  /** Who may call it; absent = any signed-in person. */
+  roles?: readonly Role[];
+  /** Path segments. A segment that does not parse is a 404: no such thing lives at that address. */
+  params?: Schema<P>;
+  /** Query string, as an object of its first values. */
+  query?: Schema<Q>;
+  /** JSON body. */
+  body?: Schema<B>;
+  /** The message when the path does not parse (e.g. "No such setup among yours."). */
+  notFoundMessage?: string;
+  /** Status of a success: 200 unless said; 204 answers no body. */
+  status?: 200 | 201 | 204;
+}
+
+export interface RouteArgs<P, Q, B> {
+  viewer: Viewer;
+  params: P;
+  query: Q;
+  body: B;
+  request: Request;
+}
+
+interface NextRouteContext {
+  params: Promise<unknown>;
+}
+
+function parsed<T>(schema: Schema<T>, value: unknown, error: (issues: ReturnType<typeof issuesFromZod>) => AppError): Result<T> {
+  const outcome = schema.safeParse(value);
+  return outcome.success ? { ok: true, data: outcome.data } : { ok: false, error: error(issuesFromZod(outcome.error)) };
+}
+
+/** Parses every part of the request the spec names, in path → query → body order. */
+async function parseRequest<P, Q, B>(spec: RouteSpec<P, Q, B>, request: Request, context: NextRouteContext): Promise<Result<{ params: P; query: Q; body: B }>> {
+  const params = spec.params
+    ? parsed(spec.params, await context.params, () => ({ code: "not_found", message: spec.notFoundMessage ?? "Nothing is at this address." }))
+    : { ok: true as const, data: undefined as P };
+  if (!params.ok) return params;
+  const query = spec.query
+    ? parsed(spec.query, Object.fromEntries(new URL(request.url).searchParams), (issues) => ({ code: "bad_request", message: "The query string is not valid.", issues }))
+    : { ok: true as const, data: undefined as Q };
+  if (!query.ok) return query;
+  let body: Result<B> = { ok: true, data: undefined as B };
+  if (spec.body) {
+    const json = await readJsonBody(request);
+    if (!json.ok) return json;
+    body = parsed(spec.body, json.data, (issues) => ({ code: "bad_request", message: "The request body is not valid.", issues }));
+    if (!body.ok) return body;
+  }
+  return { ok: true, data: { params: params.data, query: query.data, body: body.data } };
+}
+
+/**
+ * The one way to write a route handler: parse (zod) → session → role → the core function →
+ * its Result as JSON. Anything thrown is logged with a request id and answered as `internal`
+ * (500) carrying that id, never as a raw database error.
+ */
+export function route<T, P = undefined, Q = undefined, B = undefined>(
+  spec: RouteSpec<P, Q, B>,
+  handler: (args: RouteArgs<P, Q, B>) => Promise<Result<T>>,
+): (request: Request, context: NextRouteContext) => Promise<Response> {
+  return async (request, context) => {
+    try {
+      const input = await parseRequest(spec, request, context);
+      if (!input.ok) return errorResponse(input.error);
+      const viewer = authorise(await getViewer(), spec.roles);
+      if (!viewer.ok) return errorResponse(viewer.error);
+      const result = await handler({ viewer: viewer.data, request, ...input.data });
+      if (!result.ok) return errorResponse(result.error);
+      if (spec.status === 204) return new Response(null, { status: 204 });
+      return Response.json(result.data, { status: spec.status ?? 200 });
+    } catch (error) {
+      return errorResponse(internalError(error, `${request.method} ${new URL(request.url).pathname}`));
+    }
+  };
+}
+

@@ -1,0 +1,116 @@
+import { afterEach, beforeEach, describe, expect, it, vi } from "vitest";
+import { z } from "zod";
+import type { Viewer } from "@/lib/auth/access";
+import { fail, ok } from "@/lib/errors";
+
+// The wrapper alone, with the session replaced: what each step answers and in which order.
+const session = vi.hoisted(() => ({ viewer: null as Viewer | null, reads: 0 }));
+vi.mock("@/lib/server/viewer", () => ({
+  getViewer: async () => {
+    session.reads += 1;
+    return session.viewer;
+  },
+}));
+const { route } = await import("@/lib/server/route");
+
+const CUSTOMER: Viewer = { id: "u-1", name: "Ada Customer", email: "ada@example.test", role: "customer", unitSystem: "metric" };
+const MAKER: Viewer = { ...CUSTOMER, id: "u-9", role: "maker" };
+const context = (params: Record<string, string> = {}) => ({ params: Promise.resolve(params) });
+const post = (body: string, type = "application/json") => new Request("http://app.test/api/things", { method: "POST", body, headers: { "content-type": type } });
+
+beforeEach(() => {
+  session.viewer = null;
+  session.reads = 0;
+});
+afterEach(() => vi.restoreAllMocks());
+
+describe("route", () => {
+  const body = z.object({ count: z.number().int() });
+  const handler = vi.fn(async ({ body: b }: { body: { count: number } }) => ok({ doubled: b.count * 2 }));
+  const POST = route({ body, status: 201 }, handler);
+
+  it("returns 400 with the field's path, before reading the session, when the body does not parse", async () => {
+    session.viewer = CUSTOMER;
+    const response = await POST(post(JSON.stringify({ count: "three" })), context());
+    expect(response.status).toBe(400);
+    const json = (await response.json()) as { error: { code: string; issues: { path: string }[] } };
+    expect(json.error.code).toBe("bad_request");
+    expect(json.error.issues.map((i) => i.path)).toEqual(["count"]);
+    expect(session.reads).toBe(0);
+  });
+
+  it("returns 401 when a valid request has no session, without calling the core", async () => {
+    handler.mockClear();
+    const response = await POST(post(JSON.stringify({ count: 3 })), context());
+    expect(response.status).toBe(401);
+    expect(handler).not.toHaveBeenCalled();
+  });
+
+  it("returns the core's data with the spec's status when everything holds", async () => {
+    session.viewer = CUSTOMER;
+    const response = await POST(post(JSON.stringify({ count: 3 })), context());
+    expect(response.status).toBe(201);
+    expect(await response.json()).toEqual({ doubled: 6 });
+  });
+
+  it("returns 403 when the role is not among those allowed", async () => {
+    session.viewer = CUSTOMER;
+    const makerOnly = route({ roles: ["maker"] }, async () => ok({}));
+    expect((await makerOnly(new Request("http://app.test/x"), context())).status).toBe(403);
+    session.viewer = MAKER;
+    expect((await makerOnly(new Request("http://app.test/x"), context())).status).toBe(200);
+  });
+
+  it("returns 404 with the spec's message when a path segment does not parse", async () => {
+    session.viewer = CUSTOMER;
+    const byId = route({ params: z.object({ id: z.string().max(4) }), notFoundMessage: "No such thing." }, async () => ok({}));
+    const response = await byId(new Request("http://app.test/x"), context({ id: "much-too-long" }));
+    expect(response.status).toBe(404);
+    expect(((await response.json()) as { error: { message: string } }).error.message).toBe("No such thing.");
+  });
+
+  it("returns 400 for a query string that does not parse", async () => {
+    session.viewer = CUSTOMER;
+    const list = route({ query: z.object({ page: z.coerce.number().int().min(1) }) }, async ({ query }) => ok(query));
+    expect((await list(new Request("http://app.test/x?page=0"), context())).status).toBe(400);
+    expect(await (await list(new Request("http://app.test/x?page=2"), context())).json()).toEqual({ page: 2 });
+  });
+
+  it("returns the core's typed failure with its status", async () => {
+    session.viewer = CUSTOMER;
+    const conflicted = route({}, async () => fail("conflict", "Saved elsewhere."));
+    const response = await conflicted(new Request("http://app.test/x"), context());
+    expect(response.status).toBe(409);
+    expect(await response.json()).toEqual({ error: { code: "conflict", message: "Saved elsewhere." } });
+  });
+
+  it("returns 204 with no body when the spec says so", async () => {
+    session.viewer = CUSTOMER;
+    const remove = route({ status: 204 }, async () => ok(null));
+    const response = await remove(new Request("http://app.test/x", { method: "DELETE" }), context());
+    expect(response.status).toBe(204);
+    expect(await response.text()).toBe("");
+  });
+
+  it("returns a JSON 500 with a request id, and logs it, when the core throws", async () => {
+    session.viewer = CUSTOMER;
+    const log = vi.spyOn(console, "error").mockImplementation(() => undefined);
+    const broken = route({}, async () => {
+      throw new Error("SQLITE_CONSTRAINT: FOREIGN KEY constraint failed");
+    });
+    const response = await broken(new Request("http://app.test/api/broken"), context());
+    expect(response.status).toBe(500);
+    const json = (await response.json()) as { error: { code: string; message: string; requestId: string } };
+    expect(json.error.code).toBe("internal");
+    expect(json.error.requestId).toMatch(/^[0-9a-f]{8}$/);
+    expect(json.error.message).toContain(json.error.requestId);
+    expect(json.error.message).not.toMatch(/SQLITE|constraint/i);
+    expect(String(log.mock.calls[0]?.[0])).toContain(json.error.requestId);
+  });
+
+  it("returns 400 for a body that is not JSON, and 413 for one over the cap", async () => {
+    session.viewer = CUSTOMER;
+    expect((await POST(post("{not json"), context())).status).toBe(400);
+    expect((await POST(post(JSON.stringify({ count: 1, pad: "x".repeat(300 * 1024) })), context())).status).toBe(413);
+  });
+});
