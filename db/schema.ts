@@ -1,5 +1,5 @@
 import { sql } from "drizzle-orm";
-import { check, index, integer, real, sqliteTable, text, uniqueIndex } from "drizzle-orm/sqlite-core";
+import { check, index, integer, primaryKey, real, sqliteTable, text, uniqueIndex } from "drizzle-orm/sqlite-core";
 
 // One file for the whole product so later work extends these tables instead of rewriting them.
 // TS names are camelCase, SQL names snake_case; every enum column carries a CHECK constraint.
@@ -256,14 +256,17 @@ export const setups = sqliteTable(
     // The server's own evaluation of the stored input (a BalanceResult), never the client's.
     resultJson: text("result_json", { mode: "json" }).$type<BalanceResult>(),
     worstFlag: text("worst_flag", { enum: FLAG_LEVELS }),
+    // Copied from the stored result on every write so lists sort and filter without reading JSON.
+    payloadMassKg: real("payload_mass_kg").notNull().default(0),
+    freeLiftRatio: real("free_lift_ratio"),
     cautionsAcknowledged: integer("cautions_acknowledged", { mode: "boolean" }).notNull().default(false),
     submittedAt: integer("submitted_at", { mode: "timestamp_ms" }),
     createdAt: createdAt(),
     updatedAt: updatedAt(),
   },
   (t) => [
-    index("setups_owner_idx").on(t.ownerId),
-    index("setups_status_idx").on(t.status),
+    index("setups_owner_updated_idx").on(t.ownerId, t.updatedAt),
+    index("setups_status_submitted_idx").on(t.status, t.submittedAt),
     check("setups_status_check", inList("status", SETUP_STATUSES)),
     check("setups_worst_flag_check", sql`worst_flag is null or ${inList("worst_flag", FLAG_LEVELS)}`),
   ],
@@ -303,7 +306,7 @@ export const comments = sqliteTable(
     body: text("body").notNull(),
     createdAt: createdAt(),
   },
-  (t) => [index("comments_setup_idx").on(t.setupId)],
+  (t) => [index("comments_setup_idx").on(t.setupId, t.createdAt)],
 );
 
 export const decisions = sqliteTable(
@@ -324,7 +327,7 @@ export const decisions = sqliteTable(
     createdAt: createdAt(),
   },
   (t) => [
-    index("decisions_setup_idx").on(t.setupId),
+    index("decisions_setup_idx").on(t.setupId, t.createdAt),
     check("decisions_outcome_check", inList("outcome", DECISION_OUTCOMES)),
   ],
 );
@@ -348,6 +351,46 @@ export const attachments = sqliteTable(
   (t) => [index("attachments_setup_idx").on(t.setupId)],
 );
 
+/** When a person last read a setup's thread: comments by others after it are unread. */
+export const setupReads = sqliteTable(
+  "setup_reads",
+  {
+    setupId: text("setup_id")
+      .notNull()
+      .references(() => setups.id, { onDelete: "cascade" }),
+    userId: text("user_id")
+      .notNull()
+      .references(() => user.id, { onDelete: "cascade" }),
+    lastReadAt: integer("last_read_at", { mode: "timestamp_ms" }).notNull(),
+  },
+  (t) => [primaryKey({ columns: [t.setupId, t.userId] })],
+);
+
+export const MAIL_STATUSES = ["pending", "sent", "failed"] as const;
+
+/**
+ * Mail to send, written in the same transaction as the change it reports, and delivered after it
+ * commits: a failed send never undoes the change, and is retried from here.
+ */
+export const mailOutbox = sqliteTable(
+  "mail_outbox",
+  {
+    id: text("id").primaryKey(),
+    kind: text("kind").notNull(), // the template, e.g. "setup-submitted"
+    toAddress: text("to_address").notNull(),
+    subject: text("subject").notNull(),
+    textBody: text("text_body").notNull(),
+    htmlBody: text("html_body").notNull(),
+    status: text("status", { enum: MAIL_STATUSES }).notNull().default("pending"),
+    attempts: integer("attempts").notNull().default(0),
+    nextAttemptAt: integer("next_attempt_at", { mode: "timestamp_ms" }).notNull(),
+    lastError: text("last_error"),
+    sentAt: integer("sent_at", { mode: "timestamp_ms" }),
+    createdAt: createdAt(),
+  },
+  (t) => [index("mail_outbox_due_idx").on(t.status, t.nextAttemptAt), check("mail_outbox_status_check", inList("status", MAIL_STATUSES))],
+);
+
 export const auditLog = sqliteTable(
   "audit_log",
   {
@@ -359,7 +402,7 @@ export const auditLog = sqliteTable(
     detailJson: text("detail_json", { mode: "json" }).$type<Record<string, unknown>>().notNull().default(sql`'{}'`),
     createdAt: createdAt(),
   },
-  (t) => [index("audit_log_entity_idx").on(t.entityType, t.entityId)],
+  (t) => [index("audit_log_entity_idx").on(t.entityType, t.entityId, t.createdAt)],
 );
 
 export type UserRow = typeof user.$inferSelect;
@@ -373,3 +416,4 @@ export type SetupPayloadRow = typeof setupPayloads.$inferSelect;
 export type CommentRow = typeof comments.$inferSelect;
 export type DecisionRow = typeof decisions.$inferSelect;
 export type AttachmentRow = typeof attachments.$inferSelect;
+export type MailOutboxRow = typeof mailOutbox.$inferSelect;

@@ -3,7 +3,7 @@ import { eq } from "drizzle-orm";
 import { deriveEnvelopeGeometry, demoHulls, evaluateBalance, worstLevel, type DemoHullName } from "@/lib/balance";
 import { toBalanceInput, type SetupCatalogue } from "@/lib/setups/balance-input";
 import type { SetupDraft } from "@/lib/setups/setup-draft";
-import { columnsFromDraft, payloadRowsFromDraft } from "./setup-columns";
+import { columnsFromDraft, payloadRowsFromDraft, summaryColumns } from "./setup-columns";
 import type { Database } from "./index";
 import * as t from "./schema";
 import {
@@ -134,6 +134,7 @@ export async function seedDemo(db: Database): Promise<SeedCounts> {
           id: s.id,
           ownerId: s.ownerId,
           ...columnsFromDraft(draft),
+          ...summaryColumns(draft, result),
           status: s.status,
           resultJson: result,
           worstFlag: worstLevel(result.flags),

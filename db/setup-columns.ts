@@ -30,6 +30,14 @@ export function columnsFromDraft(draft: SetupDraft) {
   } satisfies Partial<SetupRow>;
 }
 
+/** The list columns copied from a stored evaluation, so lists never read the result JSON. */
+export function summaryColumns(draft: SetupDraft, result: { freeLiftRatio: number }) {
+  return {
+    payloadMassKg: draft.payloads.reduce((sum, p) => sum + p.massKg, 0),
+    freeLiftRatio: result.freeLiftRatio,
+  } satisfies Partial<SetupRow>;
+}
+
 /** The payload rows of a draft, in mount order; ids come from the caller (random in the app, fixed in the seed). */
 export function payloadRowsFromDraft(setupId: string, draft: SetupDraft, idFor: (index: number) => string) {
   return draft.payloads.map((p, i) => ({ ...p, id: idFor(i), setupId, sortOrder: i })) satisfies SetupPayloadRow[];

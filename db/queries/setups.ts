@@ -3,7 +3,7 @@ import { and, desc, eq, inArray } from "drizzle-orm";
 import { randomUUID } from "node:crypto";
 import { getDb, type Database } from "@/db";
 import { auditLog, envelopeModels, setupPayloads, setups, user, type SetupRow } from "@/db/schema";
-import { columnsFromDraft, draftFromRows, payloadRowsFromDraft } from "@/db/setup-columns";
+import { columnsFromDraft, draftFromRows, payloadRowsFromDraft, summaryColumns } from "@/db/setup-columns";
 import type { BalanceResult } from "@/lib/balance";
 import type { FlagLevel, SetupStatus } from "@/lib/domain";
 import type { SetupDraft } from "@/lib/setups/setup-draft";
@@ -94,7 +94,7 @@ async function readOwnedVersion(tx: Tx, id: string, ownerId: string): Promise<{ 
 export async function createSetup({ ownerId, draft, evaluated }: { ownerId: string; draft: SetupDraft; evaluated: Evaluated }): Promise<string> {
   const id = randomUUID();
   await getDb().transaction(async (tx) => {
-    await tx.insert(setups).values({ id, ownerId, ...columnsFromDraft(draft), status: "draft", version: 1, resultJson: evaluated.result, worstFlag: evaluated.worstFlag });
+    await tx.insert(setups).values({ id, ownerId, ...columnsFromDraft(draft), ...summaryColumns(draft, evaluated.result), status: "draft", version: 1, resultJson: evaluated.result, worstFlag: evaluated.worstFlag });
     await replacePayloads(tx, id, draft);
     await audit(tx, ownerId, "setup.create", id);
   });
@@ -129,6 +129,7 @@ export async function saveSetup({
       .update(setups)
       .set({
         ...columnsFromDraft(draft),
+        ...summaryColumns(draft, evaluated.result),
         status,
         version: expectedVersion + 1,
         resultJson: evaluated.result,
@@ -172,6 +173,7 @@ export async function markSetupSubmitted({
       .set({
         status: "submitted",
         version: expectedVersion + 1,
+        freeLiftRatio: evaluated.result.freeLiftRatio,
         resultJson: evaluated.result,
         worstFlag: evaluated.worstFlag,
         cautionsAcknowledged: evaluated.worstFlag === "caution",
