@@ -2,13 +2,15 @@ import "server-only";
 import { and, desc, eq, inArray } from "drizzle-orm";
 import { randomUUID } from "node:crypto";
 import { getDb, type Database } from "@/db";
-import { auditLog, envelopeModels, setupPayloads, setups, user, type SetupRow } from "@/db/schema";
+import { envelopeModels, setupPayloads, setups, user, type SetupRow } from "@/db/schema";
 import { columnsFromDraft, draftFromRows, payloadRowsFromDraft, summaryColumns } from "@/db/setup-columns";
 import type { BalanceResult } from "@/lib/balance";
-import type { FlagLevel, SetupStatus } from "@/lib/domain";
+import { nextStatus, type FlagLevel, type Role, type SetupStatus } from "@/lib/domain";
+import { recordAudit } from "./audit";
+import { enqueueMail, type OutgoingMail } from "./mail";
 import type { SetupDraft } from "@/lib/setups/setup-draft";
 
-type Tx = Parameters<Parameters<Database["transaction"]>[0]>[0];
+export type Tx = Parameters<Parameters<Database["transaction"]>[0]>[0];
 
 // ---------------------------------------------------------------- reads
 
@@ -78,9 +80,8 @@ async function replacePayloads(tx: Tx, setupId: string, draft: SetupDraft): Prom
   await tx.insert(setupPayloads).values(payloadRowsFromDraft(setupId, draft, () => randomUUID()));
 }
 
-async function audit(tx: Tx, actorId: string, action: string, setupId: string, detail: Record<string, unknown> = {}): Promise<void> {
-  await tx.insert(auditLog).values({ id: randomUUID(), actorId, action, entityType: "setup", entityId: setupId, detailJson: detail });
-}
+const audit = (tx: Tx, actorId: string, action: string, setupId: string, detail: Record<string, unknown> = {}) =>
+  recordAudit(tx, { actorId, action, entityType: "setup", entityId: setupId, detail });
 
 /** The owner's view of a setup's version and status, read inside the writing transaction. */
 async function readOwnedVersion(tx: Tx, id: string, ownerId: string): Promise<{ version: number; status: SetupStatus } | null> {
@@ -105,32 +106,33 @@ export type SaveOutcome = { kind: "saved"; version: number; status: SetupStatus 
 
 /**
  * Writes a setup only if nobody saved since `expectedVersion` was read (optimistic concurrency).
- * A change to a submitted or approved setup takes it back to draft: the review was of other numbers.
+ * The workflow decides the status after an edit (a reviewed setup needs a new review).
  */
 export async function saveSetup({
   id,
-  ownerId,
+  owner,
   expectedVersion,
   draft,
   evaluated,
 }: {
   id: string;
-  ownerId: string;
+  owner: { id: string; role: Role };
   expectedVersion: number;
   draft: SetupDraft;
   evaluated: Evaluated;
 }): Promise<SaveOutcome> {
   return getDb().transaction(async (tx) => {
-    const current = await readOwnedVersion(tx, id, ownerId);
+    const current = await readOwnedVersion(tx, id, owner.id);
     if (!current) return { kind: "not_found" };
     if (current.version !== expectedVersion) return { kind: "conflict", currentVersion: current.version };
-    const status: SetupStatus = current.status === "changes_requested" ? "changes_requested" : "draft";
+    const verdict = nextStatus({ action: "edit", from: current.status, isOwner: true, role: owner.role });
+    if (!verdict.ok) throw new Error(`workflow: an owner's edit was refused from ${current.status}`);
     const updated = await tx
       .update(setups)
       .set({
         ...columnsFromDraft(draft),
         ...summaryColumns(draft, evaluated.result),
-        status,
+        status: verdict.to,
         version: expectedVersion + 1,
         resultJson: evaluated.result,
         worstFlag: evaluated.worstFlag,
@@ -141,8 +143,8 @@ export async function saveSetup({
       .returning({ version: setups.version });
     if (updated.length === 0) return { kind: "conflict", currentVersion: expectedVersion + 1 };
     await replacePayloads(tx, id, draft);
-    await audit(tx, ownerId, "setup.save", id, { version: expectedVersion + 1 });
-    return { kind: "saved", version: expectedVersion + 1, status };
+    await audit(tx, owner.id, "setup.save", id, { version: expectedVersion + 1, from: current.status, to: verdict.to });
+    return { kind: "saved", version: expectedVersion + 1, status: verdict.to };
   });
 }
 
@@ -150,28 +152,32 @@ export type SubmitOutcome =
   | { kind: "submitted"; version: number }
   | { kind: "not_found" }
   | { kind: "conflict"; currentVersion: number }
-  | { kind: "wrong_status"; status: SetupStatus };
+  | { kind: "wrong_status"; message: string };
 
+/** Hands a setup to review; `mail` renders the messages to queue with it, from the facts read in the transaction. */
 export async function markSetupSubmitted({
   id,
-  ownerId,
+  owner,
   expectedVersion,
   evaluated,
+  mail,
 }: {
   id: string;
-  ownerId: string;
+  owner: { id: string; role: Role };
   expectedVersion: number;
   evaluated: Evaluated;
+  mail: (facts: { setupName: string; modelName: string; payloadMassKg: number; reviewerAddresses: string[] }) => OutgoingMail[];
 }): Promise<SubmitOutcome> {
   return getDb().transaction(async (tx) => {
-    const current = await readOwnedVersion(tx, id, ownerId);
+    const current = await readOwnedVersion(tx, id, owner.id);
     if (!current) return { kind: "not_found" };
     if (current.version !== expectedVersion) return { kind: "conflict", currentVersion: current.version };
-    if (current.status !== "draft" && current.status !== "changes_requested") return { kind: "wrong_status", status: current.status };
-    await tx
+    const verdict = nextStatus({ action: "submit", from: current.status, isOwner: true, role: owner.role });
+    if (!verdict.ok) return { kind: "wrong_status", message: verdict.message };
+    const [updated] = await tx
       .update(setups)
       .set({
-        status: "submitted",
+        status: verdict.to,
         version: expectedVersion + 1,
         freeLiftRatio: evaluated.result.freeLiftRatio,
         resultJson: evaluated.result,
@@ -180,8 +186,12 @@ export async function markSetupSubmitted({
         submittedAt: new Date(),
         updatedAt: new Date(),
       })
-      .where(eq(setups.id, id));
-    await audit(tx, ownerId, "setup.submit", id, { version: expectedVersion + 1, worstFlag: evaluated.worstFlag });
+      .where(eq(setups.id, id))
+      .returning({ name: setups.name, modelId: setups.modelId, payloadMassKg: setups.payloadMassKg });
+    await audit(tx, owner.id, "setup.submit", id, { version: expectedVersion + 1, from: current.status, to: verdict.to, worstFlag: evaluated.worstFlag });
+    const [model] = await tx.select({ name: envelopeModels.name }).from(envelopeModels).where(eq(envelopeModels.id, updated.modelId));
+    const reviewers = await tx.select({ email: user.email }).from(user).where(eq(user.role, "support"));
+    await enqueueMail(tx, mail({ setupName: updated.name, modelName: model?.name ?? "", payloadMassKg: updated.payloadMassKg, reviewerAddresses: reviewers.map((r) => r.email) }));
     return { kind: "submitted", version: expectedVersion + 1 };
   });
 }

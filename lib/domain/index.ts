@@ -3,3 +3,4 @@ export * from "./flags";
 export * from "./roles";
 export * from "./setups";
 export * from "./input-limits";
+export * from "./workflow";

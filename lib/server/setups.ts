@@ -3,8 +3,12 @@ import { getPlannerCatalogue } from "@/db/queries/catalogue";
 import * as setupsDb from "@/db/queries/setups";
 import type { Viewer } from "@/lib/auth/access";
 import type { BalanceResult } from "@/lib/balance";
-import { STATUS_WORDS, type FlagLevel, type SetupStatus } from "@/lib/domain";
-import { fail, ok, type Result } from "@/lib/errors";
+import { REVIEWER_ROLES, type FlagLevel, type Role, type SetupStatus } from "@/lib/domain";
+
+const isReviewer = (role: Role) => REVIEWER_ROLES.includes(role);
+import { fail, ok, type AppError, type Result } from "@/lib/errors";
+import { setupSubmittedMail } from "@/lib/mail/templates";
+import { appUrl } from "./app-url";
 import { defaultDraft } from "@/lib/setups/default-draft";
 import type { SetupDraft } from "@/lib/setups/setup-draft";
 import { evaluateDraft } from "./evaluate-draft";
@@ -14,6 +18,18 @@ import { evaluateDraft } from "./evaluate-draft";
 
 export const SETUP_NOT_FOUND = "No such setup among yours.";
 const notFound = () => fail("not_found", SETUP_NOT_FOUND);
+
+/**
+ * The answer when a write names a setup that is not the viewer's: staff who may read it (it was
+ * submitted) learn that they cannot change it (403); anyone else learns nothing (404).
+ */
+async function notYours(viewer: Viewer, id: string): Promise<{ ok: false; error: AppError }> {
+  if (isReviewer(viewer.role)) {
+    const setup = await setupsDb.getSetupById({ id, ownerId: null });
+    if (setup && setup.row.submittedAt !== null) return fail("forbidden", "Only the customer who owns this setup can change it; comment on it or decide on it instead.");
+  }
+  return notFound();
+}
 const conflict = (currentVersion: number, then: string) =>
   fail("conflict", `This setup was saved elsewhere since you opened it (now version ${currentVersion}). Nothing was overwritten: ${then}`);
 
@@ -33,8 +49,21 @@ export async function listOwnSetups({ viewer }: { viewer: Viewer }): Promise<Res
 export async function getOwnSetup({ viewer, id }: { viewer: Viewer; id: string }): Promise<Result<SetupView>> {
   const setup = await setupsDb.getSetupById({ id, ownerId: viewer.id });
   if (!setup) return notFound();
+  return ok(toView(setup));
+}
+
+/** A setup as this viewer may read it: their own, or (for review staff) any that was submitted. */
+export async function getSetup({ viewer, id }: { viewer: Viewer; id: string }): Promise<Result<SetupView>> {
+  const own = await setupsDb.getSetupById({ id, ownerId: viewer.id });
+  if (own) return ok(toView(own));
+  if (!isReviewer(viewer.role)) return notFound();
+  const any = await setupsDb.getSetupById({ id, ownerId: null });
+  return any && any.row.submittedAt !== null ? ok(toView(any)) : notFound();
+}
+
+function toView(setup: setupsDb.StoredSetup): SetupView {
   const { row, draft } = setup;
-  return ok({ id: row.id, version: row.version, status: row.status, draft, result: row.resultJson, worstFlag: row.worstFlag });
+  return { id: row.id, version: row.version, status: row.status, draft, result: row.resultJson, worstFlag: row.worstFlag };
 }
 
 async function createFromDraft(viewer: Viewer, draft: SetupDraft, path: string): Promise<Result<{ id: string; version: number; result: BalanceResult }>> {
@@ -62,7 +91,7 @@ export async function createSetup({
 
 export async function duplicateSetup({ viewer, id }: { viewer: Viewer; id: string }): Promise<Result<{ id: string; version: number; result: BalanceResult }>> {
   const source = await setupsDb.getSetupById({ id, ownerId: viewer.id });
-  if (!source) return notFound();
+  if (!source) return notYours(viewer, id);
   return createFromDraft(viewer, { ...source.draft, name: `Copy of ${source.draft.name}`.slice(0, 120) }, "draft");
 }
 
@@ -80,8 +109,8 @@ export async function saveSetup({
 }): Promise<Result<{ id: string; version: number; status: SetupStatus; result: BalanceResult; worstFlag: FlagLevel }>> {
   const evaluated = await evaluateDraft({ draft, ownerId: viewer.id });
   if (!evaluated.ok) return evaluated;
-  const outcome = await setupsDb.saveSetup({ id, ownerId: viewer.id, expectedVersion: version, draft, evaluated: evaluated.data });
-  if (outcome.kind === "not_found") return notFound();
+  const outcome = await setupsDb.saveSetup({ id, owner: viewer, expectedVersion: version, draft, evaluated: evaluated.data });
+  if (outcome.kind === "not_found") return notYours(viewer, id);
   if (outcome.kind === "conflict") return conflict(outcome.currentVersion, "reload to see the other changes, then apply yours again.");
   return ok({ id, version: outcome.version, status: outcome.status, result: evaluated.data.result, worstFlag: evaluated.data.worstFlag });
 }
@@ -102,7 +131,7 @@ export async function submitSetup({
   acknowledgeCautions: boolean;
 }): Promise<Result<{ id: string; version: number; status: "submitted" }>> {
   const setup = await setupsDb.getSetupById({ id, ownerId: viewer.id });
-  if (!setup) return notFound();
+  if (!setup) return notYours(viewer, id);
   const evaluated = await evaluateDraft({ draft: setup.draft, ownerId: viewer.id });
   if (!evaluated.ok) return evaluated;
   const stops = evaluated.data.result.flags.filter((f) => f.level === "stop");
@@ -114,13 +143,25 @@ export async function submitSetup({
     );
   }
   if (evaluated.data.worstFlag === "caution" && !acknowledgeCautions) return fail("unprocessable", "Acknowledge the caution flags before you submit.");
-  const outcome = await setupsDb.markSetupSubmitted({ id, ownerId: viewer.id, expectedVersion: version, evaluated: evaluated.data });
-  if (outcome.kind === "not_found") return notFound();
+  const { result, worstFlag } = evaluated.data;
+  const outcome = await setupsDb.markSetupSubmitted({
+    id,
+    owner: viewer,
+    expectedVersion: version,
+    evaluated: evaluated.data,
+    mail: (facts) =>
+      facts.reviewerAddresses.map((to) => ({
+        kind: "setup-submitted",
+        to,
+        content: setupSubmittedMail({ ...facts, customerName: viewer.name, worstFlag, freeLiftRatio: result.freeLiftRatio, url: appUrl(`/review/${id}`) }),
+      })),
+  });
+  if (outcome.kind === "not_found") return notYours(viewer, id);
   if (outcome.kind === "conflict") return conflict(outcome.currentVersion, "reload before submitting.");
-  if (outcome.kind === "wrong_status") return fail("conflict", `A setup that is ${STATUS_WORDS[outcome.status]} cannot be submitted again.`);
+  if (outcome.kind === "wrong_status") return fail("conflict", outcome.message);
   return ok({ id, version: outcome.version, status: "submitted" });
 }
 
 export async function deleteSetup({ viewer, id }: { viewer: Viewer; id: string }): Promise<Result<null>> {
-  return (await setupsDb.deleteSetup({ id, ownerId: viewer.id })) ? ok(null) : notFound();
+  return (await setupsDb.deleteSetup({ id, ownerId: viewer.id })) ? ok(null) : notYours(viewer, id);
 }

@@ -1,4 +1,5 @@
 import { z } from "zod";
+import { COMMENT_MAX_LENGTH, DECISION_OUTCOMES, REVIEW_REASON_CODES, SEND_BACK_REASON_MIN_WORDS } from "@/lib/domain";
 import { setupDraftSchema } from "@/lib/setups/setup-draft";
 
 const id = z.string().min(1).max(64);
@@ -13,3 +14,23 @@ export const createSetupBodySchema = z
   .transform((body) => (body.draft ? { draft: body.draft } : { modelId: body.modelId as string }));
 export const saveSetupBodySchema = z.object({ version, draft: setupDraftSchema });
 export const submitSetupBodySchema = z.object({ version, acknowledgeCautions: z.boolean().default(false) });
+
+export const commentBodySchema = z.object({
+  body: z.string("body must be text").trim().min(1, "Write something first.").max(COMMENT_MAX_LENGTH, `At most ${COMMENT_MAX_LENGTH} characters.`),
+});
+
+const wordCount = (text: string) => text.split(/\s+/).filter(Boolean).length;
+
+export const decisionBodySchema = z
+  .object({
+    decision: z.enum(DECISION_OUTCOMES, { message: "decision must be approved or changes_requested" }),
+    reason: z.string("reason must be text").trim().max(COMMENT_MAX_LENGTH, `At most ${COMMENT_MAX_LENGTH} characters.`).default(""),
+    reasonCodes: z.array(z.enum(REVIEW_REASON_CODES, { message: "unknown reason code" })).max(REVIEW_REASON_CODES.length).default([]),
+    version,
+  })
+  .superRefine((body, ctx) => {
+    if (body.decision === "changes_requested" && wordCount(body.reason) < SEND_BACK_REASON_MIN_WORDS) {
+      ctx.addIssue({ code: "custom", path: ["reason"], message: "Say what should change, in at least a sentence." });
+    }
+  })
+  .transform((body) => ({ ...body, reasonCodes: [...new Set(body.reasonCodes)] }));
