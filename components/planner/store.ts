@@ -59,14 +59,17 @@ export function createPlannerStore(data: PlannerData): PlannerStore {
       const input = inputFor(draft, get().catalogue);
       return { draft, input, result: evaluateBalance(input), lastEditAtMs: now() };
     };
-    const edit = (change: (draft: SetupDraft) => SetupDraft) => set(withDraft(change(get().draft)));
+    // A read-only store (a reviewer's view) ignores every edit, so no control can change what is shown.
+    const edit = (change: (draft: SetupDraft) => SetupDraft) => {
+      if (!get().readOnly) set(withDraft(change(get().draft)));
+    };
 
     const initialInput = inputFor(data.draft, data.catalogue);
     return {
       ...data,
       savedDraft: data.draft,
       input: initialInput,
-      result: evaluateBalance(initialInput),
+      result: data.readOnly && data.storedResult ? data.storedResult : evaluateBalance(initialInput),
       trimCase: data.draft.site.windMS > 0 ? "wind" : "calm",
       lastEditAtMs: 0,
       actions: {

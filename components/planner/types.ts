@@ -1,3 +1,4 @@
+import type { BalanceResult } from "@/lib/balance";
 import type { SetupStatus, UnitSystem } from "@/lib/domain";
 import type { AdapterSpec, ModelSpec, MountSpec, UnitSpec } from "@/lib/setups/balance-input";
 import type { SetupDraft, SetupPayloadDraft } from "@/lib/setups/setup-draft";
@@ -40,6 +41,10 @@ export interface PlannerData {
   draft: SetupDraft;
   catalogue: PlannerCatalogue;
   unitSystem: UnitSystem;
+  /** A reviewer's view: nothing can be edited, and the panels show the stored result. */
+  readOnly?: boolean;
+  /** The server's stored evaluation, shown instead of a fresh one when read-only. */
+  storedResult?: BalanceResult | null;
 }
 
 export type TrimCase = "calm" | "wind" | "gust";

@@ -67,6 +67,11 @@ export async function getSetupById({ id, ownerId }: { id: string; ownerId: strin
   return { row, draft: draftFromRows(row, payloadRows) };
 }
 
+export async function ownsSetup({ id, ownerId }: { id: string; ownerId: string }): Promise<boolean> {
+  const [row] = await getDb().select({ id: setups.id }).from(setups).where(and(eq(setups.id, id), eq(setups.ownerId, ownerId)));
+  return row !== undefined;
+}
+
 // ---------------------------------------------------------------- writes
 
 export interface Evaluated {

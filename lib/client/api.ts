@@ -1,5 +1,5 @@
 import type { BalanceResult } from "@/lib/balance";
-import type { Role, SetupStatus, UnitSystem } from "@/lib/domain";
+import type { DecisionOutcome, FlagLevel, ReviewReasonCode, Role, SetupStatus, UnitSystem } from "@/lib/domain";
 import type { AppError } from "@/lib/errors";
 import type { SetupDraft } from "@/lib/setups/setup-draft";
 
@@ -45,3 +45,41 @@ export const submitSetupRequest = (id: string, version: number, acknowledgeCauti
 export const savePreferencesRequest = (unitSystem: UnitSystem) => call<{ unitSystem: UnitSystem }>("PUT", "/api/me/preferences", { unitSystem });
 
 export const changeRoleRequest = (userId: string, role: Role) => call<{ id: string; role: Role }>("PUT", `/api/users/${encodeURIComponent(userId)}/role`, { role });
+
+// ---------------------------------------------------------------- the review desk
+
+export interface QueueRowView {
+  id: string;
+  name: string;
+  ownerName: string;
+  modelId: string;
+  modelName: string;
+  status: SetupStatus;
+  payloadMassKg: number;
+  freeLiftRatio: number | null;
+  worstFlag: FlagLevel | null;
+  submittedAt: string | null;
+}
+
+export const fetchReviewQueue = (query: string) => call<{ rows: QueueRowView[]; total: number; page: number; pageSize: number }>("GET", `/api/review/queue?${query}`);
+
+export interface ThreadItemView {
+  kind: "comment" | "decision";
+  id: string;
+  at: string;
+  authorId: string;
+  authorName: string;
+  authorRole: Role;
+  body: string;
+  decision: DecisionOutcome | null;
+  setupVersion: number | null;
+}
+
+export const fetchThread = (id: string) => call<{ items: ThreadItemView[] }>("GET", setupUrl(id, "/comments"));
+
+export const addCommentRequest = (id: string, body: string) => call<{ id: string }>("POST", setupUrl(id, "/comments"), { body });
+
+export const markThreadReadRequest = (id: string) => call<null>("PUT", setupUrl(id, "/read"));
+
+export const decideRequest = (id: string, input: { decision: DecisionOutcome; reason: string; reasonCodes: ReviewReasonCode[]; version: number }) =>
+  call<{ id: string; status: SetupStatus; version: number }>("POST", setupUrl(id, "/decision"), input);

@@ -107,6 +107,8 @@ export async function saveSetup({
   version: number;
   draft: SetupDraft;
 }): Promise<Result<{ id: string; version: number; status: SetupStatus; result: BalanceResult; worstFlag: FlagLevel }>> {
+  // Whose it is comes first: a reviewer's draft naming the customer's serial unit must hear 403, not 400.
+  if (!(await setupsDb.ownsSetup({ id, ownerId: viewer.id }))) return notYours(viewer, id);
   const evaluated = await evaluateDraft({ draft, ownerId: viewer.id });
   if (!evaluated.ok) return evaluated;
   const outcome = await setupsDb.saveSetup({ id, owner: viewer, expectedVersion: version, draft, evaluated: evaluated.data });

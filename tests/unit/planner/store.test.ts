@@ -109,3 +109,21 @@ describe("markSaved and displayedTrimDeg", () => {
     expect(displayedTrimDeg(store.getState())).toBe(store.getState().result.wind?.trimDeg);
   });
 });
+
+describe("a read-only store (the reviewer's view)", () => {
+  it("returns the stored result and ignores every edit", () => {
+    const data = plannerDataFor(SETUP);
+    const fresh = createPlannerStore(data).getState().result;
+    const stored = { ...fresh, calmTrimDeg: 4.25 };
+    const store = createPlannerStore({ ...data, readOnly: true, storedResult: stored });
+    expect(store.getState().result).toBe(stored);
+    const { actions } = store.getState();
+    actions.setMountPosition(data.draft.mountPositionXM + 0.05);
+    actions.nudgeMount(0.01);
+    actions.setGas({ purity: 0.6 });
+    actions.removePayload(0);
+    actions.setName("Changed");
+    expect(store.getState().draft).toBe(data.draft);
+    expect(store.getState().result).toBe(stored);
+  });
+});
