@@ -10,12 +10,14 @@ import { formatQuantity } from "@/lib/units";
 
 /** Formats figures in one unit system. */
 interface Say {
-  /** The value with its sign, e.g. "−12 g" reads "-12 g". */
+  /** The value with its sign, e.g. "-12 g". */
   value(figure: Figure): string;
   /** The value without its sign, where the words say which side it lies. */
   size(figure: Figure): string;
-  /** The limit the figure is judged against (NaN shows a missing limit, and tests catch it). */
+  /** The limit the value is judged against (NaN shows a missing limit, and tests catch it). */
   limit(figure: Figure): string;
+  /** Whether the value reads as zero at its display precision. */
+  readsAsZero(figure: Figure): boolean;
 }
 
 function sayIn(system: UnitSystem): Say {
@@ -23,8 +25,12 @@ function sayIn(system: UnitSystem): Say {
     value: (f) => formatQuantity(f.quantity, f.value, system),
     size: (f) => formatQuantity(f.quantity, Math.abs(f.value), system),
     limit: (f) => formatQuantity(f.quantity, f.limit ?? Number.NaN, system),
+    readsAsZero: (f) => formatQuantity(f.quantity, Math.abs(f.value), system) === formatQuantity(f.quantity, 0, system),
   };
 }
+
+// Made once: the engine words every flag of every evaluation, on every drag of the mount.
+const SAY: Readonly<Record<UnitSystem, Say>> = { metric: sayIn("metric"), imperial: sayIn("imperial") };
 
 /** A load factor or safety factor as people write it: "2", "2.5". */
 const factor = (n: number): string => String(Math.round(n * 100) / 100 || 0);
@@ -32,7 +38,7 @@ const factor = (n: number): string => String(Math.round(n * 100) / 100 || 0);
 /** "3.2° nose up", "1.0° nose down", or "level (0.0°)" when it rounds to nothing. */
 function attitude(trim: Figure<"angle">, say: Say): string {
   const size = say.size(trim);
-  if (size === say.size({ ...trim, value: 0 })) return `level (${size})`;
+  if (say.readsAsZero(trim)) return `level (${size})`;
   return `${size} ${trim.value > 0 ? "nose up" : "nose down"}`;
 }
 
@@ -83,7 +89,7 @@ function tetherAngle(flag: FlagData<"tether-angle-wind" | "tether-angle-gust">, 
 const MESSAGES: { readonly [C in FlagCode]: Wording<C> } = {
   "free-lift": ({ level, figures: { freeLift, ratio } }, say) => {
     if (level === "stop" || !ratio) {
-      return freeLift.value < 0 && say.size(freeLift) !== say.size({ ...freeLift, value: 0 })
+      return freeLift.value < 0 && !say.readsAsZero(freeLift)
         ? `It weighs ${say.size(freeLift)} more than it lifts: it does not fly.`
         : `It has no free lift (${say.size(freeLift)}): it does not fly.`;
     }
@@ -228,7 +234,7 @@ const MESSAGES: { readonly [C in FlagCode]: Wording<C> } = {
 /** The flag's message in the reader's units. */
 export function flagMessage(flag: FlagData, system: UnitSystem): string {
   const wording = MESSAGES[flag.code] as Wording<FlagCode>;
-  return wording(flag, sayIn(system));
+  return wording(flag, SAY[system]);
 }
 
 /**

@@ -99,7 +99,8 @@ export function decimalsOf(quantity: Quantity, system: UnitSystem): number {
  */
 export function formatFixed(value: number, decimals: number): string {
   const text = value.toFixed(decimals);
-  return Number(text) === 0 ? (0).toFixed(decimals) : text;
+  // Only a text that starts with "-" can be a negative zero; parse those alone (this runs often).
+  return text.charCodeAt(0) === 45 && Number(text) === 0 ? text.slice(1) : text;
 }
 
 /** "1234 g" style text: the figure and its unit. */

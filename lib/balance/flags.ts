@@ -259,15 +259,16 @@ export interface FlagInput<C extends FlagCode> {
 
 /** A flag with its message worded in metric by the same words the UI uses (lib/flag-messages.ts). */
 export function makeFlag<C extends FlagCode>(code: C, level: FlagLevel, input: FlagInput<C>): Flag<C> {
-  const data = { code, level, figures: input.figures, params: input.params } as FlagBase<C> & {
-    payloads?: readonly PayloadRef[];
-    payloadIndex?: number;
+  // Built once and in this key order, so the JSON reads code, level, message, then the data.
+  const flag: { -readonly [K in keyof FlagBase<C>]: FlagBase<C>[K] } & { message: string } = {
+    code, level, message: "", figures: input.figures, params: input.params,
   };
   if (input.payloads && input.payloads.length > 0) {
-    data.payloads = input.payloads;
-    data.payloadIndex = input.payloads[0].index;
+    flag.payloads = input.payloads;
+    flag.payloadIndex = input.payloads[0].index;
   }
-  return { ...data, message: flagMessage(data as unknown as FlagData, "metric") } as unknown as Flag<C>;
+  flag.message = flagMessage(flag as unknown as FlagData, "metric");
+  return flag as unknown as Flag<C>;
 }
 
 /**
