@@ -3,8 +3,8 @@
  * The engine words its own `message` with these in metric (lib/balance/flags.ts), so the API, the
  * CLI and the UI say the same thing. Pure: safe in client components and in the engine.
  */
-import type { FlagCode, UnitSystem } from "@/lib/domain";
-import type { AirCase, Figure, FlagData, FlagLevel, PayloadRef } from "@/lib/balance/flags";
+import type { FlagCode, FlagLevel, UnitSystem } from "@/lib/domain";
+import type { AirCase, Figure, FlagData, PayloadRef } from "@/lib/balance/flag-shape";
 import type { Attachment } from "@/lib/balance/schema";
 import { formatQuantity } from "@/lib/units";
 
@@ -20,6 +20,7 @@ interface Say {
   readsAsZero(figure: Figure): boolean;
 }
 
+// formatQuantity takes lib/units.ts's Quantity: a figure quantity it cannot show fails to compile here.
 function sayIn(system: UnitSystem): Say {
   return {
     value: (f) => formatQuantity(f.quantity, f.value, system),
@@ -130,7 +131,7 @@ const MESSAGES: { readonly [C in FlagCode]: Wording<C> } = {
 
   "adapter-mismatch": ({ params, payloads }) => {
     const { text, plural } = payloadNames(payloads);
-    return `The adapter on ${text} joins ${attachmentWords(params.adapterFrom)} to ${params.adapterTo}, ` +
+    return `The adapter on the ${text} joins ${attachmentWords(params.adapterFrom)} to ${params.adapterTo}, ` +
       `but ${plural ? "the payloads have" : "the payload has"} a ${params.payloadThread} thread and the mount a ` +
       `${params.mountThread} screw: use one from ${params.payloadThread} to ${params.mountThread}.`;
   },
@@ -148,7 +149,7 @@ const MESSAGES: { readonly [C in FlagCode]: Wording<C> } = {
     const name = payloadNames(payloads).text;
     const screw = params.screw === "mount"
       ? `the mount's ${params.thread} screw`
-      : params.screw === "adapter" ? `the ${params.thread} thread of the adapter on ${name}` : `the ${params.thread} thread of ${name}`;
+      : params.screw === "adapter" ? `the ${params.thread} thread of the adapter on the ${name}` : `the ${params.thread} thread of the ${name}`;
     const text = `The most loaded screw, ${screw}, takes ${say.value(load)} in gusts ` +
       `(${factor(params.loadFactor)} × the weight it carries) against its proof load of ${say.limit(load)}`;
     return level === "stop" ? `${text}: more than it can take.`
@@ -162,7 +163,7 @@ const MESSAGES: { readonly [C in FlagCode]: Wording<C> } = {
       return `No safety line is given: fly the payloads on one${strength} (${times(params.safetyLineFactor)}).`;
     }
     const text = `The safety line breaks at ${say.value(breakingLoad)}`;
-    if (level === "stop") return `${text}, below the payloads' gust load of ${say.limit(breakingLoad)} (${times(params.loadFactor)}).`;
+    if (level === "stop") return `${text}, below the payloads' gust load of ${say.limit(breakingLoad)} (${factor(params.loadFactor)} × their weight).`;
     if (level === "caution") return `${text}; at least ${say.limit(breakingLoad)} (${times(params.safetyLineFactor)}) is advised.`;
     return `${text}, at least the ${say.limit(breakingLoad)} advised (${times(params.safetyLineFactor)}).`;
   },
@@ -202,7 +203,8 @@ const MESSAGES: { readonly [C in FlagCode]: Wording<C> } = {
   "tether-strength": ({ level, figures: { tension, breakingLoad }, params }, say) => {
     const at = AT[params.case];
     if (level === "stop") {
-      return `The largest tether tension, ${say.value(tension)} ${at}, reaches the tether's breaking load of ${say.value(breakingLoad)}.`;
+      return `The largest tether tension, ${say.value(tension)} ${at}, is at or above the tether's breaking load of ` +
+        `${say.value(breakingLoad)}: it would break.`;
     }
     return `The largest tether tension is ${say.value(tension)} ${at}, ${level === "ok" ? "within" : "more than"} ` +
       `the ${say.limit(tension)} that keeps a safety factor of ${factor(params.safetyFactor)} on the tether's ` +
