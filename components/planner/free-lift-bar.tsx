@@ -1,3 +1,5 @@
+import { formatFixed } from "@/lib/units";
+
 interface FreeLiftBarProps {
   ratio: number;
   cautionRatio: number;
@@ -17,7 +19,7 @@ export function FreeLiftBar({ ratio, cautionRatio }: FreeLiftBarProps) {
       aria-valuemin={0}
       aria-valuemax={SCALE_MAX * 100}
       aria-valuenow={Math.round(ratio * 1000) / 10}
-      aria-valuetext={`${(ratio * 100).toFixed(1)} %, ${level}`}
+      aria-valuetext={`${formatFixed(ratio * 100, 1)} %, ${level}`}
       className="relative mt-1 h-3 w-full rounded-full bg-paper"
       data-testid="free-lift-bar"
     >

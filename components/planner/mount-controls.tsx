@@ -1,6 +1,7 @@
 "use client";
 import { useDeferredValue, useMemo, useState } from "react";
 import { solveMaxPayloadMassKg } from "@/lib/balance";
+import { STOP_CAUSES } from "@/lib/flag-messages";
 import { formatQuantity } from "@/lib/units";
 import { usePlanner, usePlannerActions } from "./planner-context";
 import { QuantityInput } from "./quantity-input";
@@ -77,7 +78,7 @@ export function MountControls() {
         <span className="text-muted">How much more it can carry here: </span>
         {capacity.extraMassKg === null
           ? "nothing until the stop flags are cleared"
-          : `${formatQuantity("mass", capacity.extraMassKg, units)} at the mount${capacity.limitingCode ? ` (then: ${capacity.limitingCode})` : ""}`}
+          : `${formatQuantity("mass", capacity.extraMassKg, units)} at the mount${capacity.limitingCode ? `; beyond that ${STOP_CAUSES[capacity.limitingCode]}` : ""}`}
       </p>
     </div>
   );

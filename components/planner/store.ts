@@ -1,9 +1,16 @@
 import { createStore, type StoreApi } from "zustand/vanilla";
 import type { SetupStatus, UnitSystem } from "@/lib/domain";
-import { evaluateBalance, solveLevelTrimPositionX, type BalanceInput, type BalanceResult } from "@/lib/balance";
+import { evaluateBalance, solveLevelTrimPositionX, type BalanceInput, type BalanceResult, type LevelTrimFailure } from "@/lib/balance";
+import { formatQuantity } from "@/lib/units";
 import { toBalanceInput } from "@/lib/setups/balance-input";
 import type { SetupDraft, SetupPayloadDraft } from "@/lib/setups/setup-draft";
 import type { PlannerCatalogue, PlannerData, PlannerModel, TrimCase } from "./types";
+
+const LEVEL_FAILURES: Record<LevelTrimFailure, string> = {
+  "no-free-lift": "No mount position levels it: without free lift it does not fly.",
+  unstable: "No mount position levels it: it has no stable trim (its centre of mass is too high).",
+  "nothing-moves": "No mount position levels it: nothing rides on the mount.",
+};
 
 export interface PlannerActions {
   setMountPosition: (positionXM: number) => void;
@@ -84,12 +91,13 @@ export function createPlannerStore(data: PlannerData): PlannerStore {
           get().actions.setMountPosition(next);
         },
         levelIt: () => {
-          const { input, catalogue, draft } = get();
+          const { input, catalogue, draft, unitSystem } = get();
           const solution = solveLevelTrimPositionX(input, 0);
-          if (!solution) return { ok: false, reason: "No mount position levels it: it needs free lift and a stable trim first." };
+          if (solution.positionX === null) return { ok: false, reason: LEVEL_FAILURES[solution.reason] };
           const model = modelOf(catalogue, draft.modelId);
           if (!solution.withinRail) {
-            return { ok: false, reason: `Level trim needs the mount at ${solution.positionX.toFixed(3)} m, off the rail (${model.railStartXM.toFixed(2)}–${model.railEndXM.toFixed(2)} m).` };
+            const at = (x: number) => formatQuantity("length", x, unitSystem, 3);
+            return { ok: false, reason: `Level trim needs the mount at ${at(solution.positionX)} from the nose, off the rail (${at(model.railStartXM)} to ${at(model.railEndXM)}).` };
           }
           get().actions.setMountPosition(solution.positionX);
           return { ok: true, positionXM: solution.positionX };

@@ -3,8 +3,8 @@
  * capacity and the safety line. Camera threads are 1/4-20 UNC and 3/8-16 UNC (ISO 1222).
  * Tensile stress area per ASME B1.1: As = 0.7854·(D − 0.9743/n)² in², D in inches, n threads/in.
  */
-import { fixed, makeFlag, type Flag, type Limits } from "./flags";
-import type { BalanceInput, DeepReadonly, Thread } from "./schema";
+import { figure, findingsByPayload, makeFlag, type Flag, type Limits, type PayloadRef } from "./flags";
+import type { Attachment, BalanceInput, DeepReadonly, Thread } from "./schema";
 import { STANDARD_GRAVITY_MS2, squareInchesToSquareMetres } from "./units-si";
 
 export const THREAD_SPECS: Readonly<Record<Thread, { majorDiameterIn: number; threadsPerInch: number }>> = {
@@ -30,8 +30,21 @@ export function threadProofLoadN(thread: Thread, proofStrengthPa: number): numbe
   return threadStressAreaM2(thread) * proofStrengthPa;
 }
 
-function weaker(a: Thread, b: Thread, proofStrengthPa: number): number {
-  return Math.min(threadProofLoadN(a, proofStrengthPa), threadProofLoadN(b, proofStrengthPa));
+/** Of two threads in the same material, the one with the smaller stress area gives first. */
+function weakerThread(a: Thread, b: Thread): Thread {
+  return threadStressAreaM2(a) <= threadStressAreaM2(b) ? a : b;
+}
+
+type ThreadFinding =
+  | { readonly code: "adapter-mismatch"; readonly adapterFrom: Attachment; readonly adapterTo: Thread; readonly payloadThread: Thread }
+  | { readonly code: "thread-mismatch"; readonly level: "ok" | "stop"; readonly payloadThread: Thread; readonly viaAdapter: boolean };
+
+interface Screw {
+  readonly use: number;
+  readonly capacityN: number;
+  readonly screw: "mount" | "payload" | "adapter";
+  readonly thread: Thread;
+  readonly payloads: PayloadRef[];
 }
 
 export function attachmentFlags(
@@ -44,84 +57,92 @@ export function attachmentFlags(
   const proofPa = limits.screwProofStrengthPa;
   const mountCapacityN = threadProofLoadN(mount.thread, proofPa);
   // Utilisation of the most loaded screw: the mount's carries everything that hangs from it.
-  let worstUse = (hangingMassKg * STANDARD_GRAVITY_MS2 * limits.loadFactor) / mountCapacityN;
-  let worstCapacityN = mountCapacityN;
-  let worstIndex: number | undefined;
+  let worst: Screw = {
+    use: (hangingMassKg * STANDARD_GRAVITY_MS2 * limits.loadFactor) / mountCapacityN,
+    capacityN: mountCapacityN, screw: "mount", thread: mount.thread, payloads: [],
+  };
+  // One flag per distinct finding: identical payloads share theirs.
+  const findings = findingsByPayload<ThreadFinding>();
 
   for (let i = 0; i < payloads.length; i++) {
     const payload = payloads[i];
-    if (payload.attachment === "strap") continue;
+    const attachment = payload.attachment;
+    if (attachment === "strap") continue;
+    const ref = { index: i, name: payload.name };
     const adapter = payload.adapter;
-    const needsAdapter = payload.attachment !== mount.thread;
+    const needsAdapter = attachment !== mount.thread;
     if (adapter) {
-      const bridges = (adapter.from === payload.attachment && adapter.to === mount.thread) ||
-        (adapter.to === payload.attachment && adapter.from === mount.thread);
+      const bridges = (adapter.from === attachment && adapter.to === mount.thread) ||
+        (adapter.to === attachment && adapter.from === mount.thread);
       if (!bridges) {
-        out.push(makeFlag("adapter-mismatch", "stop",
-          `The adapter for ${payload.name} goes ${adapter.from} to ${adapter.to}, but the payload ` +
-          `has ${payload.attachment} and the mount ${mount.thread}.`, undefined, undefined, i));
+        findings.add(`adapter|${attachment}|${adapter.from}|${adapter.to}`, ref,
+          { code: "adapter-mismatch", adapterFrom: adapter.from, adapterTo: adapter.to, payloadThread: attachment });
         continue;
       }
     } else if (needsAdapter) {
-      out.push(makeFlag("thread-mismatch", "stop",
-        `${payload.name} has a ${payload.attachment} thread and the mount a ${mount.thread} ` +
-        "screw; fit an adapter.", undefined, undefined, i));
+      findings.add(`stop|${attachment}`, ref, { code: "thread-mismatch", level: "stop", payloadThread: attachment, viaAdapter: false });
       continue;
     }
-    out.push(makeFlag("thread-mismatch", "ok",
-      `${payload.name} fits the mount (${payload.attachment}${adapter ? " via adapter" : ""}).`,
-      undefined, undefined, i));
+    findings.add(`ok|${attachment}|${adapter ? "adapter" : ""}`, ref,
+      { code: "thread-mismatch", level: "ok", payloadThread: attachment, viaAdapter: adapter !== undefined });
     // A bridging adapter joins two threads (a strap plate never reaches here: strap payloads skip).
-    const ownCapacityN = adapter && adapter.from !== "strap"
-      ? weaker(adapter.from, adapter.to, proofPa)
-      : threadProofLoadN(payload.attachment, proofPa);
-    const use = ((payload.massKg + (adapter?.massKg ?? 0)) * STANDARD_GRAVITY_MS2 * limits.loadFactor) /
-      ownCapacityN;
-    if (use > worstUse) {
-      worstUse = use;
-      worstCapacityN = ownCapacityN;
-      worstIndex = i;
+    const viaAdapter = adapter !== undefined && adapter.from !== "strap";
+    const thread = viaAdapter ? weakerThread(adapter.from as Thread, adapter.to) : attachment;
+    const capacityN = threadProofLoadN(thread, proofPa);
+    const use = ((payload.massKg + (adapter?.massKg ?? 0)) * STANDARD_GRAVITY_MS2 * limits.loadFactor) / capacityN;
+    if (use > worst.use) {
+      worst = { use, capacityN, screw: viaAdapter ? "adapter" : "payload", thread, payloads: [ref] };
+    } else if (use === worst.use && worst.screw === (viaAdapter ? "adapter" : "payload") && worst.thread === thread) {
+      worst.payloads.push(ref); // an identical payload: the same screw, loaded the same
     }
   }
 
-  const loadN = worstUse * worstCapacityN;
-  const capacityText = `${fixed(loadN, 0)} N against a proof load of ${fixed(worstCapacityN, 0)} N`;
+  for (const { finding, payloads: refs } of findings.groups()) {
+    out.push(finding.code === "adapter-mismatch"
+      ? makeFlag("adapter-mismatch", "stop", {
+        figures: {},
+        params: { payloadThread: finding.payloadThread, mountThread: mount.thread, adapterFrom: finding.adapterFrom, adapterTo: finding.adapterTo },
+        payloads: refs,
+      })
+      : makeFlag("thread-mismatch", finding.level, {
+        figures: {},
+        params: { payloadThread: finding.payloadThread, mountThread: mount.thread, viaAdapter: finding.viaAdapter },
+        payloads: refs,
+      }));
+  }
+
   // Common practice: keep a screw below half its proof load.
-  out.push(worstUse > 1
-    ? makeFlag("thread-capacity", "stop", `Screw load with gusts is ${capacityText}.`, loadN, worstCapacityN, worstIndex)
-    : worstUse > 0.5
-      ? makeFlag("thread-capacity", "caution", `Screw load with gusts is ${capacityText}; caution above half.`, loadN, worstCapacityN, worstIndex)
-      : makeFlag("thread-capacity", "ok", `Screw load with gusts is ${capacityText}.`, loadN, worstCapacityN, worstIndex));
+  const capacity = {
+    figures: { load: figure("force", worst.use * worst.capacityN, worst.capacityN) },
+    params: { loadFactor: limits.loadFactor, screw: worst.screw, thread: worst.thread },
+    payloads: worst.payloads,
+  };
+  out.push(makeFlag("thread-capacity", worst.use > 1 ? "stop" : worst.use > 0.5 ? "caution" : "ok", capacity));
 
   const demandKg = hangingMassKg * limits.loadFactor;
   const ratedKg = mount.ratedLoadKg;
-  const mountText = `${fixed(demandKg, 2)} kg with gusts (×${limits.loadFactor}) on a mount rated ${fixed(ratedKg, 2)} kg`;
+  const load = figure("mass", demandKg, ratedKg);
+  const params = { loadFactor: limits.loadFactor };
   out.push(demandKg > ratedKg
-    ? makeFlag("mount-rated-load", "stop", `Payload load is ${mountText}.`, demandKg, ratedKg)
+    ? makeFlag("mount-rated-load", "stop", { figures: { load }, params })
     : demandKg > limits.mountCautionFraction * ratedKg
-      ? makeFlag("mount-rated-load", "caution",
-        `Payload load is ${mountText}; caution above ${fixed(limits.mountCautionFraction * 100, 0)} %.`, demandKg, ratedKg)
-      : makeFlag("mount-rated-load", "ok", `Payload load is ${mountText}.`, demandKg, ratedKg));
+      ? makeFlag("mount-rated-load", "caution", {
+        figures: { load, share: figure("ratio", demandKg / ratedKg, limits.mountCautionFraction) }, params,
+      })
+      : makeFlag("mount-rated-load", "ok", { figures: { load }, params }));
 
   if (hangingMassKg > 0) {
     const weightN = hangingMassKg * STANDARD_GRAVITY_MS2;
     const wantedN = weightN * limits.safetyLineFactor;
+    const gustLoadN = weightN * limits.loadFactor;
     const breakingN = mount.safetyLineBreakingLoadN;
-    if (breakingN === undefined) {
-      out.push(makeFlag("safety-line", "caution",
-        `No safety line given; fly the payloads on one of at least ${fixed(wantedN, 0)} N.`, undefined, wantedN));
-    } else if (breakingN < weightN * limits.loadFactor) {
-      out.push(makeFlag("safety-line", "stop",
-        `The safety line breaks at ${fixed(breakingN, 0)} N, below the payloads' gust load of ` +
-        `${fixed(weightN * limits.loadFactor, 0)} N.`, breakingN, weightN * limits.loadFactor));
-    } else if (breakingN < wantedN) {
-      out.push(makeFlag("safety-line", "caution",
-        `The safety line breaks at ${fixed(breakingN, 0)} N; at least ${fixed(wantedN, 0)} N ` +
-        `(${limits.safetyLineFactor}× the payloads' weight) is advised.`, breakingN, wantedN));
-    } else {
-      out.push(makeFlag("safety-line", "ok",
-        `The safety line breaks at ${fixed(breakingN, 0)} N, at least ${limits.safetyLineFactor}× the payloads' weight (${fixed(wantedN, 0)} N).`,
-        breakingN, wantedN));
-    }
+    const lineParams = { loadFactor: limits.loadFactor, safetyLineFactor: limits.safetyLineFactor };
+    out.push(breakingN === undefined
+      ? makeFlag("safety-line", "caution", { figures: { needed: figure("force", wantedN) }, params: lineParams })
+      : breakingN < gustLoadN
+        ? makeFlag("safety-line", "stop", { figures: { breakingLoad: figure("force", breakingN, gustLoadN) }, params: lineParams })
+        : makeFlag("safety-line", breakingN < wantedN ? "caution" : "ok", {
+          figures: { breakingLoad: figure("force", breakingN, wantedN) }, params: lineParams,
+        }));
   }
 }

@@ -7,7 +7,7 @@
 import { siteAir } from "./atmosphere";
 import { attachmentFlags } from "./attachment";
 import { hullClearanceM, tetherClearanceM } from "./clearance";
-import { fixed, makeFlag, percent, resolveLimits, type Flag, type Limits } from "./flags";
+import { figure, findingsByPayload, makeFlag, resolveLimits, type AirCase, type Flag, type Limits } from "./flags";
 import { grossLiftKg as grossLift, liftGasDensityKgM3 } from "./gas";
 import { DEFAULT_CYLINDER_CONTENT_M3, DEFAULT_LOSS_PER_DAY_FRACTION, heliumBudget, type HeliumBudget } from "./helium";
 import { payloadCentre, setupMass } from "./mass";
@@ -18,6 +18,8 @@ import { calmTrim, pitchStatics, type CalmTrim } from "./trim";
 import { STANDARD_GRAVITY_MS2, degreesToRadians } from "./units-si";
 import type { Vec } from "./vec";
 import { solveWindCase, type WindCase, type WindModel, type WindOutcome } from "./wind";
+
+const SECONDS_PER_DAY = 86_400;
 
 /** The wind or gust case as the report gives it: the solver's own result. */
 export type WindSummary = WindCase;
@@ -79,47 +81,103 @@ export function buildWindModel(input: Input, statics: WindModel["statics"], cent
 }
 
 function calmFlags(calm: CalmTrim, limits: Limits, out: Flag[]): void {
-  if (calm.trimDeg === null) {
-    if (calm.reason === "no-free-lift") {
-      out.push(makeFlag("trim-calm", "stop", "No calm trim: without free lift the lifter does not fly."));
-      return;
+  // Without free lift there is no calm trim, but the free-lift flag already says it does not fly.
+  if (calm.reason === "no-free-lift") return;
+  if (calm.trimRad === null) {
+    out.push(makeFlag("trim-unstable", "stop", { figures: {}, params: {} }));
+    return;
+  }
+  const trim = figure("angle", calm.trimRad, degreesToRadians(limits.cautionTrimDeg));
+  out.push(makeFlag("trim-calm", Math.abs(calm.trimDeg) > limits.cautionTrimDeg ? "caution" : "ok", { figures: { trim }, params: {} }));
+}
+
+function windFlags(outcome: WindOutcome, speedMS: number, airCase: "wind" | "gust", limits: Limits, out: Flag[]): void {
+  const trimCode = airCase === "wind" ? "trim-wind" : "trim-gust";
+  const angleCode = airCase === "wind" ? "tether-angle-wind" : "tether-angle-gust";
+  const speed = figure("speed", speedMS);
+  const c = outcome.case;
+  if (!c) {
+    const failure = outcome.reason === "cannot-fly" ? "cannot-fly" : "no-equilibrium";
+    out.push(makeFlag(trimCode, "stop", { figures: { speed }, params: { case: airCase, failure } }));
+    return;
+  }
+  const trimSize = Math.abs(c.trimDeg);
+  const trimLevel = trimSize > limits.stopTrimDeg ? "stop" : trimSize > limits.cautionTrimDeg ? "caution" : "ok";
+  const trimLimitDeg = trimLevel === "stop" ? limits.stopTrimDeg : limits.cautionTrimDeg;
+  out.push(makeFlag(trimCode, trimLevel, {
+    figures: { speed, trim: figure("angle", degreesToRadians(c.trimDeg), degreesToRadians(trimLimitDeg)) },
+    params: { case: airCase },
+  }));
+  const angleLevel = c.tetherAngleDeg > limits.stopTetherAngleDeg ? "stop"
+    : c.tetherAngleDeg > limits.cautionTetherAngleDeg ? "caution" : "ok";
+  const angleLimitDeg = angleLevel === "stop" ? limits.stopTetherAngleDeg : limits.cautionTetherAngleDeg;
+  out.push(makeFlag(angleCode, angleLevel, {
+    figures: { speed, angle: figure("angle", degreesToRadians(c.tetherAngleDeg), degreesToRadians(angleLimitDeg)) },
+    params: { case: airCase },
+  }));
+}
+
+function freeLiftFlag(freeLiftKg: number, freeLiftRatio: number, limits: Limits): Flag {
+  const freeLift = figure("mass", freeLiftKg);
+  if (!(freeLiftKg > 0)) return makeFlag("free-lift", "stop", { figures: { freeLift }, params: {} });
+  const ratio = figure("ratio", freeLiftRatio, limits.cautionFreeLiftRatio);
+  return makeFlag("free-lift", freeLiftRatio < limits.cautionFreeLiftRatio ? "caution" : "ok", { figures: { freeLift, ratio }, params: {} });
+}
+
+function railFlag(positionX: number, rail: Input["envelope"]["rail"]): Flag {
+  const railStart = figure("smallLength", rail.startX);
+  const railEnd = figure("smallLength", rail.endX);
+  const passed = positionX < rail.startX ? rail.startX : positionX > rail.endX ? rail.endX : null;
+  return passed === null
+    ? makeFlag("mount-off-rail", "ok", { figures: { position: figure("smallLength", positionX), railStart, railEnd }, params: {} })
+    : makeFlag("mount-off-rail", "stop", { figures: { position: figure("smallLength", positionX, passed), railStart, railEnd }, params: {} });
+}
+
+type GapLevel = "ok" | "caution" | "stop";
+
+/** Clearance at the wind case (calm when there is no wind); the tether check only when it flies. */
+function clearanceFlags(input: Input, centres: readonly Vec[], flying: WindCase | null, limits: Limits, out: Flag[]): void {
+  const { envelope, payloads } = input;
+  const hull = envelope.hull;
+  const lineLengthM = input.tether?.lengthOutM ?? 100;
+  const windMS = input.site?.windMS ?? 0;
+  const level = (gapM: number, touching: boolean): GapLevel =>
+    touching ? "stop" : gapM < limits.clearanceCautionM ? "caution" : "ok";
+  // Identical payloads at the same place have the same gap: one flag names them all.
+  const hullGaps = findingsByPayload<{ gapM: number; level: GapLevel }>();
+  const lineGaps = findingsByPayload<{ gapM: number; level: GapLevel }>();
+  for (let i = 0; i < payloads.length; i++) {
+    const ref = { index: i, name: payloads[i].name };
+    const size = payloads[i].size;
+    if (hull) {
+      const gapM = hullClearanceM(hull, centres[i], size);
+      const gapLevel = level(gapM, gapM < 0);
+      hullGaps.add(`${gapLevel}|${gapM}`, ref, { gapM, level: gapLevel });
     }
-    out.push(makeFlag("trim-unstable", "stop",
-      "No stable trim: the centre of mass is too high against the centre of buoyancy for this " +
-      "tether point; the lifter would roll over. Lower the payload or the tether point."));
-  } else {
-    const size = Math.abs(calm.trimDeg);
-    const text = `Calm trim is ${fixed(calm.trimDeg, 1)}° (nose up positive)`;
-    out.push(size > limits.cautionTrimDeg
-      ? makeFlag("trim-calm", "caution", `${text}; caution beyond ±${fixed(limits.cautionTrimDeg, 0)}°. Slide the mount ${calm.trimDeg > 0 ? "forward" : "aft"}.`, calm.trimDeg, limits.cautionTrimDeg)
-      : makeFlag("trim-calm", "ok", `${text}, within ±${fixed(limits.cautionTrimDeg, 0)}°.`, calm.trimDeg, limits.cautionTrimDeg));
+    if (flying) {
+      const lineAngleRad = degreesToRadians(flying.tetherAngleDeg + flying.trimDeg);
+      const gapM = tetherClearanceM(envelope.tetherPoint, lineAngleRad, lineLengthM, centres[i], size);
+      const gapLevel = level(gapM, gapM <= 0);
+      lineGaps.add(`${gapLevel}|${gapM}`, ref, { gapM, level: gapLevel });
+    }
+  }
+  for (const { finding, payloads: refs } of hullGaps.groups()) {
+    const gap = figure("smallLength", finding.gapM, finding.level === "stop" ? undefined : limits.clearanceCautionM);
+    out.push(makeFlag("clearance-hull", finding.level, { figures: { gap }, params: {}, payloads: refs }));
+  }
+  const speed = windMS > 0 ? figure("speed", windMS) : undefined;
+  for (const { finding, payloads: refs } of lineGaps.groups()) {
+    const gap = figure("smallLength", finding.gapM, finding.level === "stop" ? undefined : limits.clearanceCautionM);
+    out.push(makeFlag("clearance-tether", finding.level, { figures: speed ? { gap, speed } : { gap }, params: {}, payloads: refs }));
   }
 }
 
-function windFlags(outcome: WindOutcome, speedMS: number, kind: "wind" | "gust", limits: Limits, out: Flag[]): void {
-  const trimCode = kind === "wind" ? "trim-wind" : "trim-gust";
-  const angleCode = kind === "wind" ? "tether-angle-wind" : "tether-angle-gust";
-  const at = `in ${kind === "wind" ? "wind" : "gusts"} of ${fixed(speedMS, 1)} m/s`;
-  const c = outcome.case;
-  if (!c) {
-    out.push(makeFlag(trimCode, "stop", outcome.reason === "cannot-fly"
-      ? `It cannot fly ${at}: drag and weight beat lift.`
-      : `No stable trim ${at}.`, speedMS));
-    return;
-  }
-  const size = Math.abs(c.trimDeg);
-  const trimText = `Trim ${at} is ${fixed(c.trimDeg, 1)}°`;
-  out.push(size > limits.stopTrimDeg
-    ? makeFlag(trimCode, "stop", `${trimText}; stop beyond ±${fixed(limits.stopTrimDeg, 0)}°.`, c.trimDeg, limits.stopTrimDeg)
-    : size > limits.cautionTrimDeg
-      ? makeFlag(trimCode, "caution", `${trimText}; caution beyond ±${fixed(limits.cautionTrimDeg, 0)}°.`, c.trimDeg, limits.cautionTrimDeg)
-      : makeFlag(trimCode, "ok", `${trimText}, within ±${fixed(limits.cautionTrimDeg, 0)}°.`, c.trimDeg, limits.cautionTrimDeg));
-  const angleText = `Tether angle ${at} is ${fixed(c.tetherAngleDeg, 1)}° from vertical`;
-  out.push(c.tetherAngleDeg > limits.stopTetherAngleDeg
-    ? makeFlag(angleCode, "stop", `${angleText}; stop beyond ${fixed(limits.stopTetherAngleDeg, 0)}°.`, c.tetherAngleDeg, limits.stopTetherAngleDeg)
-    : c.tetherAngleDeg > limits.cautionTetherAngleDeg
-      ? makeFlag(angleCode, "caution", `${angleText}; caution beyond ${fixed(limits.cautionTetherAngleDeg, 0)}°.`, c.tetherAngleDeg, limits.cautionTetherAngleDeg)
-      : makeFlag(angleCode, "ok", `${angleText}, within ${fixed(limits.cautionTetherAngleDeg, 0)}°.`, c.tetherAngleDeg, limits.cautionTetherAngleDeg));
+/** The largest tether tension of the calm, wind and gust cases, and which case it is. */
+function largestTension(freeLiftKg: number, wind: WindCase | null, gust: WindCase | null): { tensionN: number; case: AirCase } {
+  let largest: { tensionN: number; case: AirCase } = { tensionN: Math.max(0, freeLiftKg) * STANDARD_GRAVITY_MS2, case: "calm" };
+  if (wind && wind.speedMS > 0 && wind.tensionN > largest.tensionN) largest = { tensionN: wind.tensionN, case: "wind" };
+  if (gust && gust.speedMS > 0 && gust.tensionN > largest.tensionN) largest = { tensionN: gust.tensionN, case: "gust" };
+  return largest;
 }
 
 export function evaluateBalance(input: Input): BalanceResult {
@@ -138,21 +196,8 @@ export function evaluateBalance(input: Input): BalanceResult {
   const freeLiftKg = grossLiftKg - mass.totalMassKg;
   const rawRatio = freeLiftKg / grossLiftKg;
   const freeLiftRatio = grossLiftKg > 0 && Number.isFinite(rawRatio) ? rawRatio : -1;
-  const freeText = `Free lift is ${fixed(freeLiftKg, 3)} kg, ${percent(Math.max(-9.99, freeLiftRatio))} of gross lift`;
-  flags.push(!(freeLiftKg > 0)
-    ? makeFlag("free-lift", "stop", `${freeText}: it does not fly.`, freeLiftRatio, 0)
-    : freeLiftRatio < limits.cautionFreeLiftRatio
-      ? makeFlag("free-lift", "caution", `${freeText}; caution below ${percent(limits.cautionFreeLiftRatio)}.`, freeLiftRatio, limits.cautionFreeLiftRatio)
-      : makeFlag("free-lift", "ok", `${freeText}; caution below ${percent(limits.cautionFreeLiftRatio)}.`, freeLiftRatio, limits.cautionFreeLiftRatio));
-
-  const rail = envelope.rail;
-  flags.push(mount.positionX < rail.startX || mount.positionX > rail.endX
-    ? makeFlag("mount-off-rail", "stop",
-      `The mount at x = ${fixed(mount.positionX, 3)} m is off the rail (${fixed(rail.startX, 3)}–${fixed(rail.endX, 3)} m).`,
-      mount.positionX, mount.positionX < rail.startX ? rail.startX : rail.endX)
-    : makeFlag("mount-off-rail", "ok",
-      `The mount at x = ${fixed(mount.positionX, 3)} m is on the rail (${fixed(rail.startX, 3)}–${fixed(rail.endX, 3)} m).`,
-      mount.positionX));
+  flags.push(freeLiftFlag(freeLiftKg, freeLiftRatio, limits));
+  flags.push(railFlag(mount.positionX, envelope.rail));
 
   const statics = pitchStatics(grossLiftKg, mass.totalMassKg, envelope.buoyancyCentre, mass.centreOfMass, envelope.tetherPoint);
   const calm = calmTrim(statics, freeLiftKg);
@@ -170,40 +215,13 @@ export function evaluateBalance(input: Input): BalanceResult {
 
   attachmentFlags(input, mass.hangingMassKg, limits, flags);
 
-  // Clearance at the wind case (calm when there is no wind); skipped when it cannot fly.
-  const flying = windOutcome.case;
-  const hull = envelope.hull;
-  const lineLengthM = input.tether?.lengthOutM ?? 100;
-  for (let i = 0; i < payloads.length; i++) {
-    const size = payloads[i].size;
-    const name = payloads[i].name;
-    if (hull) {
-      const gapM = hullClearanceM(hull, payloadCentres[i], size);
-      const text = `${name} clears the hull by ${fixed(gapM, 3)} m`;
-      flags.push(gapM < 0
-        ? makeFlag("clearance-hull", "stop", `${name} cuts into the hull (by ${fixed(-gapM, 3)} m).`, gapM, 0, i)
-        : gapM < limits.clearanceCautionM
-          ? makeFlag("clearance-hull", "caution", `${text}; caution below ${fixed(limits.clearanceCautionM, 3)} m.`, gapM, limits.clearanceCautionM, i)
-          : makeFlag("clearance-hull", "ok", `${text}.`, gapM, limits.clearanceCautionM, i));
-    }
-    if (flying) {
-      const lineAngleRad = degreesToRadians(flying.tetherAngleDeg + flying.trimDeg);
-      const gapM = tetherClearanceM(envelope.tetherPoint, lineAngleRad, lineLengthM, payloadCentres[i], size);
-      const text = `${name} clears the tether by ${fixed(gapM, 3)} m at ${fixed(windMS, 1)} m/s`;
-      flags.push(gapM <= 0
-        ? makeFlag("clearance-tether", "stop", `${name} touches the tether at ${fixed(windMS, 1)} m/s.`, gapM, 0, i)
-        : gapM < limits.clearanceCautionM
-          ? makeFlag("clearance-tether", "caution", `${text}; caution below ${fixed(limits.clearanceCautionM, 3)} m.`, gapM, limits.clearanceCautionM, i)
-          : makeFlag("clearance-tether", "ok", `${text}.`, gapM, limits.clearanceCautionM, i));
-    }
-  }
+  clearanceFlags(input, payloadCentres, windOutcome.case, limits, flags);
 
   let maxOutM: number | null = null;
   if (input.tether) {
     maxOutM = maxTetherOutM(freeLiftKg, input.tether.massPerMetreKg);
-    const calmTensionN = Math.max(0, freeLiftKg) * STANDARD_GRAVITY_MS2;
-    const largestTensionN = Math.max(calmTensionN, windOutcome.case?.tensionN ?? 0, gustOutcome?.case?.tensionN ?? 0);
-    tetherFlags(input.tether, grossLiftKg, freeLiftKg, largestTensionN, limits, flags);
+    const tension = largestTension(freeLiftKg, windOutcome.case, gustOutcome?.case ?? null);
+    tetherFlags(input.tether, grossLiftKg, freeLiftKg, tension, limits, flags);
   }
 
   const helium = heliumBudget({
@@ -218,13 +236,17 @@ export function evaluateBalance(input: Input): BalanceResult {
     cautionFreeLiftRatio: limits.cautionFreeLiftRatio,
   });
   if (helium.daysToTopUp !== null) {
-    flags.push(makeFlag("helium-top-up", "ok",
-      `Top up after about ${fixed(helium.daysToTopUp, 1)} days (at ${percent(helium.lossPerDayFraction)} loss per day), ` +
-      `when free lift falls below ${percent(limits.cautionFreeLiftRatio)} of gross lift.`,
-      helium.daysToTopUp * 86_400));
+    flags.push(makeFlag("helium-top-up", "ok", {
+      figures: {
+        topUpAfter: figure("duration", helium.daysToTopUp * SECONDS_PER_DAY),
+        lossPerDay: figure("ratio", helium.lossPerDayFraction),
+        freeLiftRatio: figure("ratio", freeLiftRatio, limits.cautionFreeLiftRatio),
+      },
+      params: {},
+    }));
   }
 
-  rulesFlags(envelope.gasVolumeM3, hull ? hull.maxDiameterM : null, input.tether?.lengthOutM ?? null, flags);
+  rulesFlags(envelope.gasVolumeM3, envelope.hull ? envelope.hull.maxDiameterM : null, input.tether?.lengthOutM ?? null, flags);
 
   return {
     airDensityKgM3: air.densityKgM3,

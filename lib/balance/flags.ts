@@ -1,24 +1,20 @@
 /**
  * Flags and the limits that raise them. Every default says where it comes from: design.md's
  * default limits are rules of the trade ("common practice"), strengths cite their standard.
+ * A flag is data: its code, level, the figures it speaks of (SI, each with its display quantity)
+ * and named parameters; its English message is worded from those by lib/flag-messages.ts, the same
+ * words the UI uses in the reader's units, so the two cannot drift apart.
  */
+import { flagMessage } from "../flag-messages";
+import type { FlagCode, FlagLevel } from "../domain/flags";
+import {
+  FIGURE_SI_UNITS, type FigureQuantity, type Figure, type Flag, type FlagBase, type FlagData, type FlagDetails, type PayloadRef,
+} from "./flag-shape";
 import type { LimitsInput } from "./schema";
 import { ksiToPascals } from "./units-si";
 
-import { FLAG_CODES, FLAG_LEVELS, type FlagCode, type FlagLevel } from "../domain/flags";
-
-export { FLAG_CODES, FLAG_LEVELS, type FlagCode, type FlagLevel };
-
-export interface Flag {
-  readonly code: FlagCode;
-  readonly level: FlagLevel;
-  /** Plain words with the value and the limit, SI units. */
-  readonly message: string;
-  readonly valueSI?: number;
-  readonly limitSI?: number;
-  /** The payload the flag is about, when it is about one. */
-  readonly payloadIndex?: number;
-}
+export { FLAG_CODES, FLAG_LEVELS, type FlagCode, type FlagLevel } from "../domain/flags";
+export * from "./flag-shape";
 
 export interface Limits {
   readonly cautionFreeLiftRatio: number;
@@ -76,19 +72,49 @@ export function resolveLimits(limits: Readonly<LimitsInput> | undefined): Limits
   };
 }
 
-export function makeFlag(
-  code: FlagCode,
-  level: FlagLevel,
-  message: string,
-  valueSI?: number,
-  limitSI?: number,
-  payloadIndex?: number,
-): Flag {
-  const flag: { -readonly [K in keyof Flag]: Flag[K] } = { code, level, message };
-  if (valueSI !== undefined) flag.valueSI = valueSI;
-  if (limitSI !== undefined) flag.limitSI = limitSI;
-  if (payloadIndex !== undefined) flag.payloadIndex = payloadIndex;
-  return flag;
+export interface FlagInput<C extends FlagCode> {
+  readonly figures: FlagDetails[C]["figures"];
+  readonly params: FlagDetails[C]["params"];
+  readonly payloads?: readonly PayloadRef[];
+}
+
+/** A flag with its message worded in metric by the same words the UI uses (lib/flag-messages.ts). */
+export function makeFlag<C extends FlagCode>(code: C, level: FlagLevel, input: FlagInput<C>): Flag<C> {
+  // Built once and in this key order, so the JSON reads code, level, message, then the data.
+  const flag: { -readonly [K in keyof FlagBase<C>]: FlagBase<C>[K] } & { message: string } = {
+    code, level, message: "", figures: input.figures, params: input.params,
+  };
+  if (input.payloads && input.payloads.length > 0) {
+    flag.payloads = input.payloads;
+    flag.payloadIndex = input.payloads[0].index;
+  }
+  flag.message = flagMessage(flag as unknown as FlagData, "metric");
+  return flag as unknown as Flag<C>;
+}
+
+/**
+ * Collects one finding per distinct key with every payload it applies to, in first-seen order:
+ * two identical payloads make one flag that names both, not two flags that say the same.
+ */
+export function findingsByPayload<F>(): {
+  add(key: string, payload: PayloadRef, finding: F): void;
+  groups(): ReadonlyArray<{ readonly finding: F; readonly payloads: readonly PayloadRef[] }>;
+} {
+  const byKey = new Map<string, { finding: F; payloads: PayloadRef[] }>();
+  return {
+    add(key, payload, finding) {
+      const group = byKey.get(key);
+      if (group) group.payloads.push(payload);
+      else byKey.set(key, { finding, payloads: [payload] });
+    },
+    groups: () => [...byKey.values()],
+  };
+}
+
+/** A figure in SI: its unit follows from its quantity. */
+export function figure<Q extends FigureQuantity>(quantity: Q, value: number, limit?: number): Figure<Q> {
+  const unit = FIGURE_SI_UNITS[quantity];
+  return limit === undefined ? { quantity, value, unit } : { quantity, value, limit, unit };
 }
 
 export function worstLevel(flags: readonly Flag[]): FlagLevel {
@@ -99,7 +125,3 @@ export function worstLevel(flags: readonly Flag[]): FlagLevel {
   }
   return worst;
 }
-
-// Message formatting: short, fixed decimals, SI units.
-export const percent = (fraction: number): string => `${(fraction * 100).toFixed(1)} %`;
-export const fixed = (value: number, digits: number): string => value.toFixed(digits);

@@ -16,46 +16,51 @@ import { STANDARD_GRAVITY_MS2, degreesToRadians } from "./units-si";
 
 type Input = DeepReadonly<BalanceInput>;
 
-export interface LevelTrimSolution {
-  /** Mount position giving the target calm trim (may lie off the rail: see withinRail). */
-  readonly positionX: number;
-  readonly trimDeg: number;
-  readonly withinRail: boolean;
-}
+/** Why no mount position gives the target trim. */
+export type LevelTrimFailure = "no-free-lift" | "unstable" | "nothing-moves";
+
+export type LevelTrimSolution =
+  /** The mount position giving the target calm trim (it may lie off the rail: see withinRail). */
+  | { readonly positionX: number; readonly trimDeg: number; readonly withinRail: boolean; readonly reason: null }
+  | { readonly positionX: null; readonly trimDeg: null; readonly withinRail: false; readonly reason: LevelTrimFailure };
 
 function withMountAt(input: Input, positionX: number): Input {
   return { ...input, mount: { ...input.mount, positionX } };
 }
 
-/** Null when no position can do it: no free lift, no stable trim, or nothing moves with the mount. */
-export function solveLevelTrimPositionX(input: Input, targetTrimDeg: number = 0): LevelTrimSolution | null {
+const noSolution = (reason: LevelTrimFailure): LevelTrimSolution =>
+  ({ positionX: null, trimDeg: null, withinRail: false, reason });
+
+/** No position when there is no free lift, no stable trim, or nothing moves with the mount. */
+export function solveLevelTrimPositionX(input: Input, targetTrimDeg: number = 0): LevelTrimSolution {
   const air = siteAir(input.site);
   const gasDensity = liftGasDensityKgM3(
     air.pressurePa, air.temperatureK + (input.gas?.superheatK ?? 0), input.gas?.purity ?? 1,
   );
   const gross = grossLift(input.envelope.gasVolumeM3, input.gas?.fillFraction ?? 1, air.densityKgM3, gasDensity);
   const mass = setupMass(input);
-  if (!(gross - mass.totalMassKg > 0)) return null;
+  if (!(gross - mass.totalMassKg > 0)) return noSolution("no-free-lift");
   const movingKg = input.mount.massKg + mass.hangingMassKg;
-  if (!(movingKg > 0)) return null;
+  if (!(movingKg > 0)) return noSolution("nothing-moves");
   const statics = pitchStatics(gross, mass.totalMassKg, input.envelope.buoyancyCentre,
     mass.centreOfMass, input.envelope.tetherPoint);
   const stiffness = calmStiffnessNm(statics);
-  if (!(stiffness < 0)) return null;
+  // The stiffness does not depend on the mount's x, so no position can make it stable.
+  if (!(stiffness < 0)) return noSolution("unstable");
   const wantedWeightArm = statics.buoyancyN * statics.bx -
     Math.tan(degreesToRadians(targetTrimDeg)) * stiffness;
   const shiftM = (wantedWeightArm - statics.weightN * statics.gx) / (STANDARD_GRAVITY_MS2 * movingKg);
   const positionX = input.mount.positionX + shiftM;
-  if (!Number.isFinite(positionX)) return null;
+  if (!Number.isFinite(positionX)) return noSolution("nothing-moves");
   const moved = withMountAt(input, positionX);
   const movedMass = setupMass(moved);
   const trim = calmTrim(
     pitchStatics(gross, movedMass.totalMassKg, input.envelope.buoyancyCentre, movedMass.centreOfMass, input.envelope.tetherPoint),
     gross - movedMass.totalMassKg,
   );
-  if (trim.trimDeg === null) return null;
+  if (trim.trimDeg === null) return noSolution(trim.reason);
   const rail = input.envelope.rail;
-  return { positionX, trimDeg: trim.trimDeg, withinRail: positionX >= rail.startX && positionX <= rail.endX };
+  return { positionX, trimDeg: trim.trimDeg, withinRail: positionX >= rail.startX && positionX <= rail.endX, reason: null };
 }
 
 export interface MaxPayloadOptions {
@@ -84,7 +89,7 @@ function withExtraMass(input: Input, extraKg: number, options: MaxPayloadOptions
   const loaded: Input = { ...input, payloads };
   if (!options.retrim) return loaded;
   const level = solveLevelTrimPositionX(loaded);
-  if (!level) return loaded;
+  if (level.positionX === null) return loaded;
   const rail = input.envelope.rail;
   return withMountAt(loaded, Math.min(rail.endX, Math.max(rail.startX, level.positionX)));
 }

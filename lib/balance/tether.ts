@@ -3,7 +3,7 @@
  * without moving the trim. In calm air the most line the lifter can hold up is
  * free lift / mass per metre.
  */
-import { fixed, makeFlag, percent, type Flag, type Limits } from "./flags";
+import { figure, makeFlag, type AirCase, type Flag, type Limits } from "./flags";
 import { STANDARD_GRAVITY_MS2 } from "./units-si";
 
 export function maxTetherOutM(freeLiftKg: number, massPerMetreKg: number): number {
@@ -20,36 +20,41 @@ export function tetherFlags(
   tether: TetherInput,
   grossLiftKg: number,
   freeLiftKg: number,
-  largestTensionN: number,
+  largestTension: { readonly tensionN: number; readonly case: AirCase },
   limits: Limits,
   out: Flag[],
 ): void {
   const maxOutM = maxTetherOutM(freeLiftKg, tether.massPerMetreKg);
   const lineKg = tether.lengthOutM * tether.massPerMetreKg;
+  const ratio = grossLiftKg > 0 ? freeLiftKg / grossLiftKg : -1;
   const leftRatio = grossLiftKg > 0 ? (freeLiftKg - lineKg) / grossLiftKg : -1;
-  if (freeLiftKg > 0 && tether.lengthOutM >= maxOutM) {
-    out.push(makeFlag("tether-length", "stop",
-      `${fixed(tether.lengthOutM, 0)} m of tether weighs ${fixed(lineKg, 3)} kg, more than the ` +
-      `free lift; at most ${fixed(maxOutM, 0)} m can be held up in calm air.`, tether.lengthOutM, maxOutM));
-  } else if (freeLiftKg > 0 && leftRatio < limits.cautionFreeLiftRatio) {
-    out.push(makeFlag("tether-length", "caution",
-      `With ${fixed(tether.lengthOutM, 0)} m out, free lift left is ${percent(leftRatio)} of gross lift; ` +
-      `caution below ${percent(limits.cautionFreeLiftRatio)} (limit ${fixed(maxOutM, 0)} m).`,
-      tether.lengthOutM, maxOutM));
-  } else if (freeLiftKg > 0) {
-    out.push(makeFlag("tether-length", "ok",
-      `${fixed(tether.lengthOutM, 0)} m of tether out; the lifter holds up at most ${fixed(maxOutM, 0)} m.`,
-      tether.lengthOutM, maxOutM));
+  const lineOut = figure("distance", tether.lengthOutM, maxOutM);
+  // Without free lift the free-lift flag already says it does not fly: no second flag for the line.
+  if (freeLiftKg > 0) {
+    if (tether.lengthOutM >= maxOutM) {
+      out.push(makeFlag("tether-length", "stop", {
+        figures: { lineOut, lineMass: figure("mass", lineKg), freeLift: figure("mass", freeLiftKg) }, params: {},
+      }));
+    } else if (leftRatio < limits.cautionFreeLiftRatio && ratio >= limits.cautionFreeLiftRatio) {
+      // A caution only when the line is what takes the margin below the limit; a margin already
+      // below it is the free-lift flag's caution, not a second one.
+      out.push(makeFlag("tether-length", "caution", {
+        figures: { lineOut, freeLiftLeft: figure("ratio", leftRatio, limits.cautionFreeLiftRatio) }, params: {},
+      }));
+    } else {
+      out.push(makeFlag("tether-length", "ok", { figures: { lineOut }, params: {} }));
+    }
   }
 
   const breakingN = tether.breakingLoadN;
-  const text = `Largest tether tension is ${fixed(largestTensionN, 1)} N; the tether breaks at ${fixed(breakingN, 0)} N`;
-  out.push(largestTensionN >= breakingN
-    ? makeFlag("tether-strength", "stop", `${text}.`, largestTensionN, breakingN)
-    : largestTensionN * limits.tetherSafetyFactor > breakingN
-      ? makeFlag("tether-strength", "caution", `${text}; keep ${limits.tetherSafetyFactor}× margin.`,
-        largestTensionN, breakingN / limits.tetherSafetyFactor)
-      : makeFlag("tether-strength", "ok", `${text}.`, largestTensionN, breakingN / limits.tetherSafetyFactor));
+  const tensionN = largestTension.tensionN;
+  const breakingLoad = figure("force", breakingN);
+  const params = { safetyFactor: limits.tetherSafetyFactor, case: largestTension.case };
+  out.push(tensionN >= breakingN
+    ? makeFlag("tether-strength", "stop", { figures: { tension: figure("force", tensionN, breakingN), breakingLoad }, params })
+    : makeFlag("tether-strength", tensionN * limits.tetherSafetyFactor > breakingN ? "caution" : "ok", {
+      figures: { tension: figure("force", tensionN, breakingN / limits.tetherSafetyFactor), breakingLoad }, params,
+    }));
 }
 
 /** Weight of the line out, N (for callers who show it). */

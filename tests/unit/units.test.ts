@@ -1,6 +1,6 @@
 import { evaluate } from "mathjs";
 import { describe, expect, it } from "vitest";
-import { formatQuantity, fromDisplay, toDisplay, unitOf } from "@/lib/units";
+import { formatFixed, formatQuantity, fromDisplay, toDisplay, unitOf } from "@/lib/units";
 
 // Reference conversions from mathjs (a general-purpose units library), checked against ours.
 const mj = (expr: string): number => evaluate(expr) as number;
@@ -15,6 +15,15 @@ describe("toDisplay / fromDisplay", () => {
     expect(toDisplay("speed", 10, "imperial")).toBeCloseTo(mj("number(10 m/s, mi/h)"), 10);
     expect(toDisplay("force", 100, "imperial")).toBeCloseTo(mj("number(100 N, lbf)"), 10);
     expect(toDisplay("area", 0.01, "imperial")).toBeCloseTo(mj("number(0.01 m^2, inch^2)"), 8);
+    expect(toDisplay("distance", 100, "imperial")).toBeCloseTo(mj("number(100 m, ft)"), 10);
+  });
+
+  it("returns degrees for radians, days for seconds and percent for a ratio in both systems", () => {
+    for (const system of ["metric", "imperial"] as const) {
+      expect(toDisplay("angle", 0.5, system)).toBeCloseTo(mj("number(0.5 rad, deg)"), 12);
+      expect(toDisplay("duration", 200_000, system)).toBeCloseTo(mj("number(200000 s, day)"), 12);
+      expect(toDisplay("ratio", 0.256, system)).toBeCloseTo(25.6, 12);
+    }
   });
 
   it("returns °F for °C by the exact formula (0 °C = 32 °F, 100 °C = 212 °F; definition)", () => {
@@ -24,7 +33,7 @@ describe("toDisplay / fromDisplay", () => {
   });
 
   it("round-trips every quantity in both systems", () => {
-    const quantities = ["mass", "itemMass", "length", "smallLength", "volume", "speed", "temperature", "temperatureDifference", "force", "massPerLength", "area"] as const;
+    const quantities = ["mass", "itemMass", "length", "smallLength", "distance", "volume", "speed", "temperature", "temperatureDifference", "force", "massPerLength", "area", "angle", "ratio", "duration"] as const;
     for (const system of ["metric", "imperial"] as const) {
       for (const q of quantities) {
         for (const si of [-12.5, 0, 0.001, 3.7, 1234]) expect(fromDisplay(q, toDisplay(q, si, system), system)).toBeCloseTo(si, 9);
@@ -39,5 +48,24 @@ describe("formatQuantity", () => {
     expect(formatQuantity("mass", 0.45359237, "imperial")).toBe("1.00 lb");
     expect(formatQuantity("length", 0.3048 * 150, "imperial", 0)).toBe("150 ft");
     expect(unitOf("speed", "imperial")).toBe("mph");
+    expect(formatQuantity("angle", Math.PI / 18, "imperial")).toBe("10.0°");
+    expect(formatQuantity("ratio", 0.15, "metric")).toBe("15.0 %");
+    expect(formatQuantity("distance", 45.72, "metric")).toBe("46 m");
+  });
+
+  it("returns zero, not negative zero, for a value that rounds to zero from below", () => {
+    expect(formatQuantity("angle", -1e-5, "metric")).toBe("0.0°");
+    expect(formatQuantity("mass", -0.0001, "metric")).toBe("0 g");
+    expect(formatQuantity("length", -0.001, "imperial")).toBe("0.00 ft");
+    expect(formatQuantity("mass", -0.012, "metric")).toBe("-12 g");
+  });
+});
+
+describe("formatFixed", () => {
+  it("returns the fixed-decimal text with no sign on a zero", () => {
+    expect(formatFixed(-0.04, 1)).toBe("0.0");
+    expect(formatFixed(-0, 2)).toBe("0.00");
+    expect(formatFixed(-0.06, 1)).toBe("-0.1");
+    expect(formatFixed(3.14159, 2)).toBe("3.14");
   });
 });

@@ -68,6 +68,33 @@ describe("evaluateBalance attachment flags", () => {
     expect(flagLevels(result, "adapter-mismatch")).toEqual(["stop"]);
   });
 
+  it("returns one thread flag naming both when two identical payloads share a thread", () => {
+    const setup = demoSetup();
+    const logger = setup.payloads[1];
+    const twins = evaluateBalance({ ...setup, payloads: [logger, logger] });
+    const fits = twins.flags.filter((f) => f.code === "thread-mismatch");
+    expect(fits.map((f) => f.level)).toEqual(["ok"]);
+    expect(fits[0].payloads).toEqual([{ index: 0, name: logger.name }, { index: 1, name: logger.name }]);
+
+    const { adapter: _none, ...bare } = logger;
+    const mismatched = evaluateBalance({ ...setup, payloads: [bare, bare, setup.payloads[0]] });
+    expect(flagLevels(mismatched, "thread-mismatch")).toEqual(["stop", "ok"]);
+    const stop = mismatched.flags.find((f) => f.code === "thread-mismatch" && f.level === "stop");
+    expect(stop?.payloads?.map((p) => p.index)).toEqual([0, 1]);
+    expect(stop?.message).toMatch(/\(×2\) have a 3\/8-16 UNC thread/);
+
+    const wrong = { ...logger, adapter: { massKg: 0.01, from: "1/4-20 UNC" as const, to: "1/4-20 UNC" as const } };
+    expect(flagLevels(evaluateBalance({ ...setup, payloads: [wrong, wrong] }), "adapter-mismatch")).toEqual(["stop"]);
+  });
+
+  it("returns one thread flag per distinct problem when the payloads differ", () => {
+    const setup = demoSetup();
+    const { adapter: _none, ...bare } = setup.payloads[1];
+    const result = evaluateBalance({ ...setup, payloads: [setup.payloads[0], bare, setup.payloads[1]] });
+    // direct fit, a mismatch, and a fit through an adapter: three different findings
+    expect(flagLevels(result, "thread-mismatch")).toEqual(["ok", "stop", "ok"]);
+  });
+
   it("skips the thread check for a strap", () => {
     const result = evaluateBalance(withPayload({ attachment: "strap" }));
     expect(flagLevels(result, "thread-mismatch")).toEqual([]);
@@ -94,7 +121,9 @@ describe("evaluateBalance attachment flags", () => {
     const big: BalanceInput = { ...setup, envelope: { ...setup.envelope, gasVolumeM3: 1000 } };
     const flag = evaluateBalance(big).flags.find((f) => f.code === "thread-capacity");
     expect(flag?.level).toBe("stop");
-    expect(flag?.valueSI).toBeCloseTo(500 * 9.80665 * 2, 6);
+    expect(flag?.figures.load).toMatchObject({ quantity: "force", unit: "N" });
+    expect(flag?.figures.load.value).toBeCloseTo(500 * 9.80665 * 2, 6);
+    expect(flag?.figures.load.limit).toBeCloseTo(threadProofLoadN("1/4-20 UNC", ksiToPascals(55)), 6);
   });
 
   it("flags a mount off the rail as a stop, not a schema error", () => {

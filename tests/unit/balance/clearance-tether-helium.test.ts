@@ -48,6 +48,16 @@ describe("evaluateBalance clearance flags", () => {
     expect(flagLevels(evaluateBalance(onLine), "clearance-tether")).toEqual(["stop"]);
   });
 
+  it("returns one clearance flag for identical payloads at the same place, naming both", () => {
+    const setup = demoSetup();
+    const whip = setup.payloads[0];
+    const result = evaluateBalance({ ...setup, payloads: [whip, whip, setup.payloads[1]] });
+    for (const code of ["clearance-hull", "clearance-tether"] as const) {
+      const flags = result.flags.filter((f) => f.code === code);
+      expect(flags.map((f) => f.payloads?.map((p) => p.index))).toEqual([[0, 1], [2]]);
+    }
+  });
+
   it("skips the hull check without a hull shape", () => {
     const setup = demoSetup();
     const { hull: _omit, ...envelope } = setup.envelope;

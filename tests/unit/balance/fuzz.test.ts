@@ -1,6 +1,7 @@
 import fc from "fast-check";
 import { describe, expect, it } from "vitest";
 import { THREADS, balanceInputSchema, demoHulls, evaluateBalance, type BalanceInput } from "@/lib/balance";
+import { flagMessage } from "@/lib/flag-messages";
 import { allNumbers } from "./setups";
 
 // Whole schema ranges, edges included: fast-check's doubles favour bounds and small values.
@@ -83,7 +84,10 @@ describe("evaluateBalance on random valid input", () => {
       const bad = allNumbers(result).filter(([, value]) => !Number.isFinite(value));
       expect(bad).toEqual([]);
       expect(input).toEqual(frozen); // inputs are never mutated
-      for (const flag of result.flags) expect(flag.message).not.toMatch(/NaN|Infinity/);
+      for (const flag of result.flags) {
+        expect(flag.message).not.toMatch(/NaN|Infinity/);
+        expect(flagMessage(flag, "imperial")).not.toMatch(/NaN|Infinity/);
+      }
     }), { numRuns: 10_000 });
   }, 120_000);
 });

@@ -29,13 +29,14 @@ describe("calmTrim", () => {
     expect(flagLevels(result, "trim-unstable")).toEqual(["stop"]);
   });
 
-  it("returns null and a stop flag when there is no free lift", () => {
+  it("returns null and one stop flag, the free lift's, when there is no free lift", () => {
     const setup = symmetricSetup();
     const result = evaluateBalance({ ...setup, payloads: [{ ...setup.payloads[0], massKg: 2 }] });
     expect(result.freeLiftKg).toBeLessThan(0);
     expect(result.calmTrimDeg).toBeNull();
     expect(flagLevels(result, "free-lift")).toEqual(["stop"]);
-    expect(flagLevels(result, "trim-calm")).toEqual(["stop"]);
+    // One flag per problem: the calm trim does not repeat that it does not fly.
+    expect(flagLevels(result, "trim-calm")).toEqual([]);
   });
 
   it("trims level for any symmetric setup", () => {
@@ -118,7 +119,9 @@ describe("evaluateBalance in wind", () => {
       (setup, speeds) => {
         const angles = [...speeds].sort((a, b) => a - b).map((windMS) =>
           evaluateBalance({ ...setup, site: { ...setup.site, windMS } }).wind?.tetherAngleDeg ?? 90);
-        for (let i = 1; i < angles.length; i++) expect(angles[i]).toBeGreaterThanOrEqual(angles[i - 1] - 1e-9);
+        // The trim is solved to 1e-11 rad; the tether angle inherits a few 1e-9° of that, so
+        // "never lowers" is checked to 1e-7°.
+        for (let i = 1; i < angles.length; i++) expect(angles[i]).toBeGreaterThanOrEqual(angles[i - 1] - 1e-7);
       },
     ), { numRuns: 300 });
   });
