@@ -11,7 +11,7 @@ export default async function AppLayout({ children }: { children: ReactNode }) {
   const viewer = await requirePageViewer();
   return (
     <div className="min-h-screen">
-      <header className="border-b border-hairline bg-paper">
+      <header className="border-b border-hairline bg-paper print:hidden">
         <div className="mx-auto flex max-w-7xl flex-wrap items-center gap-4 px-4 py-3">
           <Link href="/setups"><Logo size={24} /></Link>
           <AppNav items={navItemsFor(viewer.role)} />

@@ -18,9 +18,11 @@ interface SetupTableProps {
   hrefFor?: (row: SetupListItem) => string;
   /** Extra controls at the end of each row. */
   actionsFor?: (row: SetupListItem) => ReactNode;
+  /** Comments by others the viewer has not read, per setup id. */
+  unread?: Record<string, number>;
 }
 
-export function SetupTable({ rows, showOwner = false, testId = "setup-table", hrefFor, actionsFor }: SetupTableProps) {
+export function SetupTable({ rows, showOwner = false, testId = "setup-table", hrefFor, actionsFor, unread }: SetupTableProps) {
   return (
     <table className="panel w-full border-separate border-spacing-0 text-sm" data-testid={testId}>
       <thead className="text-left text-muted">
@@ -39,6 +41,11 @@ export function SetupTable({ rows, showOwner = false, testId = "setup-table", hr
           <tr key={row.id} className="border-t border-hairline" data-testid="setup-row">
             <td className="border-t border-hairline px-3 py-2 font-medium">
               {hrefFor ? <Link href={hrefFor(row)} className="text-accent underline-offset-2 hover:underline">{row.name}</Link> : row.name}
+              {unread?.[row.id] ? (
+                <span className="ml-2 rounded-full bg-accent px-1.5 py-0.5 text-xs font-normal text-white" data-testid="unread-comments">
+                  {unread[row.id]} new {unread[row.id] === 1 ? "comment" : "comments"}
+                </span>
+              ) : null}
             </td>
             {showOwner && <td className="border-t border-hairline px-3 py-2">{row.ownerName}</td>}
             <td className="border-t border-hairline px-3 py-2">{row.modelName}</td>

@@ -23,6 +23,30 @@ export interface RouteSpec<P, Q, B> {
   notFoundMessage?: string;
   /** Status of a success: 200 unless said; 204 answers no body. */
   status?: 200 | 201 | 204;
+  /** "file": the core returns a FileBody and the answer is those bytes, not JSON. */
+  respond?: "json" | "file";
+}
+
+/** What a core returns for a route that answers with a file. */
+export interface FileBody {
+  bytes: Uint8Array;
+  contentType: string;
+  fileName: string;
+  /** "attachment" makes the browser download it; "inline" may show it. */
+  disposition: "attachment" | "inline";
+}
+
+function fileResponse(file: FileBody): Response {
+  const name = file.fileName.replace(/[^\w.-]+/g, "_");
+  return new Response(file.bytes as BodyInit, {
+    headers: {
+      "content-type": file.contentType,
+      "content-length": String(file.bytes.byteLength),
+      "content-disposition": `${file.disposition}; filename="${name}"`,
+      "x-content-type-options": "nosniff",
+      "cache-control": "private, no-store",
+    },
+  });
 }
 
 export interface RouteArgs<P, Q, B> {
@@ -80,6 +104,7 @@ export function route<T, P = undefined, Q = undefined, B = undefined>(
       const result = await handler({ viewer: viewer.data, request, ...input.data });
       if (!result.ok) return errorResponse(result.error);
       if (spec.status === 204) return new Response(null, { status: 204 });
+      if (spec.respond === "file") return fileResponse(result.data as FileBody);
       return Response.json(result.data, { status: spec.status ?? 200 });
     } catch (error) {
       return errorResponse(internalError(error, `${request.method} ${new URL(request.url).pathname}`));

@@ -1,4 +1,5 @@
 import { listActiveEnvelopeModels } from "@/db/queries/catalogue";
+import { countUnreadComments } from "@/db/queries/review";
 import { listSetupsForOwner } from "@/db/queries/setups";
 import { NewSetupForm } from "@/components/setups/new-setup-form";
 import { SetupRowActions } from "@/components/setups/setup-row-actions";
@@ -11,6 +12,7 @@ export const metadata = { title: "Setups" };
 export default async function SetupsPage() {
   const viewer = await requirePageViewer(undefined, "/setups");
   const [rows, models] = await Promise.all([listSetupsForOwner({ ownerId: viewer.id }), listActiveEnvelopeModels()]);
+  const unread = await countUnreadComments({ setupIds: rows.map((r) => r.id), userId: viewer.id });
   return (
     <section className="space-y-4">
       <div className="flex flex-wrap items-end justify-between gap-4">
@@ -23,7 +25,7 @@ export default async function SetupsPage() {
           site, the gas and the tether. Start one with “New setup”; it will be listed here with its status and worst flag.
         </EmptyState>
       ) : (
-        <SetupTable rows={rows} hrefFor={(row) => `/setups/${row.id}`} actionsFor={(row) => <SetupRowActions id={row.id} name={row.name} />} />
+        <SetupTable rows={rows} hrefFor={(row) => `/setups/${row.id}`} actionsFor={(row) => <SetupRowActions id={row.id} name={row.name} />} unread={unread} />
       )}
     </section>
   );

@@ -27,7 +27,10 @@ export default async function ReviewPage({ params }: PageProps<"/review/[id]">) 
 
   return (
     <div className="space-y-4" data-testid="review-page">
-      <p className="text-sm"><Link href="/review" className="text-accent underline">← Review desk</Link></p>
+      <p className="flex justify-between text-sm">
+        <Link href="/review" className="text-accent underline">← Review desk</Link>
+        <Link href={`/setups/${id}/report`} className="text-accent underline">Field report</Link>
+      </p>
       <header className="flex flex-wrap items-baseline gap-x-4 gap-y-1">
         <h1 className="text-2xl" data-testid="review-title">{draft.name}</h1>
         <span className="text-sm text-muted">by {header.ownerName} · {header.modelName} · version {version}</span>

@@ -1,0 +1,52 @@
+import "server-only";
+import { getPlannerCatalogue } from "@/db/queries/catalogue";
+import { getSetupHeaderForViewer, listThread } from "@/db/queries/review";
+import { getSetupById } from "@/db/queries/setups";
+import type { Viewer } from "@/lib/auth/access";
+import type { BalanceResult } from "@/lib/balance";
+import { fail, ok, type Result } from "@/lib/errors";
+import { buildFieldReport, type FieldReport } from "@/lib/report/field-report";
+import { formatQuantity } from "@/lib/units";
+import { evaluateDraft } from "./evaluate-draft";
+
+/** Stored results from before flags carried their figures are evaluated again, from the stored input. */
+const isCurrentShape = (result: BalanceResult | null): result is BalanceResult => result !== null && result.flags.every((f) => "figures" in f);
+
+/** The field report of a setup in the viewer's units: its owner's, or review staff's once it was submitted. */
+export async function getFieldReport({ viewer, id }: { viewer: Viewer; id: string }): Promise<Result<FieldReport>> {
+  const header = await getSetupHeaderForViewer({ id, viewer });
+  const stored = header ? await getSetupById({ id, ownerId: null }) : null;
+  if (!header || !stored) return fail("not_found", "No such setup, or not one you can see.");
+  const { row, draft } = stored;
+  let result = row.resultJson;
+  if (!isCurrentShape(result)) {
+    const fresh = await evaluateDraft({ draft, ownerId: header.ownerId });
+    if (!fresh.ok) return fresh;
+    result = fresh.data.result;
+  }
+  const [catalogue, thread] = await Promise.all([getPlannerCatalogue({ ownerId: header.ownerId }), listThread({ setupId: id })]);
+  const model = catalogue.models.find((m) => m.id === draft.modelId);
+  const unit = catalogue.units.find((u) => u.id === draft.unitId);
+  const mount = catalogue.mounts.find((m) => m.id === draft.mountId);
+  const decision = [...thread].reverse().find((t) => t.kind === "decision");
+  const units = viewer.unitSystem;
+  return ok(
+    buildFieldReport({
+      setupId: id,
+      version: row.version,
+      status: row.status,
+      updatedAt: row.updatedAt,
+      ownerName: header.ownerName,
+      draft,
+      result,
+      modelName: header.modelName,
+      unitText: unit ? `${unit.serial}: weighed ${formatQuantity("mass", unit.measuredMassKg, units)}, gross lift ${formatQuantity("mass", unit.measuredGrossLiftKg, units)} on ${unit.measuredOn}` : null,
+      mount: mount ? { name: mount.name, thread: mount.thread, ratedLoadKg: mount.ratedLoadKg } : { name: "unknown mount", thread: "", ratedLoadKg: 0 },
+      rail: { startXM: model?.railStartXM ?? 0, endXM: model?.railEndXM ?? 1 },
+      adapterNames: Object.fromEntries(catalogue.adapters.map((a) => [a.id, a.name])),
+      latestDecision: decision && decision.decision ? { outcome: decision.decision, reviewerName: decision.authorName, at: decision.at, setupVersion: decision.setupVersion ?? 0, note: decision.body } : null,
+      generatedAt: new Date(),
+      unitSystem: units,
+    }),
+  );
+}
