@@ -37,3 +37,6 @@ export async function evaluateDraft({ draft, ownerId, path = "draft" }: { draft:
   const result = evaluateBalance(checked.data);
   return ok({ result, worstFlag: worstLevel(result.flags) });
 }
+
+/** Stored results from before flags carried their figures are evaluated again from the stored input. */
+export const isCurrentResultShape = (result: BalanceResult | null): result is BalanceResult => result !== null && result.flags.every((f) => "figures" in f);

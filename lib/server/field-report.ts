@@ -3,14 +3,11 @@ import { getPlannerCatalogue } from "@/db/queries/catalogue";
 import { getSetupHeaderForViewer, listThread } from "@/db/queries/review";
 import { getSetupById } from "@/db/queries/setups";
 import type { Viewer } from "@/lib/auth/access";
-import type { BalanceResult } from "@/lib/balance";
 import { fail, ok, type Result } from "@/lib/errors";
 import { buildFieldReport, type FieldReport } from "@/lib/report/field-report";
 import { formatQuantity } from "@/lib/units";
-import { evaluateDraft } from "./evaluate-draft";
+import { evaluateDraft, isCurrentResultShape } from "./evaluate-draft";
 
-/** Stored results from before flags carried their figures are evaluated again, from the stored input. */
-const isCurrentShape = (result: BalanceResult | null): result is BalanceResult => result !== null && result.flags.every((f) => "figures" in f);
 
 /** The field report of a setup in the viewer's units: its owner's, or review staff's once it was submitted. */
 export async function getFieldReport({ viewer, id }: { viewer: Viewer; id: string }): Promise<Result<FieldReport>> {
@@ -19,7 +16,7 @@ export async function getFieldReport({ viewer, id }: { viewer: Viewer; id: strin
   if (!header || !stored) return fail("not_found", "No such setup, or not one you can see.");
   const { row, draft } = stored;
   let result = row.resultJson;
-  if (!isCurrentShape(result)) {
+  if (!isCurrentResultShape(result)) {
     const fresh = await evaluateDraft({ draft, ownerId: header.ownerId });
     if (!fresh.ok) return fresh;
     result = fresh.data.result;

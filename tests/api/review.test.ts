@@ -1,6 +1,7 @@
 import { afterAll, beforeAll, describe, expect, inject, it } from "vitest";
 import { openDatabase } from "@/db/index";
 import { ApiClient } from "../support/http";
+import { pdfText } from "../support/pdf-text";
 import { readSetupOver, submittedSetup } from "../support/setup-fixtures";
 
 const baseURL = inject("baseURL");
@@ -223,6 +224,30 @@ describe("GET /api/review/queue", () => {
       expect(response.status, query).toBe(400);
       const error = ((await response.json()) as ErrorBody).error;
       if (param) expect(error.issues?.map((i) => i.path), query).toContain(param);
+    }
+  });
+});
+
+describe("GET /api/setups/:id/report.pdf", () => {
+  it("returns the PDF to the owner and to staff once submitted, with the review state, and 404/401 to others", async () => {
+    const draftPdf = await people.wren.get("/api/setups/set-wren-whip/report.pdf");
+    expect(draftPdf.status).toBe(200);
+    expect(draftPdf.headers.get("content-type")).toBe("application/pdf");
+    expect(draftPdf.headers.get("content-disposition")).toMatch(/^attachment; filename="field-report-set-wren-whip\.pdf"$/);
+    expect(await pdfText(new Uint8Array(await draftPdf.arrayBuffer()))).toContain("NOT REVIEWED");
+    expect((await people.support.get("/api/setups/set-wren-whip/report.pdf")).status).toBe(404);
+    expect((await people.tobin.get("/api/setups/set-wren-cam/report.pdf")).status).toBe(404);
+    expect((await people.stranger.get("/api/setups/set-wren-cam/report.pdf")).status).toBe(401);
+
+    const setup = await submittedSetup(database.db, people.wren, { from: "set-wren-cam", name: "Report after approval" });
+    expect((await decide(people.support, setup.id, { decision: "approved", reason: "Balanced and light.", version: setup.version })).status).toBe(200);
+    for (const client of [people.wren, people.support, people.maker]) {
+      const response = await client.get(`/api/setups/${setup.id}/report.pdf`);
+      expect(response.status).toBe(200);
+      const text = await pdfText(new Uint8Array(await response.arrayBuffer()));
+      expect(text).toContain("APPROVED FOR FIRST FLIGHT");
+      expect(text).toContain("Sunniva Rook");
+      expect(text).toContain("Report after approval");
     }
   });
 });

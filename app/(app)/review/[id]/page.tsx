@@ -10,7 +10,9 @@ import { ReviewWorkspace } from "@/components/review/review-workspace";
 import { Thread } from "@/components/review/thread";
 import { FlagBadge } from "@/components/ui/flag-badge";
 import { STAFF_ROLES, STATUS_WORDS } from "@/lib/domain";
+import { flagMessage } from "@/lib/flag-messages";
 import { requirePageViewer } from "@/lib/auth/guard";
+import { isCurrentResultShape } from "@/lib/server/evaluate-draft";
 import { getSetup } from "@/lib/server/setups";
 
 export const metadata = { title: "Review" };
@@ -38,9 +40,9 @@ export default async function ReviewPage({ params }: PageProps<"/review/[id]">) 
         {header.worstFlag && <FlagBadge level={header.worstFlag} />}
       </header>
       <p className="text-sm text-muted">Read-only: only the customer can change this setup. The figures are the server&apos;s stored evaluation of version {version}.</p>
-      <ReviewWorkspace data={{ setupId: id, version, status, draft, catalogue: toPlannerCatalogue(catalogueRows), unitSystem: viewer.unitSystem, storedResult: result }}>
+      <ReviewWorkspace data={{ setupId: id, version, status, draft, catalogue: toPlannerCatalogue(catalogueRows), unitSystem: viewer.unitSystem, storedResult: isCurrentResultShape(result) ? result : null }}>
         {canDecide ? (
-          <DecisionForm setupId={id} version={version} raised={[...new Map(raised.map((f) => [f.code, { code: f.code, level: f.level, text: f.message }])).values()]} />
+          <DecisionForm setupId={id} version={version} raised={[...new Map(raised.map((f) => [f.code, { code: f.code, level: f.level, text: flagMessage(f, viewer.unitSystem) }])).values()]} />
         ) : (
           <p className="panel p-4 text-sm" data-testid="decision-closed">
             {header.ownerId === viewer.id ? "This is your own setup: someone else reviews it." : `No decision is open: the setup is ${STATUS_WORDS[status]}.`}
