@@ -1,5 +1,6 @@
 "use client";
 import { useMutation } from "@tanstack/react-query";
+import { useRouter } from "next/navigation";
 import { useState } from "react";
 import { worstLevel } from "@/lib/balance";
 import { FlagBadge } from "@/components/ui/flag-badge";
@@ -18,6 +19,7 @@ export function PlannerToolbar() {
   const dirty = usePlanner((s) => s.draft !== s.savedDraft);
   const worst = usePlanner((s) => worstLevel(s.result.flags));
   const unitSystem = usePlanner((s) => s.unitSystem);
+  const router = useRouter();
   const [acknowledged, setAcknowledged] = useState(false);
   const [message, setMessage] = useState<{ kind: "ok" | "error"; text: string; conflict?: boolean } | null>(null);
 
@@ -36,6 +38,8 @@ export function PlannerToolbar() {
     onSuccess: (saved) => {
       actions.markSaved(saved);
       setMessage({ kind: "ok", text: `Saved (version ${saved.version}).` });
+      // The decision banner and the discussion around the Planner are server-rendered: bring them up to date.
+      router.refresh();
     },
     onError: report,
   });
@@ -44,6 +48,7 @@ export function PlannerToolbar() {
     onSuccess: (done) => {
       actions.markSaved(done);
       setMessage({ kind: "ok", text: "Submitted to the review desk." });
+      router.refresh();
     },
     onError: report,
   });
