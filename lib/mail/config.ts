@@ -19,7 +19,9 @@ export function mailRoute(env: Env = process.env): MailRoute {
   if (url) return { kind: "smtp", url };
   const port = Number(env.TRIMRAIL_SMTP_FAKE_PORT);
   if (Number.isInteger(port) && port > 0 && port < 65536) {
-    return { kind: "fake", host: "127.0.0.1", port, dir: path.resolve(env.TRIMRAIL_MAIL_DIR?.trim() || DEFAULT_MAIL_DIR) };
+    // A folder chosen at run time, outside the build: tell Turbopack not to trace it.
+    const dir = path.resolve(/*turbopackIgnore: true*/ env.TRIMRAIL_MAIL_DIR?.trim() || DEFAULT_MAIL_DIR);
+    return { kind: "fake", host: "127.0.0.1", port, dir };
   }
   return { kind: "none" };
 }
