@@ -48,22 +48,28 @@ export async function deliverDueMail({
     const now = clock();
     const rows = await claimDueMail({ now, leaseUntil: new Date(now.getTime() + MAIL_CLAIM_LEASE_MS), limit: BATCH_SIZE, db });
     for (const row of rows) {
+      let failure: string | null = null;
       try {
         await send({ to: row.toAddress, subject: row.subject, text: row.textBody, html: row.htmlBody });
+      } catch (error) {
+        failure = describeError(error);
+      }
+      // Settled outside the try: a database error after a good send must not count as a failed
+      // send (the row would be sent again); it ends the run and the lease brings the row back.
+      if (failure === null) {
         await markMailSent({ id: row.id, attempts: row.attempts, sentAt: clock(), db });
         tally.sent += 1;
-      } catch (error) {
-        const message = describeError(error);
-        const giveUp = row.attempts >= MAIL_MAX_ATTEMPTS;
-        const retryAt = giveUp ? null : new Date(clock().getTime() + retryDelayMs(row.attempts));
-        await markMailAttemptFailed({ id: row.id, attempts: row.attempts, error: message, retryAt, db });
-        if (giveUp) {
-          tally.failed += 1;
-          console.error(`[mail] gave up on ${row.kind} ${row.id} to ${row.toAddress} after ${row.attempts} attempts: ${message}`);
-        } else {
-          tally.retrying += 1;
-          console.warn(`[mail] ${row.kind} ${row.id} to ${row.toAddress} failed (attempt ${row.attempts} of ${MAIL_MAX_ATTEMPTS}), next try ${retryAt?.toISOString()}: ${message}`);
-        }
+        continue;
+      }
+      const giveUp = row.attempts >= MAIL_MAX_ATTEMPTS;
+      const retryAt = giveUp ? null : new Date(clock().getTime() + retryDelayMs(row.attempts));
+      await markMailAttemptFailed({ id: row.id, attempts: row.attempts, error: failure, retryAt, db });
+      if (giveUp) {
+        tally.failed += 1;
+        console.error(`[mail] gave up on ${row.kind} ${row.id} to ${row.toAddress} after ${row.attempts} attempts: ${failure}`);
+      } else {
+        tally.retrying += 1;
+        console.warn(`[mail] ${row.kind} ${row.id} to ${row.toAddress} failed (attempt ${row.attempts} of ${MAIL_MAX_ATTEMPTS}), next try ${retryAt?.toISOString()}: ${failure}`);
       }
     }
     if (rows.length < BATCH_SIZE) break;
