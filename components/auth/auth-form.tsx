@@ -5,10 +5,11 @@ import { useState } from "react";
 import { useForm } from "react-hook-form";
 import { z } from "zod";
 import { authClient } from "@/lib/auth/client";
+import { PASSWORD_MIN_LENGTH } from "@/lib/auth/password-rule";
 
 const signInSchema = z.object({
   email: z.email("Enter an e-mail address."),
-  password: z.string().min(8, "At least 8 characters."),
+  password: z.string().min(PASSWORD_MIN_LENGTH, `At least ${PASSWORD_MIN_LENGTH} characters.`),
 });
 const signUpSchema = signInSchema.extend({
   name: z.string().trim().min(1, "Enter your name.").max(80, "At most 80 characters."),
@@ -39,7 +40,7 @@ export function AuthForm({ mode, next }: AuthFormProps) {
     setServerError(null);
     const { error } =
       mode === "sign-up"
-        ? await authClient.signUp.email({ name: values.name, email: values.email, password: values.password })
+        ? await authClient.signUp.email({ name: values.name, email: values.email, password: values.password, callbackURL: "/setups" })
         : await authClient.signIn.email({ email: values.email, password: values.password });
     if (error) {
       setServerError(

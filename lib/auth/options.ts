@@ -1,4 +1,5 @@
 import type { BetterAuthOptions } from "better-auth";
+import { PASSWORD_MAX_LENGTH, PASSWORD_MIN_LENGTH } from "./password-rule";
 
 // Sign-in attempts allowed per client address in one window (better-auth counts by IP).
 export const SIGN_IN_WINDOW_S = 60;
@@ -6,7 +7,7 @@ export const SIGN_IN_MAX_ATTEMPTS = Number(process.env.TRIMRAIL_SIGN_IN_MAX ?? 1
 
 export const authOptionsBase = {
   appName: "Trimrail",
-  emailAndPassword: { enabled: true, minPasswordLength: 8, autoSignIn: true },
+  emailAndPassword: { enabled: true, minPasswordLength: PASSWORD_MIN_LENGTH, maxPasswordLength: PASSWORD_MAX_LENGTH, autoSignIn: true },
   user: {
     additionalFields: {
       // Role and units are ours: never taken from a sign-up body; roles change only by the maker.

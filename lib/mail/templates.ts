@@ -18,7 +18,8 @@ const SIGN_OFF = "Trimrail — planning estimates only; follow local aviation ru
 function render(subject: string, { heading, paragraphs, quote, link }: { heading: string; paragraphs: string[]; quote?: string; link?: { label: string; url: string } }): MailContent {
   const text = [heading, "", ...paragraphs.flatMap((p) => [p, ""]), ...(quote ? [quote.split("\n").map((l) => `> ${l}`).join("\n"), ""] : []), ...(link ? [`${link.label}: ${link.url}`, ""] : []), "--", SIGN_OFF].join("\n");
   const html = [
-    `<!doctype html><html lang="en"><body style="font-family:system-ui,sans-serif;color:#14202e;background:#f5f3ee;padding:16px">`,
+    `<!doctype html><html lang="en"><head><meta charset="utf-8"><title>${escapeHtml(subject)}</title></head>`,
+    `<body style="font-family:system-ui,sans-serif;color:#14202e;background:#f5f3ee;padding:16px">`,
     `<div style="max-width:560px;margin:auto;background:#fff;border:1px solid #d9d6cf;padding:20px">`,
     `<h1 style="font-size:18px;margin:0 0 12px">${escapeHtml(heading)}</h1>`,
     ...paragraphs.map((p) => `<p style="margin:0 0 12px;line-height:1.5">${escapeHtml(p)}</p>`),

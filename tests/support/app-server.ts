@@ -7,10 +7,13 @@ import path from "node:path";
 import { openDatabase } from "../../db/index";
 import { migrateDatabase } from "../../db/migrate";
 import { seedDemo } from "../../db/seed";
+import { startSmtpFake } from "../../scripts/smtp-fake";
 
 export interface AppServer {
   baseURL: string;
   databaseUrl: string;
+  /** Where the app's own SMTP fake keeps every message it sends, as .eml files. */
+  mailDir: string;
   stop: () => Promise<void>;
 }
 
@@ -53,10 +56,17 @@ export async function startAppServer({ build }: { build: boolean }): Promise<App
   await seedDemo(db);
   client.close();
 
+  // The app's mail goes to a fake of its own on loopback, never to a server in SMTP_URL.
+  const mail = await startSmtpFake({ dir: path.join(dir, "mail") });
+  const inherited = { ...process.env };
+  delete inherited.SMTP_URL;
+
   const port = await freePort();
   const baseURL = `http://127.0.0.1:${port}`;
   const env = {
-    ...process.env,
+    ...inherited,
+    TRIMRAIL_SMTP_FAKE_PORT: String(mail.port),
+    TRIMRAIL_MAIL_DIR: mail.dir,
     NODE_ENV: "production" as const,
     DATABASE_URL: databaseUrl,
     BETTER_AUTH_SECRET: randomBytes(32).toString("base64url"),
@@ -79,6 +89,7 @@ export async function startAppServer({ build }: { build: boolean }): Promise<App
   return {
     baseURL,
     databaseUrl,
+    mailDir: mail.dir,
     stop: async () => {
       if (server.pid) {
         try {
@@ -87,6 +98,7 @@ export async function startAppServer({ build }: { build: boolean }): Promise<App
           // already gone
         }
       }
+      await mail.stop();
       rmSync(dir, { recursive: true, force: true });
     },
   };

@@ -6,5 +6,6 @@ export default async function setup(project: TestProject): Promise<() => Promise
   const app = await startAppServer({ build: process.env.TRIMRAIL_REUSE_BUILD !== "1" });
   project.provide("baseURL", app.baseURL);
   project.provide("databaseUrl", app.databaseUrl);
+  project.provide("mailDir", app.mailDir);
   return app.stop;
 }

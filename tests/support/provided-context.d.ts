@@ -4,5 +4,6 @@ declare module "vitest" {
   export interface ProvidedContext {
     baseURL: string;
     databaseUrl: string;
+    mailDir: string;
   }
 }

@@ -1,0 +1,77 @@
+import type { Browser } from "playwright-core";
+import { afterAll, beforeAll, describe, expect, inject, it } from "vitest";
+import { CapturedMailPage, ForgotPasswordPage, ResetPasswordPage } from "../support/auth-pages";
+import { SignInPage, launchBrowser, newPersonContext, screenshot } from "../support/browser";
+import { ApiClient } from "../support/http";
+import { linkIn, waitForMail } from "../support/mail";
+
+const baseURL = inject("baseURL");
+const mailDir = inject("mailDir");
+let browser: Browser;
+
+beforeAll(async () => {
+  browser = await launchBrowser();
+});
+afterAll(async () => {
+  await browser?.close();
+});
+
+describe("forgotten password in Chromium", () => {
+  it("asks for a link from the sign-in page, follows the captured mail, sets a new password and signs in with it", async () => {
+    // A fresh account, so no other test's password changes.
+    const email = `forgot-${Date.now()}@trimrail.test`;
+    expect((await new ApiClient(baseURL).request("POST", "/api/auth/sign-up/email", { name: "Ilse Varrow", email, password: "the-first-password" })).status).toBe(200);
+
+    const context = await newPersonContext(browser, baseURL);
+    const page = await context.newPage();
+    await new SignInPage(page).open();
+    await page.getByRole("link", { name: "Forgot your password?" }).click();
+    await page.waitForURL(/\/forgot-password$/);
+    expect(await new ForgotPasswordPage(page).ask(email)).toContain(email);
+    await screenshot(page, "mail-forgot-password-sent");
+
+    const mail = await waitForMail({ dir: mailDir, to: email, subject: /Reset your Trimrail password/ });
+    const link = linkIn(mail.text, "/api/auth/reset-password/");
+    await page.goto(link.href);
+    await page.waitForURL(/\/reset-password\?token=/);
+    await screenshot(page, "mail-reset-password-form");
+
+    const reset = new ResetPasswordPage(page);
+    await reset.setPassword("the-second-password", "not-the-same-one");
+    await expect(page.getByText("The two passwords differ.").isVisible()).resolves.toBe(true);
+    await reset.setPassword("the-second-password");
+    await page.getByTestId("reset-password-done").waitFor();
+    await page.getByRole("link", { name: "Sign in with it" }).click();
+    await page.waitForURL(/\/sign-in$/);
+    await new SignInPage(page).signIn(email, "the-second-password");
+    await page.waitForURL(/\/setups$/);
+
+    // The link is spent: opening it again offers a new one.
+    await page.goto(link.href);
+    await page.getByTestId("reset-password-expired").waitFor();
+    await context.close();
+  });
+
+  it("shows the maker the captured message on /dev/mail, its HTML in a sandboxed frame", async () => {
+    const email = `seen-${Date.now()}@trimrail.test`;
+    expect((await new ApiClient(baseURL).request("POST", "/api/auth/sign-up/email", { name: "Bram Osterlund", email, password: "a-long-password" })).status).toBe(200);
+    await waitForMail({ dir: mailDir, to: email, subject: /Confirm your e-mail address/ });
+
+    const context = await newPersonContext(browser, baseURL);
+    const page = await context.newPage();
+    await new SignInPage(page).open("/dev/mail");
+    await new SignInPage(page).signIn("maker@trimrail.test", "trimrail-demo");
+    await page.waitForURL(/\/dev\/mail$/);
+    const captured = new CapturedMailPage(page);
+    await captured.open();
+    await screenshot(page, "mail-dev-mail-list");
+    await captured.openMessage("Confirm your e-mail address for Trimrail", email);
+    expect(await page.getByTestId("captured-mail-to").innerText()).toContain(email);
+    expect(await page.getByTestId("captured-mail-text").getByRole("link").first().getAttribute("href")).toContain("/api/auth/verify-email?token=");
+    expect(await page.getByTestId("captured-mail-html").getAttribute("sandbox")).toBe("");
+    const frame = page.frameLocator('[data-testid="captured-mail-html"]');
+    await expect(frame.getByRole("heading", { name: "Hello Bram Osterlund" }).isVisible()).resolves.toBe(true);
+    await screenshot(page, "mail-dev-mail-message");
+    await context.close();
+  });
+});
