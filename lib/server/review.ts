@@ -4,6 +4,7 @@ import * as reviewDb from "@/db/queries/review";
 import type { Viewer } from "@/lib/auth/access";
 import type { DecisionOutcome, ReviewReasonCode } from "@/lib/domain";
 import { fail, ok, type Result } from "@/lib/errors";
+import { kickMailDelivery } from "@/lib/mail/deliver";
 import { commentAddedMail, decisionMail } from "@/lib/mail/templates";
 import { appUrl } from "./app-url";
 
@@ -71,6 +72,7 @@ export async function decideOnSetup({
   if (outcome.kind === "stale") {
     return fail("conflict", `The customer saved this setup since you opened it (now version ${outcome.currentVersion}); reload it and review what changed.`);
   }
+  kickMailDelivery();
   return ok({ id, status: outcome.status, version });
 }
 
@@ -94,6 +96,7 @@ export async function addComment({ viewer, id, body }: { viewer: Viewer; id: str
         content: commentAddedMail({ setupName: header.data.name, authorName: viewer.name, body, url: appUrl(setupPathFor(r.id, header.data)) }),
       })),
   });
+  kickMailDelivery();
   return ok({ id: commentId });
 }
 

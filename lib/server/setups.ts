@@ -7,6 +7,7 @@ import { REVIEWER_ROLES, type FlagLevel, type Role, type SetupStatus } from "@/l
 
 const isReviewer = (role: Role) => REVIEWER_ROLES.includes(role);
 import { fail, ok, type AppError, type Result } from "@/lib/errors";
+import { kickMailDelivery } from "@/lib/mail/deliver";
 import { setupSubmittedMail } from "@/lib/mail/templates";
 import { appUrl } from "./app-url";
 import { defaultDraft } from "@/lib/setups/default-draft";
@@ -161,6 +162,7 @@ export async function submitSetup({
   if (outcome.kind === "not_found") return notYours(viewer, id);
   if (outcome.kind === "conflict") return conflict(outcome.currentVersion, "reload before submitting.");
   if (outcome.kind === "wrong_status") return fail("conflict", outcome.message);
+  kickMailDelivery();
   return ok({ id, version: outcome.version, status: "submitted" });
 }
 
