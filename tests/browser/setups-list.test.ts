@@ -22,9 +22,11 @@ describe("the Setups list in Chromium", () => {
     await signIn.signIn("mirela@trimrail.test", DEMO_PASSWORD);
     await page.waitForURL(/\/setups$/);
     const rows = page.getByTestId("setup-row");
-    const names = await rows.locator("td:first-child").allInnerTexts();
+    const names = await rows.locator("td:first-child a").allInnerTexts();
     expect(names).toContain("Profile logger");
     expect(names).not.toContain("Valley relay"); // Tobin's
+    // support commented on the logger when they sent it back: unread until Mirela opens it
+    await expect(rows.filter({ hasText: "Logger and tracker" }).getByTestId("unread-comments").innerText()).resolves.toBe("1 new comment");
     const before = await rows.count();
 
     await page.getByTestId("new-setup-form").locator("select").selectOption({ label: "Ridge 0.6 (0.60 m³)" });
