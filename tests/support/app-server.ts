@@ -48,12 +48,13 @@ async function waitForServer(url: string, child: ChildProcess, timeoutMs: number
  * A private copy of the app: a fresh SQLite file with migrations and demo data, a production build
  * (`next build` unless `build` is false) and `next start` on a free port of the loopback address.
  */
-export async function startAppServer({ build }: { build: boolean }): Promise<AppServer> {
+export async function startAppServer({ build, databaseUrl: existingDatabaseUrl }: { build: boolean; databaseUrl?: string }): Promise<AppServer> {
   const dir = mkdtempSync(path.join(os.tmpdir(), "trimrail-app-"));
-  const databaseUrl = `file:${path.join(dir, "app.db")}`;
+  // A benchmark brings its own (large) database; the tests get a fresh one with the demo.
+  const databaseUrl = existingDatabaseUrl ?? `file:${path.join(dir, "app.db")}`;
   const { db, client } = openDatabase(databaseUrl);
   await migrateDatabase(db);
-  await seedDemo(db);
+  if (!existingDatabaseUrl) await seedDemo(db);
   client.close();
 
   // The app's mail goes to a fake of its own on loopback, never to a server in SMTP_URL.
