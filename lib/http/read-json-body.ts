@@ -1,33 +1,39 @@
-import type { z } from "zod";
-import { fail, issuesFromZod, ok, type Result } from "@/lib/errors";
+import { fail, ok, type Result } from "@/lib/errors";
 
 export const MAX_JSON_BODY_BYTES = 256 * 1024;
 
+const isJson = (contentType: string | null) => contentType !== null && /^application\/(?:[\w.+-]+\+)?json\s*(?:;|$)/i.test(contentType.trim());
+
 /**
- * Reads a JSON body with a size cap, so a huge or malformed body is a 413/400 with a message and
- * never reaches a schema or the database.
+ * Reads a JSON body with a size cap that holds while it streams: at the cap it stops reading and
+ * answers 413, so a huge or endless body never sits in memory. Anything but JSON is a 415; empty or
+ * malformed JSON a 400. Nothing of a refused body reaches a schema or the database.
  */
 export async function readJsonBody(request: Request, maxBytes = MAX_JSON_BODY_BYTES): Promise<Result<unknown>> {
+  if (!isJson(request.headers.get("content-type"))) return fail("unsupported_media_type", "Send the body as JSON, with Content-Type: application/json.");
+  const tooLarge = () => fail("payload_too_large", `The body is larger than ${maxBytes} bytes.`);
   const declared = Number(request.headers.get("content-length") ?? "0");
-  if (declared > maxBytes) return fail("payload_too_large", `The body is larger than ${maxBytes} bytes.`);
-  const text = await request.text();
-  if (Buffer.byteLength(text, "utf8") > maxBytes) return fail("payload_too_large", `The body is larger than ${maxBytes} bytes.`);
+  if (declared > maxBytes) return tooLarge();
+  if (!request.body) return fail("bad_request", "The body is empty; send JSON.");
+
+  const reader = request.body.getReader();
+  const chunks: Uint8Array[] = [];
+  let size = 0;
+  for (;;) {
+    const { done, value } = await reader.read();
+    if (done) break;
+    size += value.byteLength;
+    if (size > maxBytes) {
+      await reader.cancel().catch(() => undefined);
+      return tooLarge();
+    }
+    chunks.push(value);
+  }
+  const text = Buffer.concat(chunks).toString("utf8");
   if (text.trim() === "") return fail("bad_request", "The body is empty; send JSON.");
   try {
     return ok(JSON.parse(text) as unknown);
   } catch {
     return fail("bad_request", "The body is not valid JSON.");
   }
-}
-
-/** Reads a JSON body and validates it; bad JSON, a huge body or a schema failure is a typed 4xx. */
-export async function readValidBody<T>(
-  request: Request,
-  schema: { safeParse: (data: unknown) => { success: true; data: T } | { success: false; error: z.ZodError } },
-  message: string,
-): Promise<Result<T>> {
-  const body = await readJsonBody(request);
-  if (!body.ok) return body;
-  const parsed = schema.safeParse(body.data);
-  return parsed.success ? ok(parsed.data) : fail("bad_request", message, issuesFromZod(parsed.error));
 }

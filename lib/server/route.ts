@@ -6,6 +6,7 @@ import { errorResponse, issuesFromZod, type AppError, type Result } from "@/lib/
 import { readJsonBody } from "@/lib/http/read-json-body";
 import { authorise } from "./authorise";
 import { internalError } from "./internal-error";
+import { crossSiteRefusal } from "./same-origin";
 import { getViewer } from "./viewer";
 
 type Schema<T> = z.ZodType<T>;
@@ -87,8 +88,8 @@ async function parseRequest<P, Q, B>(spec: RouteSpec<P, Q, B>, request: Request,
 }
 
 /**
- * The one way to write a route handler: parse (zod) → session → role → the core function →
- * its Result as JSON. Anything thrown is logged with a request id and answered as `internal`
+ * The one way to write a route handler: refuse cross-site writes → parse (zod) → session → role →
+ * the core function → its Result as JSON. Anything thrown is logged with a request id and answered as `internal`
  * (500) carrying that id, never as a raw database error.
  */
 export function route<T, P = undefined, Q = undefined, B = undefined>(
@@ -97,6 +98,8 @@ export function route<T, P = undefined, Q = undefined, B = undefined>(
 ): (request: Request, context: NextRouteContext) => Promise<Response> {
   return async (request, context) => {
     try {
+      const crossSite = crossSiteRefusal(request);
+      if (crossSite) return errorResponse(crossSite);
       const input = await parseRequest(spec, request, context);
       if (!input.ok) return errorResponse(input.error);
       const viewer = authorise(await getViewer(), spec.roles);

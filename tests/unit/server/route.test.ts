@@ -113,4 +113,43 @@ describe("route", () => {
     expect((await POST(post("{not json"), context())).status).toBe(400);
     expect((await POST(post(JSON.stringify({ count: 1, pad: "x".repeat(300 * 1024) })), context())).status).toBe(413);
   });
+
+  it("returns 415 for a body that is not declared as JSON, and writes nothing", async () => {
+    session.viewer = CUSTOMER;
+    handler.mockClear();
+    expect((await POST(post(JSON.stringify({ count: 1 }), "text/plain"), context())).status).toBe(415);
+    expect((await POST(post(JSON.stringify({ count: 1 }), "application/x-www-form-urlencoded"), context())).status).toBe(415);
+    expect((await POST(post(JSON.stringify({ count: 1 }), "application/json; charset=utf-8"), context())).status).toBe(201);
+    expect(handler).toHaveBeenCalledTimes(1);
+  });
+
+  it("returns 403 for a write sent from another site, by Origin or by Sec-Fetch-Site", async () => {
+    session.viewer = CUSTOMER;
+    handler.mockClear();
+    const from = (headers: Record<string, string>) =>
+      new Request("http://app.test/api/things", { method: "POST", body: JSON.stringify({ count: 1 }), headers: { "content-type": "application/json", ...headers } });
+    expect((await POST(from({ origin: "http://evil.example" }), context())).status).toBe(403);
+    expect((await POST(from({ "sec-fetch-site": "cross-site" }), context())).status).toBe(403);
+    expect((await POST(from({ "sec-fetch-site": "same-site" }), context())).status).toBe(403);
+    expect(handler).not.toHaveBeenCalled();
+    expect((await POST(from({ origin: "http://app.test" }), context())).status).toBe(201);
+    expect((await POST(from({ "sec-fetch-site": "same-origin" }), context())).status).toBe(201);
+  });
+
+  it("returns 413 at the cap while a body without a length streams, without reading the rest", async () => {
+    session.viewer = CUSTOMER;
+    let pulled = 0;
+    const chunk = new Uint8Array(64 * 1024).fill(32);
+    const endless = new ReadableStream<Uint8Array>({
+      pull(controller) {
+        pulled += 1;
+        controller.enqueue(chunk);
+      },
+    });
+    const request = new Request("http://app.test/api/things", { method: "POST", body: endless, headers: { "content-type": "application/json" }, duplex: "half" } as RequestInit);
+    const response = await POST(request, context());
+    expect(response.status).toBe(413);
+    // 256 KiB cap / 64 KiB chunks: it stopped after a handful, not after the stream's (unbounded) end
+    expect(pulled).toBeLessThan(10);
+  });
 });
