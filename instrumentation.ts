@@ -1,7 +1,15 @@
-// Next calls register() once when a server process starts. The mail outbox's delivery loop runs
-// there, in the Node.js runtime only: the edge runtime has no sockets for SMTP nor the database.
+// Next calls register() once when a server process starts, in the Node.js runtime only (the edge
+// runtime has no database or sockets). The server refuses to start on a database it cannot use,
+// with one line saying why, rather than answering every request with a 500; then the mail
+// outbox's delivery loop starts.
 export async function register(): Promise<void> {
-  if (process.env.NEXT_RUNTIME !== "nodejs") return;
+  if (process.env.NEXT_RUNTIME !== "nodejs" || process.env.NEXT_PHASE === "phase-production-build") return;
+  const { checkDatabaseHealth } = await import("./db/health");
+  const health = await checkDatabaseHealth();
+  if (health.state !== "ready") {
+    console.error(`[trimrail] not starting: ${health.message}`);
+    process.exit(1);
+  }
   const { startMailDelivery } = await import("./lib/mail/deliver");
   startMailDelivery();
 }

@@ -29,6 +29,8 @@ export interface AppError {
   issues?: FieldIssue[];
   /** Set on `internal` errors: the id under which the server logged what went wrong. */
   requestId?: string;
+  /** Machine-readable facts about the failure (e.g. the database's state on a 503). */
+  detail?: Record<string, unknown>;
 }
 
 export type Result<T> = { ok: true; data: T } | { ok: false; error: AppError };

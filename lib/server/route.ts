@@ -14,6 +14,8 @@ type Schema<T> = z.ZodType<T>;
 export interface RouteSpec<P, Q, B> {
   /** Who may call it; absent = any signed-in person. */
   roles?: readonly Role[];
+  /** "public": no session needed (the handler gets a null viewer). Only for reads that reveal nothing. */
+  access?: "signed-in" | "public";
   /** Path segments. A segment that does not parse is a 404: no such thing lives at that address. */
   params?: Schema<P>;
   /** Query string, as an object of its first values. */
@@ -50,8 +52,8 @@ function fileResponse(file: FileBody): Response {
   });
 }
 
-export interface RouteArgs<P, Q, B> {
-  viewer: Viewer;
+export interface RouteArgs<P, Q, B, V = Viewer> {
+  viewer: V;
   params: P;
   query: Q;
   body: B;
@@ -102,9 +104,13 @@ export function route<T, P = undefined, Q = undefined, B = undefined>(
       if (crossSite) return errorResponse(crossSite);
       const input = await parseRequest(spec, request, context);
       if (!input.ok) return errorResponse(input.error);
-      const viewer = authorise(await getViewer(), spec.roles);
-      if (!viewer.ok) return errorResponse(viewer.error);
-      const result = await handler({ viewer: viewer.data, request, ...input.data });
+      let viewer: Viewer | null = null;
+      if (spec.access !== "public") {
+        const allowed = authorise(await getViewer(), spec.roles);
+        if (!allowed.ok) return errorResponse(allowed.error);
+        viewer = allowed.data;
+      }
+      const result = await handler({ viewer: viewer as Viewer, request, ...input.data });
       if (!result.ok) return errorResponse(result.error);
       if (spec.status === 204) return new Response(null, { status: 204 });
       if (spec.respond === "file") return fileResponse(result.data as FileBody);
