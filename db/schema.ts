@@ -7,6 +7,7 @@ import { check, index, integer, primaryKey, real, sqliteTable, text, uniqueIndex
 import {
   ATTACHMENTS,
   DECISION_OUTCOMES,
+  FLAG_CODES,
   FLAG_LEVELS,
   PAYLOAD_CATEGORIES,
   PAYLOAD_SHAPES,
@@ -253,8 +254,6 @@ export const setups = sqliteTable(
     status: text("status", { enum: SETUP_STATUSES }).notNull().default("draft"),
     // Optimistic concurrency: every write must name the version it read, and bumps it.
     version: integer("version").notNull().default(1),
-    // The server's own evaluation of the stored input (a BalanceResult), never the client's.
-    resultJson: text("result_json", { mode: "json" }).$type<BalanceResult>(),
     worstFlag: text("worst_flag", { enum: FLAG_LEVELS }),
     // Copied from the stored result on every write so lists sort and filter without reading JSON.
     payloadMassKg: real("payload_mass_kg").notNull().default(0),
@@ -265,10 +264,46 @@ export const setups = sqliteTable(
     updatedAt: updatedAt(),
   },
   (t) => [
-    index("setups_owner_updated_idx").on(t.ownerId, t.updatedAt),
-    index("setups_status_submitted_idx").on(t.status, t.submittedAt),
+    // One index per list order, with the id that breaks ties, so no list sorts in memory.
+    index("setups_owner_updated_idx").on(t.ownerId, t.updatedAt, t.id),
+    index("setups_status_submitted_idx").on(t.status, t.submittedAt, t.id),
+    index("setups_status_free_lift_idx").on(t.status, t.freeLiftRatio, t.id),
+    index("setups_status_payload_mass_idx").on(t.status, t.payloadMassKg, t.id),
+    index("setups_status_worst_idx").on(t.status, t.worstFlag, t.submittedAt, t.id),
+    index("setups_status_model_idx").on(t.status, t.modelId, t.submittedAt, t.id),
+    index("setups_submitted_idx").on(t.submittedAt, t.id),
+    index("setups_created_idx").on(t.createdAt, t.modelId, t.status),
     check("setups_status_check", inList("status", SETUP_STATUSES)),
     check("setups_worst_flag_check", sql`worst_flag is null or ${inList("worst_flag", FLAG_LEVELS)}`),
+  ],
+);
+
+/**
+ * The server's own evaluation of a setup's stored input (never the client's), kept apart from the
+ * setup row: lists and counts scan setups, and an 8 KB result in each row would make every scan read it.
+ */
+export const setupResults = sqliteTable("setup_results", {
+  setupId: text("setup_id")
+    .primaryKey()
+    .references(() => setups.id, { onDelete: "cascade" }),
+  resultJson: text("result_json", { mode: "json" }).$type<BalanceResult>().notNull(),
+});
+
+/** Each distinct flag (code and level) a setup's stored result raised: Insight counts these in SQL. */
+export const setupFlags = sqliteTable(
+  "setup_flags",
+  {
+    setupId: text("setup_id")
+      .notNull()
+      .references(() => setups.id, { onDelete: "cascade" }),
+    code: text("code", { enum: FLAG_CODES }).notNull(),
+    level: text("level", { enum: FLAG_LEVELS }).notNull(),
+  },
+  (t) => [
+    primaryKey({ columns: [t.setupId, t.code, t.level] }),
+    index("setup_flags_code_idx").on(t.code, t.level, t.setupId),
+    check("setup_flags_code_check", inList("code", FLAG_CODES)),
+    check("setup_flags_level_check", inList("level", FLAG_LEVELS)),
   ],
 );
 
@@ -287,6 +322,7 @@ export const setupPayloads = sqliteTable(
   },
   (t) => [
     uniqueIndex("setup_payloads_order_idx").on(t.setupId, t.sortOrder),
+    index("setup_payloads_template_idx").on(t.templateId),
     check("setup_payloads_category_check", inList("category", PAYLOAD_CATEGORIES)),
     check("setup_payloads_shape_check", inList("shape", PAYLOAD_SHAPES)),
     check("setup_payloads_attachment_check", inList("attachment", ATTACHMENTS)),
@@ -413,6 +449,7 @@ export type AdapterRow = typeof adapters.$inferSelect;
 export type PayloadTemplateRow = typeof payloadTemplates.$inferSelect;
 export type SetupRow = typeof setups.$inferSelect;
 export type SetupPayloadRow = typeof setupPayloads.$inferSelect;
+export type SetupResultRow = typeof setupResults.$inferSelect;
 export type CommentRow = typeof comments.$inferSelect;
 export type DecisionRow = typeof decisions.$inferSelect;
 export type AttachmentRow = typeof attachments.$inferSelect;

@@ -7,7 +7,7 @@ import type { Database } from "./index";
 import * as t from "./schema";
 import { demoModelRow } from "./seed";
 import { DEMO_ADAPTERS, DEMO_MODELS, DEMO_MOUNTS, DEMO_TEMPLATES } from "./seed-data";
-import { columnsFromDraft, payloadRowsFromDraft, summaryColumns } from "./setup-columns";
+import { columnsFromDraft, payloadRowsFromDraft, resultRows, summaryColumns } from "./setup-columns";
 
 // A database at scale for benchmarks: many invented customers and their setups in every status,
 // each with the server's own evaluation stored, written through the app's own column mapping.
@@ -60,6 +60,8 @@ export async function seedLarge(db: Database, { setups, customers, onProgress }:
     const size = Math.min(1000, setups - start);
     const setupRows: (typeof t.setups.$inferInsert)[] = [];
     const payloadRows: (typeof t.setupPayloads.$inferInsert)[] = [];
+    const storedResults: (typeof t.setupResults.$inferInsert)[] = [];
+    const flagRows: (typeof t.setupFlags.$inferInsert)[] = [];
     for (let i = 0; i < size; i += 1) {
       const n = start + i;
       const model = pick(models);
@@ -89,7 +91,6 @@ export async function seedLarge(db: Database, { setups, customers, onProgress }:
         ...summaryColumns(draft, result),
         status,
         version: 1 + Math.floor(rand() * 4),
-        resultJson: result,
         worstFlag: worstLevel(result.flags),
         cautionsAcknowledged: status !== "draft",
         submittedAt: status === "draft" ? null : new Date(updatedAt.getTime() - DAY_MS),
@@ -97,10 +98,15 @@ export async function seedLarge(db: Database, { setups, customers, onProgress }:
         updatedAt,
       });
       payloadRows.push(...payloadRowsFromDraft(id, draft, (k) => `${id}-p${k}`));
+      const stored = resultRows(id, result);
+      storedResults.push(stored.result);
+      flagRows.push(...stored.flags);
     }
     await db.transaction(async (tx) => {
       await tx.insert(t.setups).values(setupRows).onConflictDoNothing();
       if (payloadRows.length) await tx.insert(t.setupPayloads).values(payloadRows).onConflictDoNothing();
+      await tx.insert(t.setupResults).values(storedResults).onConflictDoNothing();
+      for (let k = 0; k < flagRows.length; k += 2000) await tx.insert(t.setupFlags).values(flagRows.slice(k, k + 2000)).onConflictDoNothing();
     });
     onProgress?.(start + size);
   }

@@ -3,7 +3,7 @@ import { eq } from "drizzle-orm";
 import { deriveEnvelopeGeometry, demoHulls, evaluateBalance, worstLevel, type DemoHullName } from "@/lib/balance";
 import { toBalanceInput, type SetupCatalogue } from "@/lib/setups/balance-input";
 import type { SetupDraft } from "@/lib/setups/setup-draft";
-import { columnsFromDraft, payloadRowsFromDraft, summaryColumns } from "./setup-columns";
+import { columnsFromDraft, payloadRowsFromDraft, resultRows, summaryColumns } from "./setup-columns";
 import type { Database } from "./index";
 import * as t from "./schema";
 import {
@@ -136,7 +136,6 @@ export async function seedDemo(db: Database): Promise<SeedCounts> {
           ...columnsFromDraft(draft),
           ...summaryColumns(draft, result),
           status: s.status,
-          resultJson: result,
           worstFlag: worstLevel(result.flags),
           cautionsAcknowledged: s.status !== "draft",
           submittedAt: s.status === "draft" ? null : new Date(at.getTime() - DAY_MS / 2),
@@ -146,6 +145,9 @@ export async function seedDemo(db: Database): Promise<SeedCounts> {
         .onConflictDoNothing()
         .returning({ id: t.setups.id });
       if (inserted.length === 0) return;
+      const stored = resultRows(s.id, result);
+      await tx.insert(t.setupResults).values(stored.result);
+      if (stored.flags.length) await tx.insert(t.setupFlags).values(stored.flags);
       if (draft.payloads.length) await tx.insert(t.setupPayloads).values(payloadRowsFromDraft(s.id, draft, (i) => `${s.id}-p${i}`));
     });
   }

@@ -1,5 +1,6 @@
 import type { SetupDraft } from "../lib/setups/setup-draft";
-import type { setupPayloads, setups } from "./schema";
+import type { BalanceResult } from "../lib/balance";
+import type { setupFlags, setupPayloads, setupResults, setups } from "./schema";
 
 // The one mapping between a setup's editable draft and its rows, used by the app's writes and by
 // the seed alike, so demo rows are exactly what the app itself would store.
@@ -81,5 +82,14 @@ export function draftFromRows(row: SetupRow, payloadRows: readonly SetupPayloadR
         offsetXM: p.offsetXM,
         offsetZM: p.offsetZM,
       })),
+  };
+}
+
+/** The stored result of a setup and the distinct flags it raised, as rows. */
+export function resultRows(setupId: string, result: BalanceResult) {
+  const distinct = new Map(result.flags.map((f) => [`${f.code}:${f.level}`, { setupId, code: f.code, level: f.level }]));
+  return {
+    result: { setupId, resultJson: result } satisfies typeof setupResults.$inferInsert,
+    flags: [...distinct.values()] satisfies (typeof setupFlags.$inferInsert)[],
   };
 }

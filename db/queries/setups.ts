@@ -2,8 +2,8 @@ import "server-only";
 import { and, desc, eq, inArray } from "drizzle-orm";
 import { randomUUID } from "node:crypto";
 import { getDb, type Database } from "@/db";
-import { envelopeModels, setupPayloads, setups, user, type SetupRow } from "@/db/schema";
-import { columnsFromDraft, draftFromRows, payloadRowsFromDraft, summaryColumns } from "@/db/setup-columns";
+import { envelopeModels, setupFlags, setupPayloads, setupResults, setups, user, type SetupRow } from "@/db/schema";
+import { columnsFromDraft, draftFromRows, payloadRowsFromDraft, resultRows, summaryColumns } from "@/db/setup-columns";
 import type { BalanceResult } from "@/lib/balance";
 import { nextStatus, type FlagLevel, type Role, type SetupStatus } from "@/lib/domain";
 import { recordAudit } from "./audit";
@@ -55,16 +55,18 @@ export async function listReviewQueue({ statuses = ["submitted"] }: { statuses?:
 export interface StoredSetup {
   row: SetupRow;
   draft: SetupDraft;
+  /** The server's stored evaluation; null only for a setup written before results were kept. */
+  result: BalanceResult | null;
 }
 
 /** A setup with its payloads, or null: only its owner's when `ownerId` is given, any when it is null (staff). */
 export async function getSetupById({ id, ownerId }: { id: string; ownerId: string | null }): Promise<StoredSetup | null> {
   const db = getDb();
   const where = ownerId === null ? eq(setups.id, id) : and(eq(setups.id, id), eq(setups.ownerId, ownerId));
-  const [row] = await db.select().from(setups).where(where);
-  if (!row) return null;
+  const [found] = await db.select({ row: setups, result: setupResults.resultJson }).from(setups).leftJoin(setupResults, eq(setupResults.setupId, setups.id)).where(where);
+  if (!found) return null;
   const payloadRows = await db.select().from(setupPayloads).where(eq(setupPayloads.setupId, id));
-  return { row, draft: draftFromRows(row, payloadRows) };
+  return { row: found.row, draft: draftFromRows(found.row, payloadRows), result: found.result ?? null };
 }
 
 export async function ownsSetup({ id, ownerId }: { id: string; ownerId: string }): Promise<boolean> {
@@ -77,6 +79,14 @@ export async function ownsSetup({ id, ownerId }: { id: string; ownerId: string }
 export interface Evaluated {
   result: BalanceResult;
   worstFlag: FlagLevel;
+}
+
+/** The stored result and its flag rows, replaced together. */
+async function replaceResult(tx: Tx, setupId: string, result: BalanceResult): Promise<void> {
+  const rows = resultRows(setupId, result);
+  await tx.insert(setupResults).values(rows.result).onConflictDoUpdate({ target: setupResults.setupId, set: { resultJson: rows.result.resultJson } });
+  await tx.delete(setupFlags).where(eq(setupFlags.setupId, setupId));
+  if (rows.flags.length) await tx.insert(setupFlags).values(rows.flags);
 }
 
 async function replacePayloads(tx: Tx, setupId: string, draft: SetupDraft): Promise<void> {
@@ -100,7 +110,8 @@ async function readOwnedVersion(tx: Tx, id: string, ownerId: string): Promise<{ 
 export async function createSetup({ ownerId, draft, evaluated }: { ownerId: string; draft: SetupDraft; evaluated: Evaluated }): Promise<string> {
   const id = randomUUID();
   await getDb().transaction(async (tx) => {
-    await tx.insert(setups).values({ id, ownerId, ...columnsFromDraft(draft), ...summaryColumns(draft, evaluated.result), status: "draft", version: 1, resultJson: evaluated.result, worstFlag: evaluated.worstFlag });
+    await tx.insert(setups).values({ id, ownerId, ...columnsFromDraft(draft), ...summaryColumns(draft, evaluated.result), status: "draft", version: 1, worstFlag: evaluated.worstFlag });
+    await replaceResult(tx, id, evaluated.result);
     await replacePayloads(tx, id, draft);
     await audit(tx, ownerId, "setup.create", id);
   });
@@ -139,7 +150,6 @@ export async function saveSetup({
         ...summaryColumns(draft, evaluated.result),
         status: verdict.to,
         version: expectedVersion + 1,
-        resultJson: evaluated.result,
         worstFlag: evaluated.worstFlag,
         cautionsAcknowledged: false,
         updatedAt: new Date(),
@@ -147,6 +157,7 @@ export async function saveSetup({
       .where(and(eq(setups.id, id), eq(setups.version, expectedVersion)))
       .returning({ version: setups.version });
     if (updated.length === 0) return { kind: "conflict", currentVersion: expectedVersion + 1 };
+    await replaceResult(tx, id, evaluated.result);
     await replacePayloads(tx, id, draft);
     await audit(tx, owner.id, "setup.save", id, { version: expectedVersion + 1, from: current.status, to: verdict.to });
     return { kind: "saved", version: expectedVersion + 1, status: verdict.to };
@@ -185,7 +196,6 @@ export async function markSetupSubmitted({
         status: verdict.to,
         version: expectedVersion + 1,
         freeLiftRatio: evaluated.result.freeLiftRatio,
-        resultJson: evaluated.result,
         worstFlag: evaluated.worstFlag,
         cautionsAcknowledged: evaluated.worstFlag === "caution",
         submittedAt: new Date(),
@@ -193,6 +203,7 @@ export async function markSetupSubmitted({
       })
       .where(eq(setups.id, id))
       .returning({ name: setups.name, modelId: setups.modelId, payloadMassKg: setups.payloadMassKg });
+    await replaceResult(tx, id, evaluated.result);
     await audit(tx, owner.id, "setup.submit", id, { version: expectedVersion + 1, from: current.status, to: verdict.to, worstFlag: evaluated.worstFlag });
     const [model] = await tx.select({ name: envelopeModels.name }).from(envelopeModels).where(eq(envelopeModels.id, updated.modelId));
     const reviewers = await tx.select({ email: user.email }).from(user).where(eq(user.role, "support"));

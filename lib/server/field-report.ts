@@ -15,7 +15,7 @@ export async function getFieldReport({ viewer, id }: { viewer: Viewer; id: strin
   const stored = header ? await getSetupById({ id, ownerId: null }) : null;
   if (!header || !stored) return fail("not_found", "No such setup, or not one you can see.");
   const { row, draft } = stored;
-  let result = row.resultJson;
+  let result = stored.result;
   if (!isCurrentResultShape(result)) {
     const fresh = await evaluateDraft({ draft, ownerId: header.ownerId });
     if (!fresh.ok) return fresh;

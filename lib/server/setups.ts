@@ -63,8 +63,8 @@ export async function getSetup({ viewer, id }: { viewer: Viewer; id: string }): 
 }
 
 function toView(setup: setupsDb.StoredSetup): SetupView {
-  const { row, draft } = setup;
-  return { id: row.id, version: row.version, status: row.status, draft, result: row.resultJson, worstFlag: row.worstFlag };
+  const { row, draft, result } = setup;
+  return { id: row.id, version: row.version, status: row.status, draft, result, worstFlag: row.worstFlag };
 }
 
 async function createFromDraft(viewer: Viewer, draft: SetupDraft, path: string): Promise<Result<{ id: string; version: number; result: BalanceResult }>> {

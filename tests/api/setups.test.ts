@@ -63,7 +63,7 @@ interface StoredRow {
 
 async function storedRow(id: string): Promise<StoredRow | null> {
   const rows = await database.client.execute({
-    sql: "select version, status, name, mount_position_x_m, result_json, worst_flag, updated_at, cautions_acknowledged from setups where id = ?",
+    sql: "select version, status, name, mount_position_x_m, r.result_json as result_json, worst_flag, updated_at, cautions_acknowledged from setups left join setup_results r on r.setup_id = setups.id where id = ?",
     args: [id],
   });
   const payloads = await database.client.execute({ sql: "select name, mass_kg, sort_order from setup_payloads where setup_id = ? order by sort_order", args: [id] });

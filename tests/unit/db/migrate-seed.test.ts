@@ -22,13 +22,16 @@ const TABLES = [
   "setup_payloads",
   "comments",
   "decisions",
+  "setup_results",
+  "setup_flags",
 ] as const;
 
 async function dumpTables(client: ReturnType<typeof openDatabase>["client"]): Promise<Record<string, unknown[]>> {
   const out: Record<string, unknown[]> = {};
   for (const table of TABLES) {
     // The password hash is salted per insert: compare it by presence, the rest byte for byte.
-    const rows = (await client.execute(`select * from "${table}" order by id`)).rows.map((row) => {
+    const order = table === "setup_results" ? "setup_id" : table === "setup_flags" ? "setup_id, code, level" : "id";
+    const rows = (await client.execute(`select * from "${table}" order by ${order}`)).rows.map((row) => {
       const copy: Record<string, unknown> = { ...row };
       if ("password" in copy) copy.password = copy.password ? "<hash>" : null;
       return copy;
@@ -82,11 +85,15 @@ describe("seedDemo", () => {
     expect(DEMO_SETUPS.length).toBeGreaterThanOrEqual(20);
     const statuses = new Set(first.setups.map((s) => (s as { status: string }).status));
     expect([...statuses].sort()).toEqual(["approved", "changes_requested", "draft", "submitted"]);
-    // Every setup carries the server's own evaluation and its worst flag.
-    for (const row of first.setups as Array<{ result_json: string; worst_flag: string }>) {
-      const result = JSON.parse(row.result_json) as { grossLiftKg: number; flags: unknown[] };
-      expect(Number.isFinite(result.grossLiftKg)).toBe(true);
+    // Every setup carries the server's own evaluation, its worst flag, and one flag row per distinct flag.
+    const results = new Map((first.setup_results as Array<{ setup_id: string; result_json: string }>).map((r) => [r.setup_id, JSON.parse(r.result_json) as { grossLiftKg: number; flags: Array<{ code: string; level: string }> }]));
+    for (const row of first.setups as Array<{ id: string; worst_flag: string }>) {
+      const result = results.get(row.id);
+      expect(result, row.id).toBeDefined();
+      expect(Number.isFinite(result?.grossLiftKg)).toBe(true);
       expect(["ok", "caution", "stop"]).toContain(row.worst_flag);
+      const flagRows = (first.setup_flags as Array<{ setup_id: string; code: string; level: string }>).filter((f) => f.setup_id === row.id).map((f) => `${f.code}:${f.level}`);
+      expect(flagRows.sort()).toEqual([...new Set(result?.flags.map((f) => `${f.code}:${f.level}`))].sort());
     }
     client.close();
   });
