@@ -289,7 +289,7 @@ export const setupResults = sqliteTable("setup_results", {
   resultJson: text("result_json", { mode: "json" }).$type<BalanceResult>().notNull(),
 });
 
-/** Each distinct flag (code and level) a setup's stored result raised: Insight counts these in SQL. */
+/** Each distinct problem (a flag's code at `caution` or `stop`) a setup's stored result raised: Insight counts these in SQL. */
 export const setupFlags = sqliteTable(
   "setup_flags",
   {

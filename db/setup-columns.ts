@@ -85,9 +85,10 @@ export function draftFromRows(row: SetupRow, payloadRows: readonly SetupPayloadR
   };
 }
 
-/** The stored result of a setup and the distinct flags it raised, as rows. */
+/** The stored result of a setup and the distinct problems it raised (flags above `ok`), as rows. */
 export function resultRows(setupId: string, result: BalanceResult) {
-  const distinct = new Map(result.flags.map((f) => [`${f.code}:${f.level}`, { setupId, code: f.code, level: f.level }]));
+  const raised = result.flags.filter((f) => f.level !== "ok");
+  const distinct = new Map(raised.map((f) => [`${f.code}:${f.level}`, { setupId, code: f.code, level: f.level }]));
   return {
     result: { setupId, resultJson: result } satisfies typeof setupResults.$inferInsert,
     flags: [...distinct.values()] satisfies (typeof setupFlags.$inferInsert)[],
