@@ -28,8 +28,8 @@ function where(filter: InsightFilter): SQL | undefined {
   return parts.length ? and(...parts) : undefined;
 }
 
-/** floor(value / width) for values down to −width·10⁶ (SQLite's cast truncates towards zero). */
-const binOf = (value: SQL | typeof setups.payloadMassKg, width: number) => sql<number>`(cast(${value} / ${width} + 1000000 as integer) - 1000000)`;
+/** The bin a value falls in: floor(value / width), as an integer (SQLite's math functions). */
+const binOf = (value: SQL, width: number) => sql<number>`cast(floor(${value} / ${width}) as integer)`;
 
 export async function payloadMassHistogram(filter: InsightFilter) {
   const bin = binOf(sql`${setupPayloads.massKg}`, PAYLOAD_BIN_KG);
@@ -62,7 +62,7 @@ export async function templateUsage(filter: InsightFilter) {
 
 /** Where customers put the mount, as a tenth of each model's rail (a mount off the rail counts at its end). */
 export async function railPosition(filter: InsightFilter) {
-  const bin = sql<number>`max(0, min(${RAIL_BINS - 1}, cast((${setups.mountPositionXM} - ${envelopeModels.railStartXM}) / (${envelopeModels.railEndXM} - ${envelopeModels.railStartXM}) * ${RAIL_BINS} + 1000000 as integer) - 1000000))`;
+  const bin = sql<number>`max(0, min(${sql.raw(String(RAIL_BINS - 1))}, cast(floor((${setups.mountPositionXM} - ${envelopeModels.railStartXM}) / (${envelopeModels.railEndXM} - ${envelopeModels.railStartXM}) * ${sql.raw(String(RAIL_BINS))}) as integer)))`;
   const rows = await getDb()
     .select({ modelId: setups.modelId, bin, railStartXM: envelopeModels.railStartXM, railEndXM: envelopeModels.railEndXM, count: count() })
     .from(setups)
