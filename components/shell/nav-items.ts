@@ -11,7 +11,7 @@ export const NAV_ITEMS: readonly NavItem[] = [
   { href: "/setups", label: "Setups", roles: ["customer", "support", "maker"] },
   { href: "/review", label: "Review desk", roles: ["support", "maker"] },
   { href: "/workshop", label: "Workshop", roles: ["maker"] },
-  { href: "/insight", label: "Insight", roles: ["maker"] },
+  { href: "/insight", label: "Insight", roles: ["support", "maker"] },
 ];
 
 export function navItemsFor(role: Role): NavItem[] {

@@ -116,3 +116,35 @@ export async function sendBackReasons(filter: InsightFilter) {
     group by r.value order by count(*) desc, r.value`);
   return rows.map((r) => ({ code: r.code, count: Number(r.count) }));
 }
+
+/** Setups for the CSV export, in id order after `afterId` (keyset pages: no OFFSET, no result JSON). */
+export async function pageOfSetupsForExport({ afterId, limit }: { afterId: string; limit: number }) {
+  return getDb()
+    .select({
+      id: setups.id,
+      name: setups.name,
+      status: setups.status,
+      ownerId: setups.ownerId,
+      modelId: setups.modelId,
+      unitId: setups.unitId,
+      mountId: setups.mountId,
+      mountPositionXM: setups.mountPositionXM,
+      payloadMassKg: setups.payloadMassKg,
+      freeLiftRatio: setups.freeLiftRatio,
+      worstFlag: setups.worstFlag,
+      altitudeM: setups.altitudeM,
+      temperatureC: setups.temperatureC,
+      windMS: setups.windMS,
+      gustMS: setups.gustMS,
+      purity: setups.purity,
+      fillFraction: setups.fillFraction,
+      tetherLengthOutM: setups.tetherLengthOutM,
+      createdAt: setups.createdAt,
+      updatedAt: setups.updatedAt,
+      submittedAt: setups.submittedAt,
+    })
+    .from(setups)
+    .where(sql`${setups.id} > ${afterId}`)
+    .orderBy(asc(setups.id))
+    .limit(limit);
+}

@@ -1,5 +1,5 @@
 import type { BalanceResult } from "@/lib/balance";
-import type { DecisionOutcome, FlagLevel, ReviewReasonCode, Role, SetupStatus, UnitSystem } from "@/lib/domain";
+import type { DecisionOutcome, FlagCode, FlagLevel, PayloadCategory, ReviewReasonCode, Role, SetupStatus, UnitSystem } from "@/lib/domain";
 import type { AppError } from "@/lib/errors";
 import type { SetupDraft } from "@/lib/setups/setup-draft";
 
@@ -83,3 +83,18 @@ export const markThreadReadRequest = (id: string) => call<null>("PUT", setupUrl(
 
 export const decideRequest = (id: string, input: { decision: DecisionOutcome; reason: string; reasonCodes: ReviewReasonCode[]; version: number }) =>
   call<{ id: string; status: SetupStatus; version: number }>("POST", setupUrl(id, "/decision"), input);
+
+// ---------------------------------------------------------------- insight
+
+export interface InsightData {
+  payloadMassHistogram: { binStartKg: number; binEndKg: number; category: PayloadCategory; count: number }[];
+  setupPayloadMassHistogram: { binStartKg: number; binEndKg: number; count: number }[];
+  templateUsage: { templateId: string; name: string; count: number }[];
+  railPosition: { modelId: string; binStartM: number; binEndM: number; count: number }[];
+  freeLiftRatio: { binStart: number; binEnd: number; count: number }[];
+  flagCounts: { code: FlagCode; level: FlagLevel; count: number }[];
+  setupsPerMonth: { month: string; status: SetupStatus; count: number }[];
+  sendBackReasons: { code: string; count: number }[];
+}
+
+export const fetchInsight = (query: string) => call<InsightData>("GET", `/api/insight${query ? `?${query}` : ""}`);

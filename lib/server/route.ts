@@ -32,7 +32,8 @@ export interface RouteSpec<P, Q, B> {
 
 /** What a core returns for a route that answers with a file. */
 export interface FileBody {
-  bytes: Uint8Array;
+  /** The whole file, or a stream of it (sent as it is read, without a length). */
+  bytes: Uint8Array | ReadableStream<Uint8Array>;
   contentType: string;
   fileName: string;
   /** "attachment" makes the browser download it; "inline" may show it. */
@@ -44,7 +45,7 @@ function fileResponse(file: FileBody): Response {
   return new Response(file.bytes as BodyInit, {
     headers: {
       "content-type": file.contentType,
-      "content-length": String(file.bytes.byteLength),
+      ...(file.bytes instanceof Uint8Array ? { "content-length": String(file.bytes.byteLength) } : {}),
       "content-disposition": `${file.disposition}; filename="${name}"`,
       "x-content-type-options": "nosniff",
       "cache-control": "private, no-store",

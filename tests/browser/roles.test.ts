@@ -15,7 +15,7 @@ afterAll(async () => {
 
 const DEMO_ROLES = [
   { role: "customer", email: "customer@trimrail.test", nav: ["Setups"], refusedAt: "/review" },
-  { role: "support", email: "support@trimrail.test", nav: ["Setups", "Review desk"], refusedAt: "/workshop" },
+  { role: "support", email: "support@trimrail.test", nav: ["Setups", "Review desk", "Insight"], refusedAt: "/workshop" },
   { role: "maker", email: "maker@trimrail.test", nav: ["Setups", "Review desk", "Workshop", "Insight"], refusedAt: null },
 ] as const;
 

@@ -1,19 +1,28 @@
-import { EmptyState } from "@/components/ui/empty-state";
-import { MAKER_ONLY } from "@/lib/domain";
+import { Suspense } from "react";
+import { listEnvelopeModels } from "@/db/queries/catalogue";
+import { InsightView } from "@/components/insight/insight-view";
+import { STAFF_ROLES } from "@/lib/domain";
 import { requirePageViewer } from "@/lib/auth/guard";
 
 export const metadata = { title: "Insight" };
 
 export default async function InsightPage() {
-  await requirePageViewer(MAKER_ONLY, "/insight");
+  const viewer = await requirePageViewer(STAFF_ROLES, "/insight");
+  const models = await listEnvelopeModels();
   return (
     <section className="space-y-4">
-      <h1 className="text-2xl">Insight</h1>
-      <EmptyState title="Charts are not built yet">
-        This page will chart what customers really fly, from saved setups: the spread of payload masses, payload
-        categories, where mounts sit on the rail, and the reasons setups are sent back at review. No figures are shown
-        until those charts read them from the database.
-      </EmptyState>
+      <div className="flex flex-wrap items-baseline justify-between gap-3">
+        <h1 className="text-2xl">Insight</h1>
+        {viewer.role === "maker" && (
+          <a href="/api/insight/setups.csv" className="text-sm text-accent underline" data-testid="export-setups" download>
+            Export every setup as CSV
+          </a>
+        )}
+      </div>
+      <p className="text-sm text-muted">What customers plan and fly, counted from their saved setups: to size the next batch and the next envelope.</p>
+      <Suspense fallback={<p role="status" className="text-sm text-muted">Loading…</p>}>
+        <InsightView models={models.map((m) => ({ id: m.id, name: m.name, railStartXM: m.railStartXM, railEndXM: m.railEndXM }))} unitSystem={viewer.unitSystem} />
+      </Suspense>
     </section>
   );
 }
