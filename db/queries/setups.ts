@@ -1,5 +1,5 @@
 import "server-only";
-import { and, desc, eq, inArray } from "drizzle-orm";
+import { and, count, desc, eq } from "drizzle-orm";
 import { randomUUID } from "node:crypto";
 import { getDb, type Database } from "@/db";
 import { envelopeModels, setupFlags, setupPayloads, setupResults, setups, user, type SetupRow } from "@/db/schema";
@@ -43,13 +43,17 @@ function selectSetupList() {
     .innerJoin(user, eq(setups.ownerId, user.id));
 }
 
-export async function listSetupsForOwner({ ownerId }: { ownerId: string }): Promise<SetupListItem[]> {
-  return selectSetupList().where(eq(setups.ownerId, ownerId)).orderBy(desc(setups.updatedAt));
-}
-
-/** The review desk's queue: what customers have submitted, oldest first. */
-export async function listReviewQueue({ statuses = ["submitted"] }: { statuses?: SetupStatus[] } = {}): Promise<SetupListItem[]> {
-  return selectSetupList().where(inArray(setups.status, statuses)).orderBy(setups.submittedAt);
+/** One page of a person's setups, most recently changed first, and how many they have in all. */
+export async function listSetupsForOwner({ ownerId, page = 1, pageSize = 25 }: { ownerId: string; page?: number; pageSize?: number }): Promise<{ rows: SetupListItem[]; total: number }> {
+  const [rows, [{ total }]] = await Promise.all([
+    selectSetupList()
+      .where(eq(setups.ownerId, ownerId))
+      .orderBy(desc(setups.updatedAt), desc(setups.id))
+      .limit(pageSize)
+      .offset((page - 1) * pageSize),
+    getDb().select({ total: count() }).from(setups).where(eq(setups.ownerId, ownerId)),
+  ]);
+  return { rows, total };
 }
 
 export interface StoredSetup {

@@ -43,8 +43,17 @@ export interface SetupView {
   worstFlag: FlagLevel | null;
 }
 
-export async function listOwnSetups({ viewer }: { viewer: Viewer }): Promise<Result<{ setups: setupsDb.SetupListItem[] }>> {
-  return ok({ setups: await setupsDb.listSetupsForOwner({ ownerId: viewer.id }) });
+export async function listOwnSetups({
+  viewer,
+  page,
+  pageSize,
+}: {
+  viewer: Viewer;
+  page: number;
+  pageSize: number;
+}): Promise<Result<{ setups: setupsDb.SetupListItem[]; total: number; page: number; pageSize: number }>> {
+  const { rows, total } = await setupsDb.listSetupsForOwner({ ownerId: viewer.id, page, pageSize });
+  return ok({ setups: rows, total, page, pageSize });
 }
 
 export async function getOwnSetup({ viewer, id }: { viewer: Viewer; id: string }): Promise<Result<SetupView>> {

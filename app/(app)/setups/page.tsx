@@ -4,14 +4,19 @@ import { listSetupsForOwner } from "@/db/queries/setups";
 import { NewSetupForm } from "@/components/setups/new-setup-form";
 import { SetupRowActions } from "@/components/setups/setup-row-actions";
 import { EmptyState } from "@/components/ui/empty-state";
+import { Pager } from "@/components/ui/pager";
 import { SetupTable } from "@/components/ui/setup-table";
 import { requirePageViewer } from "@/lib/auth/guard";
 
 export const metadata = { title: "Setups" };
 
-export default async function SetupsPage() {
+const PAGE_SIZE = 25;
+
+export default async function SetupsPage({ searchParams }: PageProps<"/setups">) {
   const viewer = await requirePageViewer(undefined, "/setups");
-  const [rows, models] = await Promise.all([listSetupsForOwner({ ownerId: viewer.id }), listActiveEnvelopeModels()]);
+  const asked = Number((await searchParams).page);
+  const page = Number.isInteger(asked) && asked >= 1 && asked <= 1_000_000 ? asked : 1;
+  const [{ rows, total }, models] = await Promise.all([listSetupsForOwner({ ownerId: viewer.id, page, pageSize: PAGE_SIZE }), listActiveEnvelopeModels()]);
   const unread = await countUnreadComments({ setupIds: rows.map((r) => r.id), userId: viewer.id });
   return (
     <section className="space-y-4">
@@ -19,13 +24,17 @@ export default async function SetupsPage() {
         <h1 className="text-2xl">Setups</h1>
         <NewSetupForm models={models.map((m) => ({ id: m.id, name: m.name, gasVolumeM3: m.gasVolumeM3 }))} />
       </div>
-      {rows.length === 0 ? (
+      {total === 0 ? (
         <EmptyState title="No setups yet">
           A setup is one payload configuration on one envelope: the mount&apos;s place on the belly rail, the payloads, the
           site, the gas and the tether. Start one with “New setup”; it will be listed here with its status and worst flag.
         </EmptyState>
       ) : (
-        <SetupTable rows={rows} hrefFor={(row) => `/setups/${row.id}`} actionsFor={(row) => <SetupRowActions id={row.id} name={row.name} />} unread={unread} />
+        <>
+          <SetupTable rows={rows} hrefFor={(row) => `/setups/${row.id}`} actionsFor={(row) => <SetupRowActions id={row.id} name={row.name} />} unread={unread} />
+          {rows.length === 0 && <p className="text-sm text-muted">No setups on this page. <a href="/setups" className="text-accent underline">Back to the first page</a></p>}
+          <Pager page={page} pageSize={PAGE_SIZE} total={total} hrefFor={(n) => `/setups?page=${n}`} label="Setup pages" />
+        </>
       )}
     </section>
   );

@@ -7,6 +7,14 @@ const version = z.number("version must be a number").int("version must be a whol
 
 export const setupParamsSchema = z.object({ id });
 
+/** A page of a list: 1-based, at most 100 rows. */
+export const pageQuerySchema = z
+  .object({
+    page: z.coerce.number("page must be a number").int("page must be a whole number").min(1, "page starts at 1").max(1_000_000).default(1),
+    pageSize: z.coerce.number("pageSize must be a number").int("pageSize must be a whole number").min(1).max(100, "pageSize is at most 100").default(25),
+  })
+  .strict();
+
 /** A new setup: a whole draft, or the neutral start on one envelope model. */
 export const createSetupBodySchema = z
   .object({ draft: setupDraftSchema.optional(), modelId: id.optional() })
