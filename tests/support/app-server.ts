@@ -8,6 +8,12 @@ import { openDatabase } from "../../db/index";
 import { migrateDatabase } from "../../db/migrate";
 import { seedDemo } from "../../db/seed";
 
+/**
+ * The tests' own build folder (next.config.ts reads TRIMRAIL_DIST_DIR): building here leaves a
+ * running `npm run demo`, which serves .next, untouched.
+ */
+export const TEST_DIST_DIR = ".next-test";
+
 export interface AppServer {
   baseURL: string;
   databaseUrl: string;
@@ -43,7 +49,8 @@ async function waitForServer(url: string, child: ChildProcess, timeoutMs: number
 
 /**
  * A private copy of the app: a fresh SQLite file with migrations and demo data, a production build
- * (`next build` unless `build` is false) and `next start` on a free port of the loopback address.
+ * (`next build` into TEST_DIST_DIR unless `build` is false) and `next start` on a free port of the
+ * loopback address.
  */
 export async function startAppServer({ build }: { build: boolean }): Promise<AppServer> {
   const dir = mkdtempSync(path.join(os.tmpdir(), "trimrail-app-"));
@@ -62,6 +69,7 @@ export async function startAppServer({ build }: { build: boolean }): Promise<App
     BETTER_AUTH_SECRET: randomBytes(32).toString("base64url"),
     BETTER_AUTH_URL: baseURL,
     NEXT_TELEMETRY_DISABLED: "1",
+    TRIMRAIL_DIST_DIR: TEST_DIST_DIR,
   };
 
   if (build) {
