@@ -3,7 +3,8 @@
  * on four pages: the landing page, sign-in, Setups and the Planner (signed in as a demo customer).
  * Per page it prints the score, LCP, TBT and the JavaScript loaded, compressed as served and
  * decoded; "first" is the JS the HTML asks for (what the page needs to paint and hydrate), "later"
- * what dynamic imports fetch after it (the 3D view, the charts).
+ * what dynamic imports fetch after it (the 3D view, the charts). A page that loads three.js is
+ * measured a second time with those chunks refused, to tell the 3D view's cost from the rest.
  * Reuses the last test build (.next-test) when TRIMRAIL_REUSE_BUILD=1; TRIMRAIL_BENCH_RUNS sets the
  * runs per page (median by score, default 3: one run on a shared machine is noisy) and
  * TRIMRAIL_BENCH_PAGES a comma-separated subset of the pages (landing, sign-in, setups, planner). The median
@@ -54,6 +55,10 @@ interface PageFigures {
   first: JsBytes;
   later: JsBytes;
   libsInFirst: string[];
+  /** Scripts loaded after the first load that carry three.js: the 3D view. */
+  sceneUrls: string[];
+  /** Lighthouse's measure of this machine's speed at the time (higher is faster). */
+  benchmarkIndex: number;
   report: string;
 }
 
@@ -106,13 +111,19 @@ async function scriptsInHtml(url: string, cookie: string | undefined): Promise<S
   return found;
 }
 
-async function librariesIn(urls: string[]): Promise<string[]> {
-  const libs = new Set<string>();
+/** Which of the heavy libraries each script carries, by URL. */
+async function librariesIn(urls: string[]): Promise<Map<string, string[]>> {
+  const found = new Map<string, string[]>();
   for (const url of urls) {
     const text = await (await fetch(url)).text();
-    for (const [name, marker] of Object.entries(LIBRARY_MARKERS)) if (text.includes(marker)) libs.add(name);
+    found.set(
+      url,
+      Object.entries(LIBRARY_MARKERS)
+        .filter(([, marker]) => text.includes(marker))
+        .map(([name]) => name),
+    );
   }
-  return [...libs];
+  return found;
 }
 
 const sumJs = (items: NetworkItem[]): JsBytes => ({
@@ -121,7 +132,14 @@ const sumJs = (items: NetworkItem[]): JsBytes => ({
   files: items.length,
 });
 
-async function measure(baseURL: string, page: PageToMeasure, port: number, cookie: string): Promise<PageFigures> {
+interface RunOptions {
+  port: number;
+  cookie: string;
+  /** Script URLs Lighthouse refuses to load (the 3D view's chunks, to see the page without it). */
+  blocked?: string[];
+}
+
+async function measure(baseURL: string, page: PageToMeasure, { port, cookie, blocked = [] }: RunOptions): Promise<PageFigures> {
   const url = new URL(page.path, baseURL).href;
   const headers = page.signedIn ? { cookie } : undefined;
   const result = await lighthouse(url, {
@@ -131,6 +149,7 @@ async function measure(baseURL: string, page: PageToMeasure, port: number, cooki
     logLevel: "error",
     onlyCategories: ["performance"],
     extraHeaders: headers,
+    blockedUrlPatterns: blocked,
   });
   if (!result) throw new Error(`lighthouse returned nothing for ${url}`);
   const { lhr } = result;
@@ -140,14 +159,17 @@ async function measure(baseURL: string, page: PageToMeasure, port: number, cooki
   );
   const firstUrls = await scriptsInHtml(url, headers?.cookie);
   const first = items.filter((i) => firstUrls.has(i.url));
-  const later = items.filter((i) => !firstUrls.has(i.url));
+  const later = items.filter((i) => !firstUrls.has(i.url) && (i.transferSize ?? 0) > 0);
+  const libraries = await librariesIn(items.map((i) => i.url));
   return {
     score: lhr.categories.performance?.score ?? 0,
     lcpMs: lhr.audits["largest-contentful-paint"]?.numericValue ?? Number.NaN,
     tbtMs: lhr.audits["total-blocking-time"]?.numericValue ?? Number.NaN,
     first: sumJs(first),
     later: sumJs(later),
-    libsInFirst: await librariesIn(first.map((i) => i.url)),
+    libsInFirst: [...new Set(first.flatMap((i) => libraries.get(i.url) ?? []))],
+    sceneUrls: later.filter((i) => libraries.get(i.url)?.includes("three")).map((i) => i.url),
+    benchmarkIndex: lhr.environment.benchmarkIndex,
     report: JSON.stringify(lhr),
   };
 }
@@ -159,7 +181,7 @@ function printRow(label: string, f: PageFigures): void {
   const allDecoded = f.first.decodedBytes + f.later.decodedBytes;
   console.log(
     [
-      label.padEnd(8),
+      label.padEnd(15),
       f.score.toFixed(2).padStart(5),
       `${(f.lcpMs / 1000).toFixed(2)} s`.padStart(8),
       `${f.tbtMs.toFixed(0)} ms`.padStart(8),
@@ -171,25 +193,40 @@ function printRow(label: string, f: PageFigures): void {
   );
 }
 
+async function medianOf(baseURL: string, page: PageToMeasure, options: RunOptions, reportName: string): Promise<PageFigures> {
+  const runs: PageFigures[] = [];
+  for (let i = 0; i < RUNS; i++) runs.push(await measure(baseURL, page, options));
+  runs.sort((a, b) => a.score - b.score);
+  const median = runs[Math.floor(runs.length / 2)];
+  mkdirSync(REPORT_DIR, { recursive: true });
+  writeFileSync(path.join(REPORT_DIR, `${reportName}.json`), median.report);
+  return median;
+}
+
 const app = await startAppServer({ build: process.env.TRIMRAIL_REUSE_BUILD !== "1" });
 const chromium = await launchDebuggableChromium();
 try {
   const cookie = await signInCookie(app.baseURL);
   const rows: [string, PageFigures][] = [];
   for (const page of PAGES) {
-    const runs: PageFigures[] = [];
-    // The first visit warms the server's caches; it is not counted.
-    await measure(app.baseURL, page, chromium.port, cookie);
-    for (let i = 0; i < RUNS; i++) runs.push(await measure(app.baseURL, page, chromium.port, cookie));
-    runs.sort((a, b) => a.score - b.score);
-    const median = runs[Math.floor(runs.length / 2)];
-    mkdirSync(REPORT_DIR, { recursive: true });
-    writeFileSync(path.join(REPORT_DIR, `${page.label}.json`), median.report);
-    rows.push([page.label, median]);
+    // The first visit warms the server's caches and finds the 3D view's chunks; it is not counted.
+    const warm = await measure(app.baseURL, page, { port: chromium.port, cookie });
+    rows.push([page.label, await medianOf(app.baseURL, page, { port: chromium.port, cookie }, page.label)]);
+    if (warm.sceneUrls.length > 0) {
+      // The same page with the 3D view's chunks refused (it shows its text fallback): what the rest costs.
+      const options = { port: chromium.port, cookie, blocked: warm.sceneUrls };
+      rows.push([`${page.label} w/o 3D`, await medianOf(app.baseURL, page, options, `${page.label}-without-3d`)]);
+    }
   }
-  console.log(`\nLighthouse, mobile simulation, performance; median of ${RUNS} run(s) per page. JS as gzip transferred / decoded.`);
+  const speeds = rows.map(([, f]) => f.benchmarkIndex.toFixed(0)).join(", ");
   console.log(
-    "page     score      LCP      TBT     all JS (gz / raw)   first load (gz / raw, files)   later (files)  heavy libs in first load",
+    `\nLighthouse ${RUNS} run(s) per page (median by score), mobile simulation, performance only; JS as gzip transferred / decoded.`,
+  );
+  console.log(
+    `Machine: load average ${os.loadavg()[0].toFixed(1)} on ${os.cpus().length} cores; Lighthouse benchmarkIndex per row ${speeds}.`,
+  );
+  console.log(
+    "page            score      LCP      TBT     all JS (gz / raw)   first load (gz / raw, files)   later (files)  heavy libs in first load",
   );
   for (const [label, figures] of rows) printRow(label, figures);
 } finally {

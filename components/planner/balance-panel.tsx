@@ -12,7 +12,7 @@ import { usePlanner } from "./planner-context";
 function ChartsLoading() {
   // The charts' own height, so nothing below moves when they arrive.
   return (
-    <div className="panel flex h-[26rem] items-center justify-center p-4 text-sm text-muted" role="status" data-testid="balance-charts-loading">
+    <div className="panel flex h-[26.875rem] items-center justify-center p-4 text-sm text-muted" role="status" data-testid="balance-charts-loading">
       Loading the charts…
     </div>
   );
