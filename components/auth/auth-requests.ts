@@ -17,7 +17,10 @@ async function postToAuth(path: string, body: Record<string, string>): Promise<A
     });
     if (response.ok) return null;
     const data = (await response.json().catch(() => ({}))) as { message?: unknown };
-    return { status: response.status, message: typeof data.message === "string" ? data.message : `The server answered ${response.status}.` };
+    return {
+      status: response.status,
+      message: typeof data.message === "string" ? data.message : `The server answered ${response.status}.`,
+    };
   } catch {
     return { status: 0, message: "The server could not be reached." };
   }
