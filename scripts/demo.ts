@@ -7,6 +7,8 @@ import { startLocalMail } from "./local-mail";
 // One command for a fresh clone: secret, database, migrations, demo data, production build, serve.
 const port = process.env.PORT ?? "3000";
 const url = `http://localhost:${port}`;
+// Next would otherwise try to send usage data over the internet.
+process.env.NEXT_TELEMETRY_DISABLED ??= "1";
 ensureLocalEnv({ BETTER_AUTH_URL: url });
 mkdirSync("data", { recursive: true });
 

@@ -4,6 +4,8 @@ import { ensureLocalEnv } from "./local-env";
 import { startLocalMail } from "./local-mail";
 
 // `next dev` with the same preparation as the demo (secret, migrations, demo data).
+// Next would otherwise try to send usage data over the internet.
+process.env.NEXT_TELEMETRY_DISABLED ??= "1";
 ensureLocalEnv({ BETTER_AUTH_URL: `http://localhost:${process.env.PORT ?? "3000"}` });
 mkdirSync("data", { recursive: true });
 for (const script of ["scripts/migrate.ts", "scripts/seed.ts"]) {

@@ -3,7 +3,7 @@ import { zodResolver } from "@hookform/resolvers/zod";
 import { useState } from "react";
 import { useForm } from "react-hook-form";
 import { z } from "zod";
-import { authClient } from "@/lib/auth/client";
+import { requestPasswordReset } from "./auth-requests";
 
 const schema = z.object({ email: z.email("Enter an e-mail address.") });
 type Values = z.infer<typeof schema>;
@@ -20,7 +20,7 @@ export function ForgotPasswordForm() {
   const onSubmit = handleSubmit(async ({ email }) => {
     setServerError(null);
     // The server answers the same whether or not the address has an account; so do we.
-    const { error } = await authClient.requestPasswordReset({ email, redirectTo: "/reset-password" });
+    const error = await requestPasswordReset({ email, redirectTo: "/reset-password" });
     if (error) {
       setServerError(error.status === 429 ? "Too many requests. Wait a minute and try again." : "That did not work. Try again in a moment.");
       return;

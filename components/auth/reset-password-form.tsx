@@ -4,7 +4,7 @@ import Link from "next/link";
 import { useState } from "react";
 import { useForm } from "react-hook-form";
 import { z } from "zod";
-import { authClient } from "@/lib/auth/client";
+import { resetPassword } from "./auth-requests";
 import { PASSWORD_MAX_LENGTH, PASSWORD_MIN_LENGTH } from "@/lib/auth/password-rule";
 
 const schema = z
@@ -33,10 +33,10 @@ export function ResetPasswordForm({ token }: ResetPasswordFormProps) {
 
   const onSubmit = handleSubmit(async ({ password }) => {
     setServerError(null);
-    const { error } = await authClient.resetPassword({ newPassword: password, token });
+    const error = await resetPassword({ newPassword: password, token });
     if (!error) return setOutcome("changed");
     if (error.code === "INVALID_TOKEN") return setOutcome("expired");
-    setServerError(error.status === 429 ? "Too many attempts. Wait a minute and try again." : (error.message ?? "That did not work."));
+    setServerError(error.status === 429 ? "Too many attempts. Wait a minute and try again." : error.message);
   });
 
   if (outcome === "changed") {

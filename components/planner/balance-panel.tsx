@@ -1,5 +1,6 @@
 "use client";
-import { useLayoutEffect } from "react";
+import dynamic from "next/dynamic";
+import { useEffect, useLayoutEffect, useRef, useState } from "react";
 import { resolveLimits } from "@/lib/balance";
 import { formatQuantity } from "@/lib/units";
 import { Cautions } from "./cautions";
@@ -7,7 +8,42 @@ import { FigureRow } from "./figure-row";
 import { FlagList } from "./flag-list";
 import { FreeLiftBar } from "./free-lift-bar";
 import { usePlanner } from "./planner-context";
-import { BalanceCharts } from "./balance-charts";
+
+function ChartsLoading() {
+  // The charts' own height, so nothing below moves when they arrive.
+  return (
+    <div className="panel flex h-[26.875rem] items-center justify-center p-4 text-sm text-muted" role="status" data-testid="balance-charts-loading">
+      Loading the charts…
+    </div>
+  );
+}
+
+// Recharts is the largest library on the page after three.js: it loads after the panel has painted.
+const BalanceCharts = dynamic(() => import("./balance-charts").then((module) => module.BalanceCharts), {
+  ssr: false,
+  loading: () => <ChartsLoading />,
+});
+
+/** The charts sit at the foot of the panel: they load (and run their sweeps) once they come near the screen. */
+function ChartsWhenNear() {
+  const placeholder = useRef<HTMLDivElement>(null);
+  const [near, setNear] = useState(false);
+  useEffect(() => {
+    const element = placeholder.current;
+    if (near || !element) return;
+    const observer = new IntersectionObserver((entries) => {
+      if (entries.some((entry) => entry.isIntersecting)) setNear(true);
+    }, { rootMargin: "400px 0px" });
+    observer.observe(element);
+    return () => observer.disconnect();
+  }, [near]);
+  if (near) return <BalanceCharts />;
+  return (
+    <div ref={placeholder}>
+      <ChartsLoading />
+    </div>
+  );
+}
 
 const deg = (value: number | null | undefined): string => (value === null || value === undefined ? "none" : `${value.toFixed(1)}°`);
 
@@ -79,7 +115,7 @@ export function BalancePanel() {
         <div className="mt-2"><FlagList flags={result.flags} unitSystem={units} /></div>
       </div>
 
-      <BalanceCharts />
+      <ChartsWhenNear />
 
       <Cautions hasAntenna={payloads.some((p) => p.category === "antenna")} result={result} />
     </section>

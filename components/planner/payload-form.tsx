@@ -42,22 +42,6 @@ function toForm(p: SetupPayloadDraft, units: UnitSystem): DisplayValues {
   };
 }
 
-export const BLANK_PAYLOAD: SetupPayloadDraft = {
-  templateId: null,
-  name: "",
-  category: "other",
-  massKg: 0.1,
-  shape: "box",
-  lengthM: 0.08,
-  widthM: 0.06,
-  heightM: 0.05,
-  attachment: "1/4-20 UNC",
-  adapterId: null,
-  dragAreaM2: 0.003,
-  offsetXM: 0,
-  offsetZM: -0.075,
-};
-
 interface PayloadFormProps {
   initial: SetupPayloadDraft;
   units: UnitSystem;

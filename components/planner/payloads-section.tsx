@@ -1,10 +1,38 @@
 "use client";
+import dynamic from "next/dynamic";
 import { useState } from "react";
 import { formatQuantity } from "@/lib/units";
 import type { SetupPayloadDraft } from "@/lib/setups/setup-draft";
-import { BLANK_PAYLOAD, PayloadForm } from "./payload-form";
 import { usePlanner, usePlannerActions } from "./planner-context";
 import { Section } from "./section";
+
+// The form (and its form library) is only needed once someone adds or edits a payload; pointing at
+// a button that opens it starts the download.
+const loadPayloadForm = () => import("./payload-form");
+const PayloadForm = dynamic(() => loadPayloadForm().then((module) => module.PayloadForm), {
+  ssr: false,
+  loading: () => (
+    <p className="mt-3 text-sm text-muted" role="status">
+      Loading the form…
+    </p>
+  ),
+});
+
+const BLANK_PAYLOAD: SetupPayloadDraft = {
+  templateId: null,
+  name: "",
+  category: "other",
+  massKg: 0.1,
+  shape: "box",
+  lengthM: 0.08,
+  widthM: 0.06,
+  heightM: 0.05,
+  attachment: "1/4-20 UNC",
+  adapterId: null,
+  dragAreaM2: 0.003,
+  offsetXM: 0,
+  offsetZM: -0.075,
+};
 
 type Editing = { mode: "add"; initial: SetupPayloadDraft } | { mode: "edit"; index: number } | null;
 
@@ -33,7 +61,7 @@ export function PayloadsSection() {
               <span className="figure text-muted">{formatQuantity("itemMass", p.massKg, units)}</span>
               <span className="text-muted">{p.attachment}{p.adapterId ? " + adapter" : ""}</span>
               <span className="ml-auto flex gap-2">
-                <button type="button" className="text-accent underline" onClick={() => setEditing({ mode: "edit", index: i })}>Edit</button>
+                <button type="button" className="text-accent underline" onPointerEnter={loadPayloadForm} onFocus={loadPayloadForm} onClick={() => setEditing({ mode: "edit", index: i })}>Edit</button>
                 <button type="button" className="text-flag-stop underline" onClick={() => actions.removePayload(i)} aria-label={`Remove ${p.name}`}>Remove</button>
               </span>
             </div>
@@ -64,7 +92,7 @@ export function PayloadsSection() {
           </select>
         </label>
         <button type="button" onClick={addTemplate} className="rounded border border-accent px-3 py-1.5 text-sm text-accent" data-testid="add-template">Add</button>
-        <button type="button" onClick={() => setEditing({ mode: "add", initial: BLANK_PAYLOAD })} className="rounded border border-hairline px-3 py-1.5 text-sm" data-testid="add-custom">Custom payload…</button>
+        <button type="button" onPointerEnter={loadPayloadForm} onFocus={loadPayloadForm} onClick={() => setEditing({ mode: "add", initial: BLANK_PAYLOAD })} className="rounded border border-hairline px-3 py-1.5 text-sm" data-testid="add-custom">Custom payload…</button>
       </div>
       {editing?.mode === "add" && (
         <PayloadForm

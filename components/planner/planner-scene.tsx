@@ -4,10 +4,9 @@ import { useShallow } from "zustand/react/shallow";
 import { LifterCanvas, type ScenePayload } from "@/components/scene";
 import { formatQuantity } from "@/lib/units";
 import { usePlanner, usePlannerActions } from "./planner-context";
+import { CASE_WORDS, windArrowLabel } from "./scene-labels";
 import { displayedTrimDeg, modelOf } from "./store";
 import type { TrimCase } from "./types";
-
-const CASE_WORDS: Record<TrimCase, string> = { calm: "Calm", wind: "Wind", gust: "Gust" };
 
 /** Maps the planner store onto the scene's props; the scene itself only draws. */
 export function PlannerScene() {
@@ -58,7 +57,7 @@ export function PlannerScene() {
         trimDeg={trimDeg}
         tetherAngleDeg={tetherAngleDeg}
         windMS={windMS}
-        windLabel={windMS > 0 ? formatQuantity("speed", windMS, units) : undefined}
+        windLabel={windArrowLabel(trimCase, windMS, units)}
         onMountDrag={setMountPosition}
         summary={summary}
         mountSelected

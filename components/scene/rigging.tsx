@@ -75,7 +75,7 @@ export const WindArrow = memo(function WindArrow({ windMS, label, tail, lengthUn
   const lengthM = lengthUnitM * Math.min(0.6, 0.18 + 0.025 * windMS);
   const shaftRadiusM = 0.012 * lengthUnitM;
   const headLengthM = 0.08 * lengthUnitM;
-  const text = label ? `wind ${label}` : "wind";
+  const text = label ?? "wind";
   const { texture, aspect } = useMemo(() => textTexture(text), [text]);
   const labelHeightM = 0.07 * lengthUnitM;
   return (

@@ -24,7 +24,7 @@ export interface LifterSceneProps {
   onMountDragEnd?: () => void;
   /** Text alternative of the view (the container summarises the trim); the canvas is role="img". */
   summary?: string;
-  /** Short text beside the wind arrow in the user's units, e.g. "6 m/s"; the scene does no units. */
+  /** Text beside the wind arrow in the user's units, e.g. "Gust 8.0 m/s" (default "wind"); the scene does no units. */
   windLabel?: string;
   /** Highlights the mount as selected (accent outline). */
   mountSelected?: boolean;

@@ -1,6 +1,6 @@
 "use client";
 import { useRouter } from "next/navigation";
-import { authClient } from "@/lib/auth/client";
+import { signOutSession } from "@/components/auth/auth-requests";
 
 export function SignOutButton() {
   const router = useRouter();
@@ -9,7 +9,7 @@ export function SignOutButton() {
       type="button"
       className="text-sm text-muted underline-offset-2 hover:underline"
       onClick={async () => {
-        await authClient.signOut();
+        await signOutSession();
         router.replace("/sign-in");
         router.refresh();
       }}

@@ -9,6 +9,12 @@ import { migrateDatabase } from "../../db/migrate";
 import { seedDemo } from "../../db/seed";
 import { startSmtpFake } from "../../scripts/smtp-fake";
 
+/**
+ * The tests' own build folder (next.config.ts reads TRIMRAIL_DIST_DIR): building here leaves a
+ * running `npm run demo`, which serves .next, untouched.
+ */
+export const TEST_DIST_DIR = ".next-test";
+
 export interface AppServer {
   baseURL: string;
   databaseUrl: string;
@@ -46,7 +52,8 @@ async function waitForServer(url: string, child: ChildProcess, timeoutMs: number
 
 /**
  * A private copy of the app: a fresh SQLite file with migrations and demo data, a production build
- * (`next build` unless `build` is false) and `next start` on a free port of the loopback address.
+ * (`next build` into TEST_DIST_DIR unless `build` is false) and `next start` on a free port of the
+ * loopback address.
  */
 export async function startAppServer({ build, databaseUrl: existingDatabaseUrl }: { build: boolean; databaseUrl?: string }): Promise<AppServer> {
   const dir = mkdtempSync(path.join(os.tmpdir(), "trimrail-app-"));
@@ -73,6 +80,7 @@ export async function startAppServer({ build, databaseUrl: existingDatabaseUrl }
     BETTER_AUTH_SECRET: randomBytes(32).toString("base64url"),
     BETTER_AUTH_URL: baseURL,
     NEXT_TELEMETRY_DISABLED: "1",
+    TRIMRAIL_DIST_DIR: TEST_DIST_DIR,
   };
 
   if (build) {

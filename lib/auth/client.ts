@@ -1,4 +1,0 @@
-"use client";
-import { createAuthClient } from "better-auth/react";
-
-export const authClient = createAuthClient();
