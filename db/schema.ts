@@ -43,7 +43,7 @@ export const user = sqliteTable(
     createdAt: createdAt(),
     updatedAt: updatedAt(),
   },
-  (t) => [
+  () => [
     check("user_role_check", inList("role", ROLES)),
     check("user_unit_system_check", inList("unit_system", UNIT_SYSTEMS)),
   ],
@@ -172,7 +172,7 @@ export const mounts = sqliteTable(
     safetyLineBreakingLoadN: real("safety_line_breaking_load_n").notNull(),
     active: integer("active", { mode: "boolean" }).notNull().default(true),
   },
-  (t) => [check("mounts_thread_check", inList("thread", THREADS))],
+  () => [check("mounts_thread_check", inList("thread", THREADS))],
 );
 
 export const adapters = sqliteTable(
@@ -185,7 +185,7 @@ export const adapters = sqliteTable(
     massKg: real("mass_kg").notNull(),
     ratedLoadKg: real("rated_load_kg").notNull(),
   },
-  (t) => [
+  () => [
     check("adapters_from_check", inList("from_thread", ATTACHMENTS)),
     check("adapters_to_check", inList("to_thread", THREADS)),
   ],
@@ -214,7 +214,7 @@ export const payloadTemplates = sqliteTable(
     description: text("description").notNull().default(""),
     ...payloadColumns(),
   },
-  (t) => [
+  () => [
     check("payload_templates_category_check", inList("category", PAYLOAD_CATEGORIES)),
     check("payload_templates_shape_check", inList("shape", PAYLOAD_SHAPES)),
     check("payload_templates_attachment_check", inList("attachment", ATTACHMENTS)),

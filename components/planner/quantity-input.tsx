@@ -1,5 +1,5 @@
 "use client";
-import { useEffect, useId, useState } from "react";
+import { useId, useState } from "react";
 import type { UnitSystem } from "@/lib/domain";
 import { decimalsOf, fromDisplay, toDisplay, unitOf, type Quantity } from "@/lib/units";
 
@@ -40,7 +40,12 @@ export function QuantityInput({
   const shown = valueSI === null ? "" : String(Number(toDisplay(quantity, valueSI, unitSystem).toFixed(decimals)));
   const [text, setText] = useState(shown);
   const [error, setError] = useState<string | null>(null);
-  useEffect(() => setText(shown), [shown]);
+  // A new value from outside (a drag, a unit switch) replaces what the field shows, during render.
+  const [lastShown, setLastShown] = useState(shown);
+  if (shown !== lastShown) {
+    setLastShown(shown);
+    setText(shown);
+  }
 
   const commit = (raw: string) => {
     const trimmed = raw.trim();

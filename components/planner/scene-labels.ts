@@ -1,4 +1,4 @@
-import type { UnitSystem } from "@/db/schema";
+import type { UnitSystem } from "@/lib/domain";
 import { formatQuantity } from "@/lib/units";
 import type { TrimCase } from "./types";
 

@@ -14,7 +14,12 @@ const field = "mt-0.5 block rounded border border-hairline bg-white px-2 py-1 te
 export function QueueFilters({ params, models, onChange }: QueueFiltersProps) {
   // The search box waits for a pause in typing before it asks the server.
   const [text, setText] = useState(params.q);
-  useEffect(() => setText(params.q), [params.q]);
+  // The URL changed from elsewhere (back button, a link): show its search, during render.
+  const [lastQ, setLastQ] = useState(params.q);
+  if (params.q !== lastQ) {
+    setLastQ(params.q);
+    setText(params.q);
+  }
   useEffect(() => {
     if (text === params.q) return;
     const timer = setTimeout(() => onChange({ q: text.trim() }), 300);

@@ -57,6 +57,7 @@ export function ReviewQueue({ models, unitSystem }: ReviewQueueProps) {
   );
 
   const sorting: SortingState = [{ id: params.sort, desc: params.dir === "desc" }];
+  // eslint-disable-next-line react-hooks/incompatible-library -- TanStack Table hands back new functions each render; this component is not memoised.
   const table = useReactTable({
     data: query.data?.rows ?? [],
     columns,

@@ -52,14 +52,16 @@ const Lifter = memo(function Lifter(props: LifterProps) {
   });
   const draggable = onMountDrag !== undefined;
 
-  const tetherWorld = useMemo(() => [tetherPoint.x, tetherPoint.z, 0] as [number, number, number], [tetherPoint.x, tetherPoint.z]);
-  const buoyancyWorld = useMemo(
-    () => pitchedWorldPoint(buoyancyCentre, tetherPoint, trimDeg),
-    [buoyancyCentre.x, buoyancyCentre.z, tetherPoint.x, tetherPoint.z, trimDeg],
-  );
+  // Memoised on the numbers, not the objects: the Planner hands new objects on every drag.
+  const { x: tx, z: tz } = tetherPoint;
+  const { x: bx, z: bz } = buoyancyCentre;
+  const mx = centreOfMass?.x;
+  const mz = centreOfMass?.z;
+  const tetherWorld = useMemo(() => [tx, tz, 0] as [number, number, number], [tx, tz]);
+  const buoyancyWorld = useMemo(() => pitchedWorldPoint({ x: bx, z: bz }, { x: tx, z: tz }, trimDeg), [bx, bz, tx, tz, trimDeg]);
   const massWorld = useMemo(
-    () => (centreOfMass ? pitchedWorldPoint(centreOfMass, tetherPoint, trimDeg) : null),
-    [centreOfMass?.x, centreOfMass?.z, tetherPoint.x, tetherPoint.z, trimDeg],
+    () => (mx === undefined || mz === undefined ? null : pitchedWorldPoint({ x: mx, z: mz }, { x: tx, z: tz }, trimDeg)),
+    [mx, mz, tx, tz, trimDeg],
   );
   const guideToY = tetherPoint.z - 0.12 * unitM;
   const guideFromY = 0.5 * hullMaxDiameterM + 0.12 * unitM;
@@ -124,7 +126,7 @@ export interface LifterSceneComponentProps extends LifterSceneProps {
 }
 
 export function LifterScene({ summary = "3D view of the lifter", className = "", ...props }: LifterSceneComponentProps) {
-  useMemo(assertWebGL, []);
+  useMemo(() => assertWebGL(), []);
   const wrapperRef = useRef<HTMLDivElement>(null);
   const controlsRef = useRef<OrbitControlsImpl>(null);
   const scale = useMemo(

@@ -41,9 +41,10 @@ export function ReadySignal({ wrapperRef }: { wrapperRef: RefObject<HTMLElement 
   const done = useRef(false);
   useEffect(() => {
     invalidate();
+    const wrapper = wrapperRef.current;
     return () => {
       done.current = false;
-      wrapperRef.current?.removeAttribute("data-ready");
+      wrapper?.removeAttribute("data-ready");
     };
   }, [invalidate, wrapperRef]);
   useFrame(() => {

@@ -1,3 +1,4 @@
+/* eslint-disable react-hooks/immutability -- pointer capture and the cursor live on three's canvas element, which is imperative by nature; nothing here feeds React's render. */
 "use client";
 /**
  * Dragging the mount along the belly rail. The pointer's ray is taken into the pitched lifter's
@@ -6,7 +7,7 @@
  * capture. Scratch objects are module-level: nothing is allocated per pointer move.
  */
 import { useThree, type ThreeEvent } from "@react-three/fiber";
-import { useCallback, useEffect, useRef, type RefObject } from "react";
+import { useCallback, useEffect, useRef, type RefObject, useLayoutEffect } from "react";
 import { Matrix4, Ray, Raycaster, Vector2, type Object3D } from "three";
 import type { OrbitControls as OrbitControlsImpl } from "three-stdlib";
 
@@ -40,7 +41,9 @@ export function useMountDrag(options: MountDragOptions): MountDragHandlers {
   const gl = useThree((state) => state.gl);
   // Latest options without re-binding listeners on every render.
   const latest = useRef(options);
-  latest.current = options;
+  useLayoutEffect(() => {
+    latest.current = options;
+  });
   const dragging = useRef(false);
   const lastX = useRef(Number.NaN);
 

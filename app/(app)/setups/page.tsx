@@ -1,3 +1,4 @@
+import Link from "next/link";
 import { listActiveEnvelopeModels } from "@/db/queries/catalogue";
 import { countUnreadComments } from "@/db/queries/review";
 import { listSetupsForOwner } from "@/db/queries/setups";
@@ -32,7 +33,7 @@ export default async function SetupsPage({ searchParams }: PageProps<"/setups">)
       ) : (
         <>
           <SetupTable rows={rows} hrefFor={(row) => `/setups/${row.id}`} actionsFor={(row) => <SetupRowActions id={row.id} name={row.name} />} unread={unread} />
-          {rows.length === 0 && <p className="text-sm text-muted">No setups on this page. <a href="/setups" className="text-accent underline">Back to the first page</a></p>}
+          {rows.length === 0 && <p className="text-sm text-muted">No setups on this page. <Link href="/setups" className="text-accent underline">Back to the first page</Link></p>}
           <Pager page={page} pageSize={PAGE_SIZE} total={total} hrefFor={(n) => `/setups?page=${n}`} label="Setup pages" />
         </>
       )}

@@ -27,7 +27,7 @@ describe("navItemsFor", () => {
   it("returns each role's screens", () => {
     const labels = (role: Viewer["role"]) => navItemsFor(role).map((i) => i.label);
     expect(labels("customer")).toEqual(["Setups"]);
-    expect(labels("support")).toEqual(["Setups", "Review desk"]);
+    expect(labels("support")).toEqual(["Setups", "Review desk", "Insight"]);
     expect(labels("maker")).toEqual(["Setups", "Review desk", "Workshop", "Insight"]);
   });
 });
