@@ -2,7 +2,7 @@
 import dynamic from "next/dynamic";
 import { useEffect, useLayoutEffect, useRef, useState } from "react";
 import { resolveLimits } from "@/lib/balance";
-import { formatQuantity } from "@/lib/units";
+import { formatFixed, formatQuantity } from "@/lib/units";
 import { Cautions } from "./cautions";
 import { FigureRow } from "./figure-row";
 import { FlagList } from "./flag-list";
@@ -45,7 +45,7 @@ function ChartsWhenNear() {
   );
 }
 
-const deg = (value: number | null | undefined): string => (value === null || value === undefined ? "none" : `${value.toFixed(1)}°`);
+const deg = (value: number | null | undefined): string => (value === null || value === undefined ? "none" : `${formatFixed(value, 1)}°`);
 
 /** Everything the engine says about the current draft, live. */
 export function BalancePanel() {
@@ -80,7 +80,7 @@ export function BalancePanel() {
           <FigureRow label="Gross lift" testId="gross-lift">{formatQuantity("mass", result.grossLiftKg, units)}</FigureRow>
           <FigureRow label="Total mass" testId="total-mass">{formatQuantity("mass", result.totalMassKg, units)}</FigureRow>
           <FigureRow label="Free lift" testId="free-lift">{formatQuantity("mass", result.freeLiftKg, units)}</FigureRow>
-          <FigureRow label="Free-lift ratio" testId="free-lift-ratio">{(result.freeLiftRatio * 100).toFixed(1)} %</FigureRow>
+          <FigureRow label="Free-lift ratio" testId="free-lift-ratio">{formatQuantity("ratio", result.freeLiftRatio, units)}</FigureRow>
         </dl>
         <FreeLiftBar ratio={result.freeLiftRatio} cautionRatio={limits.cautionFreeLiftRatio} />
       </div>
@@ -106,7 +106,7 @@ export function BalancePanel() {
           <FigureRow label="Most line it lifts in calm" testId="max-tether">{result.maxTetherOutM === null ? "none" : formatQuantity("length", result.maxTetherOutM, units, 0)}</FigureRow>
           <FigureRow label="Helium to fill" testId="helium-fill">{formatQuantity("volume", result.helium.fillVolumeM3, units)}</FigureRow>
           <FigureRow label="Cylinders" testId="cylinders">{result.helium.cylindersNeeded} × {formatQuantity("volume", result.helium.cylinderContentM3, units, 2)}</FigureRow>
-          <FigureRow label="Days to a top-up" testId="days-to-top-up">{result.helium.daysToTopUp === null ? "now or never" : result.helium.daysToTopUp.toFixed(1)}</FigureRow>
+          <FigureRow label="Days to a top-up" testId="days-to-top-up">{result.helium.daysToTopUp !== null ? `${formatFixed(result.helium.daysToTopUp, 1)} days` : result.freeLiftRatio < limits.cautionFreeLiftRatio ? "due now" : "none needed"}</FigureRow>
         </dl>
       </div>
 

@@ -2,7 +2,7 @@
 import { useMemo } from "react";
 import { useShallow } from "zustand/react/shallow";
 import { LifterCanvas, type ScenePayload } from "@/components/scene";
-import { formatQuantity } from "@/lib/units";
+import { formatFixed, formatQuantity } from "@/lib/units";
 import { usePlanner, usePlannerActions } from "./planner-context";
 import { CASE_WORDS, windArrowLabel } from "./scene-labels";
 import { displayedTrimDeg, modelOf } from "./store";
@@ -11,6 +11,7 @@ import type { TrimCase } from "./types";
 /** Maps the planner store onto the scene's props; the scene itself only draws. */
 export function PlannerScene() {
   const model = usePlanner((s) => modelOf(s.catalogue, s.draft.modelId));
+  const readOnly = usePlanner((s) => s.readOnly === true);
   const mountX = usePlanner((s) => s.draft.mountPositionXM);
   const payloadDrafts = usePlanner((s) => s.draft.payloads);
   const flags = usePlanner((s) => s.result.flags);
@@ -26,20 +27,21 @@ export function PlannerScene() {
     }),
   );
   const { setMountPosition, setTrimCase } = usePlannerActions();
-  const hull = model.hullJson as { lengthM: number; maxDiameterM: number };
+  const hull = model.hullJson;
 
   const payloads = useMemo<ScenePayload[]>(
     () =>
       payloadDrafts.map((p, i) => {
-        const own = flags.filter((f) => f.payloadIndex === i);
+        const own = flags.filter((f) => f.payloads?.some((p) => p.index === i));
         const level = own.some((f) => f.level === "stop") ? "stop" : own.some((f) => f.level === "caution") ? "caution" : "ok";
         return { key: `${i}-${p.name}`, label: p.name, shape: p.shape, lengthM: p.lengthM, widthM: p.widthM, heightM: p.heightM, offset: { x: p.offsetXM, z: p.offsetZM }, level };
       }),
     [payloadDrafts, flags],
   );
 
-  const trimWords = (deg: number | null) => (deg === null ? "has no stable trim" : `trims ${Math.abs(deg).toFixed(1)}° ${deg >= 0 ? "nose up" : "nose down"}`);
-  const summary = `${model.name}: in calm air it ${trimWords(calmTrimDeg)}; shown ${CASE_WORDS[trimCase].toLowerCase()} case at ${trimDeg.toFixed(1)}°. Mount ${formatQuantity("length", mountX, units, 3)} from the nose; centre of mass ${formatQuantity("smallLength", Math.abs(centreOfMass.x - model.buoyancyCentreXM), units)} ${centreOfMass.x >= model.buoyancyCentreXM ? "aft of" : "forward of"} the centre of buoyancy.`;
+  const trimWords = (deg: number | null) =>
+    deg === null ? "has no stable trim" : formatFixed(Math.abs(deg), 1) === "0.0" ? "trims level" : `trims ${formatFixed(Math.abs(deg), 1)}° ${deg > 0 ? "nose up" : "nose down"}`;
+  const summary = `${model.name}: in calm air it ${trimWords(calmTrimDeg)}; shown ${CASE_WORDS[trimCase].toLowerCase()} case at ${formatFixed(trimDeg, 1)}°. Mount ${formatQuantity("length", mountX, units, 3)} from the nose; centre of mass ${formatQuantity("smallLength", Math.abs(centreOfMass.x - model.buoyancyCentreXM), units)} ${centreOfMass.x >= model.buoyancyCentreXM ? "aft of" : "forward of"} the centre of buoyancy.`;
 
   return (
     <div className="space-y-2">
@@ -58,7 +60,7 @@ export function PlannerScene() {
         tetherAngleDeg={tetherAngleDeg}
         windMS={windMS}
         windLabel={windArrowLabel(trimCase, windMS, units)}
-        onMountDrag={setMountPosition}
+        onMountDrag={readOnly ? undefined : setMountPosition}
         summary={summary}
         mountSelected
       />
@@ -77,7 +79,7 @@ export function PlannerScene() {
           </button>
         ))}
         <span className="figure ml-auto" data-testid="scene-trim">
-          Trim {trimDeg.toFixed(1)}°
+          Trim {formatFixed(trimDeg, 1)}°
         </span>
       </div>
       <p className="sr-only" data-testid="scene-summary">{summary}</p>
