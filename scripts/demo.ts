@@ -30,10 +30,10 @@ const server = spawn("npx", ["next", "start", "-p", port], { stdio: ["ignore", "
 server.stdout.on("data", (chunk: Buffer) => {
   process.stdout.write(chunk);
   if (chunk.toString().includes("Ready")) {
-    const staff = DEMO_USERS.filter((u) => u.email.startsWith("customer@") || u.role !== "customer");
+    const staff = DEMO_USERS;
     console.log(`\n  Trimrail is running at ${url}\n`);
     console.log("  Demo sign-ins (password for all: " + DEMO_PASSWORD + ")");
-    for (const u of staff) console.log(`    ${u.role.padEnd(9)} ${u.email}`);
+    for (const u of staff) console.log(`    ${u.role.padEnd(9)} ${u.email.padEnd(24)} ${u.name}`);
     console.log("\n  Press Ctrl+C to stop.\n");
   }
 });
