@@ -1,4 +1,5 @@
 import type { NextConfig } from "next";
+import { SECURITY_HEADERS } from "./security-headers";
 
 const nextConfig: NextConfig = {
   reactStrictMode: true,
@@ -8,6 +9,9 @@ const nextConfig: NextConfig = {
   distDir: process.env.TRIMRAIL_DIST_DIR || ".next",
   // Lets pages answer another role with forbidden() and the 403 page.
   experimental: { authInterrupts: true },
+  async headers() {
+    return [{ source: "/:path*", headers: SECURITY_HEADERS }];
+  },
 };
 
 export default nextConfig;

@@ -15,6 +15,8 @@ export const authOptionsBase = {
       unitSystem: { type: "string", required: false, defaultValue: "metric", input: false },
     },
   },
+  // Cookies are Secure whenever the app's public URL is https (behind a TLS proxy too).
+  advanced: { useSecureCookies: (process.env.BETTER_AUTH_URL ?? "").startsWith("https://") },
   rateLimit: {
     enabled: true,
     storage: "database",

@@ -20,6 +20,8 @@ export interface AppServer {
   databaseUrl: string;
   /** Where the app's own SMTP fake keeps every message it sends, as .eml files. */
   mailDir: string;
+  /** The process group of the server (npx and the Next server under it), for memory checks. */
+  serverPid: number;
   stop: () => Promise<void>;
 }
 
@@ -99,6 +101,7 @@ export async function startAppServer({ build, databaseUrl: existingDatabaseUrl }
     baseURL,
     databaseUrl,
     mailDir: mail.dir,
+    serverPid: server.pid ?? 0,
     stop: async () => {
       if (server.pid) {
         try {

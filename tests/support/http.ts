@@ -44,6 +44,11 @@ export class ApiClient {
     return this.request("POST", "/api/auth/sign-in/email", { email, password });
   }
 
+  /** The Cookie header this client sends, for requests made with other HTTP clients. */
+  cookieHeader(): string {
+    return [...this.cookies].map(([k, v]) => `${k}=${v}`).join("; ");
+  }
+
   hasSession(): boolean {
     return [...this.cookies.keys()].some((k) => k.includes("session_token"));
   }

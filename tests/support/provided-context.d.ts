@@ -5,5 +5,6 @@ declare module "vitest" {
     baseURL: string;
     databaseUrl: string;
     mailDir: string;
+    serverPid: number;
   }
 }
