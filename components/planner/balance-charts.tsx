@@ -52,7 +52,7 @@ export function BalanceCharts() {
               <CartesianGrid stroke="#e6e2d9" />
               <XAxis dataKey="speed" type="number" domain={[0, "dataMax"]} tick={{ fontSize: 11 }} />
               <YAxis domain={[0, 90]} ticks={[0, 30, 45, 60, 90]} tick={{ fontSize: 11 }} unit="°" />
-              <ReferenceLine y={cautionDeg} stroke="#b7791f" strokeDasharray="4 3" />
+              <ReferenceLine y={cautionDeg} stroke="#8f5b0a" strokeDasharray="4 3" />
               <Tooltip formatter={(v) => [`${v}°`, "tether angle"]} labelFormatter={(l) => `${l} ${unitOf("speed", units)}`} />
               <Line type="monotone" dataKey="angle" stroke="#1d7f7a" dot={false} isAnimationActive={false} connectNulls={false} />
             </LineChart>

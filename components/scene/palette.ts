@@ -14,4 +14,4 @@ export const GROUND = "#ebe7de";
 export const GRID_MAJOR = "#d9d5cc";
 export const GRID_MINOR = "#e4e0d7";
 export const BUOYANCY = "#2f5d8a";
-export const FLAG_COLOURS = { ok: "#2e7d4f", caution: "#b7791f", stop: "#b83232" } as const;
+export const FLAG_COLOURS = { ok: "#2e7d4f", caution: "#8f5b0a", stop: "#b83232" } as const;
