@@ -1,16 +1,37 @@
 import { getSessionCookie } from "better-auth/cookies";
 import { NextResponse, type NextRequest } from "next/server";
 
-// A convenience only: strangers on an app page go to sign-in with a way back. Every page, route and
-// action still checks the session and the role on the server (lib/auth/guard.ts).
+const APP_PAGES = ["/setups", "/review", "/workshop", "/insight", "/dev"];
+
+/** Whether every percent-escape in the path decodes: Next would answer a broken one with a 500. */
+function decodes(pathname: string): boolean {
+  try {
+    for (const segment of pathname.split("/")) decodeURIComponent(segment);
+    return true;
+  } catch {
+    return false;
+  }
+}
+
+// Two conveniences, never the check: a path that cannot be decoded is a plain 404 (nothing can
+// live there), and strangers on an app page go to sign-in with a way back. Every page and route
+// still checks the session and the role on the server (lib/server/route.ts, lib/auth/guard.ts).
 export function proxy(request: NextRequest): NextResponse {
+  const { pathname } = request.nextUrl;
+  if (!decodes(pathname)) {
+    return pathname.startsWith("/api/")
+      ? NextResponse.json({ error: { code: "not_found", message: "Nothing is at this address." } }, { status: 404 })
+      : new NextResponse("Not found: the address is not valid.", { status: 404, headers: { "content-type": "text/plain; charset=utf-8" } });
+  }
+  if (!APP_PAGES.some((prefix) => pathname === prefix || pathname.startsWith(`${prefix}/`))) return NextResponse.next();
   if (getSessionCookie(request)) return NextResponse.next();
   const url = request.nextUrl.clone();
   url.pathname = "/sign-in";
-  url.search = `?next=${encodeURIComponent(request.nextUrl.pathname + request.nextUrl.search)}`;
+  url.search = `?next=${encodeURIComponent(pathname + request.nextUrl.search)}`;
   return NextResponse.redirect(url);
 }
 
 export const config = {
-  matcher: ["/setups/:path*", "/review/:path*", "/workshop/:path*", "/insight/:path*"],
+  // Pages of the app and the API; never Next's own files or the models.
+  matcher: ["/setups/:path*", "/review/:path*", "/workshop/:path*", "/insight/:path*", "/dev/:path*", "/api/:path*"],
 };

@@ -21,10 +21,11 @@ function appOrigin(): string | null {
  */
 export function crossSiteRefusal(request: Request): AppError | null {
   if (SAFE_METHODS.has(request.method)) return null;
+  const refused: AppError = { code: "forbidden", message: "Requests from other sites are refused." };
+  // Either header saying "another site" is enough to refuse.
+  const site = request.headers.get("sec-fetch-site");
+  if (site !== null && site !== "same-origin" && site !== "none") return refused;
   const origin = request.headers.get("origin");
   const expected = appOrigin() ?? new URL(request.url).origin;
-  if (origin !== null) return origin === expected ? null : { code: "forbidden", message: "Requests from other sites are refused." };
-  const site = request.headers.get("sec-fetch-site");
-  if (site !== null && site !== "same-origin" && site !== "none") return { code: "forbidden", message: "Requests from other sites are refused." };
-  return null;
+  return origin !== null && origin !== expected ? refused : null;
 }

@@ -44,6 +44,7 @@ describe("cross-site writes", () => {
     expect((await maker.request("PUT", "/api/users/usr-support-2/role", JSON.stringify({ role: "customer" }), evil)).status).toBe(403);
     expect((await customer.request("DELETE", "/api/setups/set-wren-whip", undefined, { origin: "http://evil.example" })).status).toBe(403);
     expect((await customer.request("POST", "/api/setups", JSON.stringify({ modelId: "mdl-ridge-06" }), { origin: baseURL, "sec-fetch-site": "cross-site", "content-type": "application/json" })).status).toBe(403);
+    expect((await customer.request("POST", "/api/setups", JSON.stringify({ modelId: "mdl-ridge-06" }), { "sec-fetch-site": "same-site", "content-type": "application/json" })).status).toBe(403);
     expect(await count("setups")).toBe(setupsBefore);
     expect(await count("audit_log")).toBe(auditBefore);
     const role = await database.client.execute("select role from user where id = 'usr-support-2'");

@@ -22,7 +22,7 @@ describe("Insight in Chromium", () => {
     await signIn.open("/insight");
     await signIn.signIn("maker@trimrail.test", DEMO_PASSWORD);
     await page.waitForURL(/\/insight$/);
-    for (const id of SECTIONS) await page.getByTestId(`${id}-chart`).locator(".recharts-surface").waitFor();
+    for (const id of SECTIONS) await page.getByTestId(`${id}-chart`).locator(".recharts-wrapper").waitFor();
     await screenshot(page, "insight-1-charts");
 
     await page.getByTestId("insight-templates-toggle").click();
