@@ -1,3 +1,4 @@
+import { hashPassword } from "better-auth/crypto";
 import { sql } from "drizzle-orm";
 import { evaluateBalance, worstLevel } from "../lib/balance";
 import { toBalanceInput, type SetupCatalogue } from "../lib/setups/balance-input";
@@ -6,7 +7,7 @@ import type { SetupStatus } from "../lib/domain";
 import type { Database } from "./index";
 import * as t from "./schema";
 import { demoModelRow } from "./seed";
-import { DEMO_ADAPTERS, DEMO_MODELS, DEMO_MOUNTS, DEMO_TEMPLATES } from "./seed-data";
+import { DEMO_ADAPTERS, DEMO_MODELS, DEMO_MOUNTS, DEMO_PASSWORD, DEMO_TEMPLATES } from "./seed-data";
 import { columnsFromDraft, payloadRowsFromDraft, resultRows, summaryColumns } from "./setup-columns";
 
 // A database at scale for benchmarks: many invented customers and their setups in every status,
@@ -37,6 +38,9 @@ export interface LargeSeedOptions {
   /** Called after every batch with the number written so far. */
   onProgress?: (written: number) => void;
 }
+
+/** The invented customer whose account can sign in: `large-0@customers.trimrail.test`. */
+export const LARGE_SIGN_IN_EMAIL = "large-0@customers.trimrail.test";
 
 export async function seedLarge(db: Database, { setups, customers, onProgress }: LargeSeedOptions): Promise<{ customers: number; setups: number }> {
   const rand = random(20261202);
@@ -109,6 +113,14 @@ export async function seedLarge(db: Database, { setups, customers, onProgress }:
       for (let k = 0; k < flagRows.length; k += 2000) await tx.insert(t.setupFlags).values(flagRows.slice(k, k + 2000)).onConflictDoNothing();
     });
     onProgress?.(start + size);
+  }
+  // One of them can sign in (the demo password), so the benchmarks can open a long Setups list.
+  const first = customerIds[0];
+  if (first) {
+    await db
+      .insert(t.account)
+      .values({ id: `acc-${first}`, accountId: first, providerId: "credential", userId: first, password: await hashPassword(DEMO_PASSWORD) })
+      .onConflictDoNothing();
   }
   await db.run(sql`analyze`);
   return { customers, setups };
