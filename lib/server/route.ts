@@ -25,28 +25,46 @@ export interface RouteSpec<P, Q, B> {
   status?: 200 | 201 | 204;
   /** "file": the core returns a FileBody and the answer is those bytes, not JSON. */
   respond?: "json" | "file";
+  /**
+   * The core reads the request body itself, as a stream (a multipart upload; leave `body` unset).
+   * Its error answers then carry `Connection: close`: when it refuses part-way (too large, wrong
+   * type), the server hangs up rather than reading the rest of the body.
+   */
+  streamsBody?: boolean;
 }
 
 /** What a core returns for a route that answers with a file. */
 export interface FileBody {
-  bytes: Uint8Array;
+  /** The whole file, or a stream of it (then give `sizeBytes` when it is known). */
+  bytes: Uint8Array | ReadableStream<Uint8Array>;
+  sizeBytes?: number | null;
   contentType: string;
   fileName: string;
   /** "attachment" makes the browser download it; "inline" may show it. */
   disposition: "attachment" | "inline";
+  /** Unset: "private, no-store". A file that never changes under its address may be kept longer. */
+  cacheControl?: string;
 }
 
 function fileResponse(file: FileBody): Response {
   const name = file.fileName.replace(/[^\w.-]+/g, "_");
+  const length = file.bytes instanceof Uint8Array ? file.bytes.byteLength : file.sizeBytes;
   return new Response(file.bytes as BodyInit, {
     headers: {
       "content-type": file.contentType,
-      "content-length": String(file.bytes.byteLength),
+      ...(length === null || length === undefined ? {} : { "content-length": String(length) }),
       "content-disposition": `${file.disposition}; filename="${name}"`,
       "x-content-type-options": "nosniff",
-      "cache-control": "private, no-store",
+      "cache-control": file.cacheControl ?? "private, no-store",
     },
   });
+}
+
+/** An error answer to a request whose body may still be arriving: the connection is closed after it. */
+function closingErrorResponse(error: AppError): Response {
+  const response = errorResponse(error);
+  response.headers.set("connection", "close");
+  return response;
 }
 
 export interface RouteArgs<P, Q, B> {
@@ -95,19 +113,21 @@ export function route<T, P = undefined, Q = undefined, B = undefined>(
   spec: RouteSpec<P, Q, B>,
   handler: (args: RouteArgs<P, Q, B>) => Promise<Result<T>>,
 ): (request: Request, context: NextRouteContext) => Promise<Response> {
+  // A refusal of a streamed body closes the connection, whatever step refused it.
+  const refuse = spec.streamsBody ? closingErrorResponse : errorResponse;
   return async (request, context) => {
     try {
       const input = await parseRequest(spec, request, context);
-      if (!input.ok) return errorResponse(input.error);
+      if (!input.ok) return refuse(input.error);
       const viewer = authorise(await getViewer(), spec.roles);
-      if (!viewer.ok) return errorResponse(viewer.error);
+      if (!viewer.ok) return refuse(viewer.error);
       const result = await handler({ viewer: viewer.data, request, ...input.data });
-      if (!result.ok) return errorResponse(result.error);
+      if (!result.ok) return refuse(result.error);
       if (spec.status === 204) return new Response(null, { status: 204 });
       if (spec.respond === "file") return fileResponse(result.data as FileBody);
       return Response.json(result.data, { status: spec.status ?? 200 });
     } catch (error) {
-      return errorResponse(internalError(error, `${request.method} ${new URL(request.url).pathname}`));
+      return refuse(internalError(error, `${request.method} ${new URL(request.url).pathname}`));
     }
   };
 }
