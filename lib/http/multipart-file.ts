@@ -82,7 +82,6 @@ function streamToFile<H>(body: ReadableStream<Uint8Array>, contentType: string, 
         // with `Connection: close`, so the server hangs up instead of draining the rest.
         source.unpipe(parser);
         source.pause();
-        parser.destroy();
       }
       resolve(result);
     };
