@@ -11,8 +11,8 @@ import { fail, ok, type AppError, type Result } from "@/lib/errors";
 
 // One file from a multipart/form-data body, streamed: the bytes go to a temporary file as they
 // arrive, the size cap is checked on every chunk, and the file's first bytes are judged as soon as
-// they are in. A refusal stops reading the body at once, so a huge or wrong upload costs neither
-// memory nor the time to receive the rest.
+// they are in. A refusal answers at once and stops parsing and storing: nothing of a huge or wrong
+// upload is kept in memory or on disk.
 
 export interface ReceivedFile {
   /** The name the sender gave (display only; never part of a storage key or a path). */
@@ -35,6 +35,31 @@ export interface ReceiveFileOptions<H> {
 /** Multipart framing around one file: boundaries and part headers, far below this. */
 const MULTIPART_OVERHEAD_BYTES = 16 * 1024;
 
+/**
+ * After a refusal the answer goes out at once, but the client may still be sending. Dropping the
+ * connection there and then makes the kernel reset it, and a reset can wipe the answer from the
+ * client's buffer before it is read (the "lingering close" problem of HTTP servers). So the rest
+ * is read and thrown away for a short while — never kept — and then the connection is dropped:
+ * at most LINGER_MS, and reading stops after LINGER_MAX_BYTES. A client that finishes sending
+ * within that keeps a clean connection.
+ */
+const LINGER_MS = 1_000;
+const LINGER_MAX_BYTES = 16 * 1024 * 1024;
+
+function discardThenHangUp(source: Readable): void {
+  let discarded = 0;
+  const timer = setTimeout(() => source.destroy(), LINGER_MS);
+  timer.unref();
+  source.once("end", () => clearTimeout(timer));
+  source.once("close", () => clearTimeout(timer));
+  source.on("error", () => clearTimeout(timer));
+  source.on("data", (chunk: Buffer) => {
+    discarded += chunk.byteLength;
+    if (discarded > LINGER_MAX_BYTES) source.pause();
+  });
+  source.resume();
+}
+
 /** Receives the body's one file, hands it with the head's verdict to `use`, and removes the temporary copy afterwards. */
 export async function receiveSingleFile<H, T>(
   request: Request,
@@ -45,13 +70,17 @@ export async function receiveSingleFile<H, T>(
   if (!/^multipart\/form-data\s*;/i.test(contentType) || !request.body) {
     return fail("bad_request", "Send the file as multipart/form-data, one file per request.");
   }
-  // A declared length already past the cap is refused before a byte is read.
+  const source = Readable.fromWeb(request.body as NodeReadableStream<Uint8Array>);
+  // A declared length already past the cap is refused before a byte of the file is looked at.
   const declared = Number(request.headers.get("content-length") ?? "NaN");
-  if (Number.isFinite(declared) && declared > options.maxBytes + MULTIPART_OVERHEAD_BYTES) return fail("payload_too_large", options.tooLargeMessage);
+  if (Number.isFinite(declared) && declared > options.maxBytes + MULTIPART_OVERHEAD_BYTES) {
+    discardThenHangUp(source);
+    return fail("payload_too_large", options.tooLargeMessage);
+  }
 
   const dir = await mkdtemp(path.join(os.tmpdir(), "trimrail-upload-"));
   try {
-    const received = await streamToFile(request.body, contentType, path.join(dir, "upload"), options);
+    const received = await streamToFile(source, contentType, path.join(dir, "upload"), options);
     if (!received.ok) return received;
     return await use(received.data.file, received.data.head);
   } finally {
@@ -62,13 +91,13 @@ export async function receiveSingleFile<H, T>(
 type Outcome<H> = Result<{ file: ReceivedFile; head: H }>;
 type Refusal = { ok: false; error: AppError };
 
-function streamToFile<H>(body: ReadableStream<Uint8Array>, contentType: string, filePath: string, options: ReceiveFileOptions<H>): Promise<Outcome<H>> {
+function streamToFile<H>(source: Readable, contentType: string, filePath: string, options: ReceiveFileOptions<H>): Promise<Outcome<H>> {
   return new Promise((resolve) => {
-    const source = Readable.fromWeb(body as NodeReadableStream<Uint8Array>);
     let parser: busboy.Busboy;
     try {
       parser = busboy({ headers: { "content-type": contentType }, limits: { files: 1, fileSize: options.maxBytes, fields: 4, parts: 5 }, defParamCharset: "utf8" });
     } catch {
+      discardThenHangUp(source);
       resolve(fail("bad_request", "The multipart body has no boundary."));
       return;
     }
@@ -78,10 +107,9 @@ function streamToFile<H>(body: ReadableStream<Uint8Array>, contentType: string, 
       if (settled) return;
       settled = true;
       if (!result.ok) {
-        // Stop reading: no more of the body is pulled from the socket or parsed. The route answers
-        // with `Connection: close`, so the server hangs up instead of draining the rest.
+        // Nothing more is parsed or stored; what still arrives is thrown away until the hang-up.
         source.unpipe(parser);
-        source.pause();
+        discardThenHangUp(source);
       }
       resolve(result);
     };

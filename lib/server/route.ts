@@ -25,12 +25,6 @@ export interface RouteSpec<P, Q, B> {
   status?: 200 | 201 | 204;
   /** "file": the core returns a FileBody and the answer is those bytes, not JSON. */
   respond?: "json" | "file";
-  /**
-   * The core reads the request body itself, as a stream (a multipart upload; leave `body` unset).
-   * Its error answers then carry `Connection: close`: when it refuses part-way (too large, wrong
-   * type), the server hangs up rather than reading the rest of the body.
-   */
-  streamsBody?: boolean;
 }
 
 /** What a core returns for a route that answers with a file. */
@@ -58,13 +52,6 @@ function fileResponse(file: FileBody): Response {
       "cache-control": file.cacheControl ?? "private, no-store",
     },
   });
-}
-
-/** An error answer to a request whose body may still be arriving: the connection is closed after it. */
-function closingErrorResponse(error: AppError): Response {
-  const response = errorResponse(error);
-  response.headers.set("connection", "close");
-  return response;
 }
 
 export interface RouteArgs<P, Q, B> {
@@ -113,21 +100,19 @@ export function route<T, P = undefined, Q = undefined, B = undefined>(
   spec: RouteSpec<P, Q, B>,
   handler: (args: RouteArgs<P, Q, B>) => Promise<Result<T>>,
 ): (request: Request, context: NextRouteContext) => Promise<Response> {
-  // A refusal of a streamed body closes the connection, whatever step refused it.
-  const refuse = spec.streamsBody ? closingErrorResponse : errorResponse;
   return async (request, context) => {
     try {
       const input = await parseRequest(spec, request, context);
-      if (!input.ok) return refuse(input.error);
+      if (!input.ok) return errorResponse(input.error);
       const viewer = authorise(await getViewer(), spec.roles);
-      if (!viewer.ok) return refuse(viewer.error);
+      if (!viewer.ok) return errorResponse(viewer.error);
       const result = await handler({ viewer: viewer.data, request, ...input.data });
-      if (!result.ok) return refuse(result.error);
+      if (!result.ok) return errorResponse(result.error);
       if (spec.status === 204) return new Response(null, { status: 204 });
       if (spec.respond === "file") return fileResponse(result.data as FileBody);
       return Response.json(result.data, { status: spec.status ?? 200 });
     } catch (error) {
-      return refuse(internalError(error, `${request.method} ${new URL(request.url).pathname}`));
+      return errorResponse(internalError(error, `${request.method} ${new URL(request.url).pathname}`));
     }
   };
 }

@@ -36,6 +36,21 @@ export class ApiClient {
     return response;
   }
 
+  /** The session cookies, for a request made without this client (e.g. a raw streamed upload). */
+  cookieHeader(): string {
+    return [...this.cookies].map(([k, v]) => `${k}=${v}`).join("; ");
+  }
+
+  /** A multipart upload through fetch, which sends Content-Length. */
+  async upload(pathname: string, form: FormData): Promise<Response> {
+    return fetch(new URL(pathname, this.baseURL), {
+      method: "POST",
+      headers: { origin: this.baseURL, "x-forwarded-for": this.address, ...(this.cookies.size ? { cookie: this.cookieHeader() } : {}) },
+      body: form,
+      redirect: "manual",
+    });
+  }
+
   get(pathname: string): Promise<Response> {
     return this.request("GET", pathname);
   }

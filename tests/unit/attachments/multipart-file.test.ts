@@ -12,6 +12,8 @@ const CHUNK_BYTES = 16 * 1024;
 interface CountingBody {
   body: ReadableStream<Uint8Array>;
   pulledBytes: () => number;
+  /** Whether the reader gave up on the body (the server hung up). */
+  cancelled: () => boolean;
 }
 
 /** A multipart body of one file of `fileBytes` bytes (first bytes `start`), produced only as it is read. */
@@ -19,10 +21,13 @@ function countingMultipart(fileBytes: number, start: Buffer, fileName = "photo.j
   const head = Buffer.from(`--${BOUNDARY}\r\ncontent-disposition: form-data; name="file"; filename="${fileName}"\r\ncontent-type: image/jpeg\r\n\r\n`);
   const tail = Buffer.from(`\r\n--${BOUNDARY}--\r\n`);
   let pulled = 0;
+  let cancelled = false;
   let fileSent = 0;
   let phase: "head" | "file" | "tail" | "done" = "head";
   const body = new ReadableStream<Uint8Array>({
-    pull(controller) {
+    // One chunk per turn of the event loop, as from a socket: a reader that stops is seen to stop.
+    async pull(controller) {
+      await new Promise((r) => setImmediate(r));
       let chunk: Buffer;
       if (phase === "head") {
         chunk = head;
@@ -43,8 +48,11 @@ function countingMultipart(fileBytes: number, start: Buffer, fileName = "photo.j
       pulled += chunk.length;
       controller.enqueue(new Uint8Array(chunk));
     },
+    cancel() {
+      cancelled = true;
+    },
   });
-  return { body, pulledBytes: () => pulled };
+  return { body, pulledBytes: () => pulled, cancelled: () => cancelled };
 }
 
 const requestWith = (body: ReadableStream<Uint8Array>) =>
@@ -71,19 +79,23 @@ describe("receiveSingleFile", () => {
     expect(result.data.verdict).toBe("jpeg");
   });
 
-  it("returns 413 once the cap passes and stops pulling the body there", async () => {
-    const counting = countingMultipart(20 * MAX_BYTES, JPEG_START);
+  it("returns 413 as the cap passes, keeps nothing, and hangs up after a short discard", async () => {
+    const counting = countingMultipart(40 * MAX_BYTES, JPEG_START);
     const result = await receiveSingleFile(requestWith(counting.body), options, async () => ok(null));
-    expect(result).toMatchObject({ ok: false, error: { code: "payload_too_large" } });
-    // Read up to the cap plus what the stream queues hold, never the remaining 19 MB.
+    // The answer comes at the cap (plus what the stream queues held), not at the end of the body.
     expect(counting.pulledBytes()).toBeLessThan(MAX_BYTES + 256 * 1024);
+    expect(result).toMatchObject({ ok: false, error: { code: "payload_too_large" } });
+    // Then at most LINGER_MAX_BYTES (16 MB) are read and thrown away, and the body is given up within a second.
+    await new Promise((r) => setTimeout(r, 1_300));
+    expect(counting.cancelled()).toBe(true);
+    expect(counting.pulledBytes()).toBeLessThan(MAX_BYTES + 16 * 1024 * 1024 + 512 * 1024);
   });
 
-  it("returns 415 from the first bytes and stops pulling the body there", async () => {
-    const counting = countingMultipart(20 * MAX_BYTES, Buffer.from("<!doctype html><html>"), "innocent.png");
+  it("returns 415 from the first bytes, before the rest of the body is read", async () => {
+    const counting = countingMultipart(40 * MAX_BYTES, Buffer.from("<!doctype html><html>"), "innocent.png");
     const result = await receiveSingleFile(requestWith(counting.body), options, async () => ok(null));
-    expect(result).toMatchObject({ ok: false, error: { code: "unsupported_media_type" } });
     expect(counting.pulledBytes()).toBeLessThan(256 * 1024);
+    expect(result).toMatchObject({ ok: false, error: { code: "unsupported_media_type" } });
   });
 
   it("returns 413 before reading when the declared length is already past the cap", async () => {

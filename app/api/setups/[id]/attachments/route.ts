@@ -10,6 +10,6 @@ const notFoundMessage = SETUP_NOT_FOUND;
 export const GET = route({ params, notFoundMessage }, ({ viewer, params: { id } }) => listAttachments({ viewer, setupId: id }));
 
 /** POST /api/setups/:id/attachments — one file as multipart/form-data, streamed (≤ 10 MB, ≤ 20 per setup); the owner only. */
-export const POST = route({ params, notFoundMessage, status: 201, streamsBody: true }, ({ viewer, params: { id }, request }) =>
+export const POST = route({ params, notFoundMessage, status: 201 }, ({ viewer, params: { id }, request }) =>
   addAttachment({ viewer, setupId: id, request }),
 );
