@@ -24,3 +24,19 @@ export const ATTACHMENT_RULES_TEXT = "Photos (JPEG, PNG, WebP) and datasheets (P
 
 /** The longest file name kept for display; the stored object's key never contains it. */
 export const ATTACHMENT_NAME_MAX_LENGTH = 160;
+
+/** An attachment as the API answers it (GET /api/setups/:id/attachments, POST's 201). */
+export interface AttachmentView {
+  id: string;
+  setupId: string;
+  fileName: string;
+  contentType: AttachmentContentType;
+  kind: AttachmentKind;
+  sizeBytes: number;
+  /** ISO 8601. */
+  createdAt: string;
+  /** The file itself. */
+  url: string;
+  /** A small WebP of a photo; null for a PDF. */
+  thumbnailUrl: string | null;
+}

@@ -15,12 +15,14 @@ import {
   attachmentKind,
   isAttachmentContentType,
   type AttachmentContentType,
-  type AttachmentKind,
+  type AttachmentView,
 } from "@/lib/domain";
 import { fail, ok, type AppError, type Result } from "@/lib/errors";
 import { receiveSingleFile, type ReceivedFile } from "@/lib/http/multipart-file";
 import { getObjectStore, type ObjectStore } from "@/lib/storage/object-store";
 import type { FileBody } from "./route";
+
+export type { AttachmentView };
 import { SETUP_NOT_FOUND } from "./setups";
 
 // Photos and datasheets of a setup. The same rule as the setup itself: its owner adds and deletes;
@@ -29,20 +31,6 @@ import { SETUP_NOT_FOUND } from "./setups";
 // keep the two in step (an object whose row could not be written is deleted again).
 
 export const ATTACHMENT_NOT_FOUND = "No such file among the setups you can see.";
-
-export interface AttachmentView {
-  id: string;
-  setupId: string;
-  fileName: string;
-  contentType: AttachmentContentType;
-  kind: AttachmentKind;
-  sizeBytes: number;
-  createdAt: string;
-  /** The file itself. */
-  url: string;
-  /** A small WebP of a photo; null for a PDF. */
-  thumbnailUrl: string | null;
-}
 
 /** Where a photo's thumbnail is kept: beside the photo, under a key made from its own. */
 export const thumbnailKeyFor = (storageKey: string) => `${storageKey}.thumb.webp`;
@@ -92,7 +80,6 @@ export async function listAttachments({ viewer, setupId }: { viewer: Viewer; set
 /** The name kept for display: the last path segment, printable characters only, not too long. */
 export function displayFileName(given: string): string {
   const base = given.split(/[\\/]/).pop() ?? "";
-  // eslint-disable-next-line no-control-regex
   const clean = base.replace(/[\u0000-\u001f\u007f]+/g, "").replace(/\s+/g, " ").trim();
   return clean.slice(-ATTACHMENT_NAME_MAX_LENGTH) || "attachment";
 }

@@ -126,3 +126,32 @@ export function exifHasGps(exif: Buffer | undefined): boolean {
 export async function pixels(image: Buffer | Uint8Array): Promise<Buffer> {
   return sharp(image).raw().toBuffer();
 }
+
+/**
+ * A made-up "photo" of a payload on its mount (an SVG scene rendered by sharp, with some grain so
+ * it is photo-sized, ~1 MB), carrying GPS EXIF as a phone's would.
+ */
+export async function payloadPhoto({ width = 1800, height = 1200 }: { width?: number; height?: number } = {}): Promise<Buffer> {
+  const svg = `<svg xmlns="http://www.w3.org/2000/svg" width="${width}" height="${height}" viewBox="0 0 180 120">
+    <defs><linearGradient id="sky" x1="0" y1="0" x2="0" y2="1"><stop offset="0" stop-color="#b9cfdc"/><stop offset="1" stop-color="#e9eef0"/></linearGradient></defs>
+    <rect width="180" height="120" fill="url(#sky)"/>
+    <rect y="92" width="180" height="28" fill="#7d8f6a"/>
+    <ellipse cx="90" cy="38" rx="62" ry="20" fill="#c9ccd0" stroke="#8c9299" stroke-width="1"/>
+    <path d="M40 38 Q90 30 140 38" fill="none" stroke="#8c9299" stroke-width="0.6"/>
+    <rect x="78" y="56" width="24" height="4" rx="1" fill="#4c5560"/>
+    <rect x="82" y="61" width="16" height="12" rx="1.5" fill="#1d7f7a"/>
+    <circle cx="90" cy="67" r="3" fill="#14202e"/>
+    <line x1="90" y1="73" x2="90" y2="120" stroke="#3a3f45" stroke-width="0.5"/>
+  </svg>`;
+  const scene = await sharp(Buffer.from(svg)).removeAlpha().raw().toBuffer({ resolveWithObject: true });
+  const grain = Buffer.from(scene.data);
+  let seed = 7;
+  for (let i = 0; i < grain.length; i++) {
+    seed = (seed * 1103515245 + 12345) & 0x7fffffff; // a fixed LCG: the same grain every run
+    grain[i] = Math.max(0, Math.min(255, grain[i] + ((seed >> 16) % 17) - 8));
+  }
+  return sharp(grain, { raw: { width: scene.info.width, height: scene.info.height, channels: scene.info.channels } })
+    .jpeg({ quality: 90 })
+    .withExif({ IFD0: { Make: "Fixture rig", Software: "trimrail-tests" }, IFD3: FIXTURE_GPS })
+    .toBuffer();
+}
