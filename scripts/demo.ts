@@ -3,6 +3,7 @@ import { mkdirSync } from "node:fs";
 import { DEMO_PASSWORD, DEMO_USERS } from "../db/seed-data";
 import { ensureLocalEnv } from "./local-env";
 import { startLocalMail } from "./local-mail";
+import { startLocalStorage } from "./local-storage";
 
 // One command for a fresh clone: secret, database, migrations, demo data, production build, serve.
 const port = process.env.PORT ?? "3000";
@@ -26,6 +27,7 @@ step("seeding the demo data", "npx", ["tsx", "scripts/seed.ts"]);
 if (process.env.TRIMRAIL_SKIP_BUILD !== "1") step("building the app (about a minute)", "npx", ["next", "build"]);
 
 await startLocalMail();
+await startLocalStorage();
 const server = spawn("npx", ["next", "start", "-p", port], { stdio: ["ignore", "pipe", "inherit"], env: process.env });
 server.stdout.on("data", (chunk: Buffer) => {
   process.stdout.write(chunk);

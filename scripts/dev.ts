@@ -2,6 +2,7 @@ import { spawn, spawnSync } from "node:child_process";
 import { mkdirSync } from "node:fs";
 import { ensureLocalEnv } from "./local-env";
 import { startLocalMail } from "./local-mail";
+import { startLocalStorage } from "./local-storage";
 
 // `next dev` with the same preparation as the demo (secret, migrations, demo data).
 // Next would otherwise try to send usage data over the internet.
@@ -13,5 +14,6 @@ for (const script of ["scripts/migrate.ts", "scripts/seed.ts"]) {
   if (result.status !== 0) process.exit(result.status ?? 1);
 }
 await startLocalMail();
+await startLocalStorage();
 const server = spawn("npx", ["next", "dev", "-p", process.env.PORT ?? "3000"], { stdio: "inherit", env: process.env });
 server.on("exit", (code) => process.exit(code ?? 0));

@@ -8,6 +8,8 @@ const ACTIONS: Record<string, string> = {
   "setup.submit": "submitted it for review",
   "setup.decision": "decided",
   "setup.delete": "deleted it",
+  "setup.attachment.add": "attached a file",
+  "setup.attachment.delete": "removed a file",
 };
 
 const statusWord = (value: unknown) => (typeof value === "string" && value in STATUS_WORDS ? STATUS_WORDS[value as SetupStatus] : null);
@@ -30,6 +32,7 @@ export function HistoryList({ entries }: { entries: HistoryEntry[] }) {
                 <time className="figure text-muted" dateTime={e.at.toISOString()}>{WHEN.format(e.at)}</time> · {e.actorName ?? "a removed account"} {ACTIONS[e.action] ?? e.action}
                 {version !== null && <> (version {version})</>}
                 {from && to && from !== to && <>: {from} → {to}</>}
+                {typeof e.detail.fileName === "string" && <>: {e.detail.fileName}</>}
                 {typeof e.detail.reason === "string" && e.detail.reason && <span className="block pl-4 text-muted">“{e.detail.reason}”</span>}
               </li>
             );

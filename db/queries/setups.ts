@@ -6,6 +6,7 @@ import { envelopeModels, setupFlags, setupPayloads, setupResults, setups, user, 
 import { columnsFromDraft, draftFromRows, payloadRowsFromDraft, resultRows, summaryColumns } from "@/db/setup-columns";
 import type { BalanceResult } from "@/lib/balance";
 import { nextStatus, type FlagLevel, type Role, type SetupStatus } from "@/lib/domain";
+import { deleteAttachmentRowsOfSetup } from "./attachments";
 import { recordAudit } from "./audit";
 import { enqueueMail, type OutgoingMail } from "./mail";
 import type { SetupDraft } from "@/lib/setups/setup-draft";
@@ -217,13 +218,16 @@ export async function markSetupSubmitted({
 }
 
 /** Deletes one of the owner's setups (its payloads, comments and decisions go with it); false when it is not theirs. */
-export async function deleteSetup({ id, ownerId }: { id: string; ownerId: string }): Promise<boolean> {
+/** Deletes the owner's setup and its rows; null when there is none, else the storage keys of its attachments (their objects are the caller's to delete after the commit). */
+export async function deleteSetup({ id, ownerId }: { id: string; ownerId: string }): Promise<{ storageKeys: string[] } | null> {
   return getDb().transaction(async (tx) => {
+    const storageKeys = await deleteAttachmentRowsOfSetup(tx, { setupId: id, ownerId });
     const deleted = await tx
       .delete(setups)
       .where(and(eq(setups.id, id), eq(setups.ownerId, ownerId)))
       .returning({ id: setups.id });
-    if (deleted.length) await audit(tx, ownerId, "setup.delete", id);
-    return deleted.length > 0;
+    if (!deleted.length) return null;
+    await audit(tx, ownerId, "setup.delete", id);
+    return { storageKeys };
   });
 }

@@ -1,7 +1,8 @@
 import type { BalanceResult } from "@/lib/balance";
-import type { DecisionOutcome, FlagCode, FlagLevel, PayloadCategory, ReviewReasonCode, Role, SetupStatus, UnitSystem } from "@/lib/domain";
+import type { AttachmentView, DecisionOutcome, FlagCode, FlagLevel, PayloadCategory, ReviewReasonCode, Role, SetupStatus, UnitSystem } from "@/lib/domain";
 import type { AppError } from "@/lib/errors";
 import type { SetupDraft } from "@/lib/setups/setup-draft";
+import { postWithUploadProgress, type UploadProgress } from "./upload-with-progress";
 
 // The UI's one way to change anything: the same JSON route handlers that scripts use, called from
 // TanStack Query mutations. A failure arrives as an ApiError with the server's typed error.
@@ -98,3 +99,23 @@ export interface InsightData {
 }
 
 export const fetchInsight = (query: string) => call<InsightData>("GET", `/api/insight${query ? `?${query}` : ""}`);
+// ---------------------------------------------------------------- attachments
+
+export const fetchAttachments = (setupId: string) => call<{ attachments: AttachmentView[] }>("GET", setupUrl(setupId, "/attachments"));
+
+export const deleteAttachmentRequest = (id: string) => call<null>("DELETE", `/api/attachments/${encodeURIComponent(id)}`);
+
+/** One file as multipart/form-data, with upload progress; a refusal arrives as an ApiError like any other. */
+export async function uploadAttachmentRequest(setupId: string, file: File, options: { onProgress?: (progress: UploadProgress) => void; signal?: AbortSignal } = {}): Promise<AttachmentView> {
+  const form = new FormData();
+  form.append("file", file, file.name);
+  const answer = await postWithUploadProgress(setupUrl(setupId, "/attachments"), form, options);
+  let data: { error?: AppError } & Partial<AttachmentView> = {};
+  try {
+    data = JSON.parse(answer.text) as typeof data;
+  } catch {
+    // not JSON (e.g. a proxy's error page): the status speaks
+  }
+  if (answer.status < 200 || answer.status >= 300) throw new ApiError(answer.status, data.error ?? { code: "internal", message: `The server answered ${answer.status}.` });
+  return data as AttachmentView;
+}

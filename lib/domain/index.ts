@@ -1,3 +1,4 @@
+export * from "./attachments";
 export * from "./catalogue";
 export * from "./flags";
 export * from "./roles";

@@ -32,23 +32,27 @@ export interface RouteSpec<P, Q, B> {
 
 /** What a core returns for a route that answers with a file. */
 export interface FileBody {
-  /** The whole file, or a stream of it (sent as it is read, without a length). */
+  /** The whole file, or a stream of it (then give `sizeBytes` when it is known). */
   bytes: Uint8Array | ReadableStream<Uint8Array>;
+  sizeBytes?: number | null;
   contentType: string;
   fileName: string;
   /** "attachment" makes the browser download it; "inline" may show it. */
   disposition: "attachment" | "inline";
+  /** Unset: "private, no-store". A file that never changes under its address may be kept longer. */
+  cacheControl?: string;
 }
 
 function fileResponse(file: FileBody): Response {
   const name = file.fileName.replace(/[^\w.-]+/g, "_");
+  const length = file.bytes instanceof Uint8Array ? file.bytes.byteLength : file.sizeBytes;
   return new Response(file.bytes as BodyInit, {
     headers: {
       "content-type": file.contentType,
-      ...(file.bytes instanceof Uint8Array ? { "content-length": String(file.bytes.byteLength) } : {}),
+      ...(length === null || length === undefined ? {} : { "content-length": String(length) }),
       "content-disposition": `${file.disposition}; filename="${name}"`,
       "x-content-type-options": "nosniff",
-      "cache-control": "private, no-store",
+      "cache-control": file.cacheControl ?? "private, no-store",
     },
   });
 }

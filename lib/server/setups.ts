@@ -10,6 +10,7 @@ import { fail, ok, type AppError, type Result } from "@/lib/errors";
 import { kickMailDelivery } from "@/lib/mail/deliver";
 import { setupSubmittedMail } from "@/lib/mail/templates";
 import { appUrl } from "./app-url";
+import { deleteStoredAttachmentObjects } from "./attachments";
 import { defaultDraft } from "@/lib/setups/default-draft";
 import type { SetupDraft } from "@/lib/setups/setup-draft";
 import { evaluateDraft } from "./evaluate-draft";
@@ -175,6 +176,10 @@ export async function submitSetup({
   return ok({ id, version: outcome.version, status: "submitted" });
 }
 
+/** Deletes the setup and its rows in one transaction; its attachments' objects go after the commit. */
 export async function deleteSetup({ viewer, id }: { viewer: Viewer; id: string }): Promise<Result<null>> {
-  return (await setupsDb.deleteSetup({ id, ownerId: viewer.id })) ? ok(null) : notYours(viewer, id);
+  const deleted = await setupsDb.deleteSetup({ id, ownerId: viewer.id });
+  if (!deleted) return notYours(viewer, id);
+  await deleteStoredAttachmentObjects(deleted.storageKeys);
+  return ok(null);
 }

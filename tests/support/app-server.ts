@@ -7,6 +7,7 @@ import path from "node:path";
 import { openDatabase } from "../../db/index";
 import { migrateDatabase } from "../../db/migrate";
 import { seedDemo } from "../../db/seed";
+import { startS3Fake } from "../../scripts/s3-fake";
 import { startSmtpFake } from "../../scripts/smtp-fake";
 
 /**
@@ -20,7 +21,9 @@ export interface AppServer {
   databaseUrl: string;
   /** Where the app's own SMTP fake keeps every message it sends, as .eml files. */
   mailDir: string;
-  /** The process group of the server (npx and the Next server under it), for memory checks. */
+  /** The S3_* variables of the app's own S3 fake (its attachments' store), for tests to look inside it. */
+  s3Env: Record<string, string>;
+  /** The spawned `next start` (leader of its own process group, with the server's processes under it). */
   serverPid: number;
   stop: () => Promise<void>;
 }
@@ -68,6 +71,8 @@ export async function startAppServer({ build, databaseUrl: existingDatabaseUrl }
 
   // The app's mail goes to a fake of its own on loopback, never to a server in SMTP_URL.
   const mail = await startSmtpFake({ dir: path.join(dir, "mail") });
+  // Its attachments go to an S3 fake of its own on loopback, never to a bucket named in S3_*.
+  const s3 = await startS3Fake({ dir: path.join(dir, "s3") });
   const inherited = { ...process.env };
   delete inherited.SMTP_URL;
 
@@ -77,6 +82,7 @@ export async function startAppServer({ build, databaseUrl: existingDatabaseUrl }
     ...inherited,
     TRIMRAIL_SMTP_FAKE_PORT: String(mail.port),
     TRIMRAIL_MAIL_DIR: mail.dir,
+    ...s3.env,
     NODE_ENV: "production" as const,
     DATABASE_URL: databaseUrl,
     BETTER_AUTH_SECRET: randomBytes(32).toString("base64url"),
@@ -101,6 +107,7 @@ export async function startAppServer({ build, databaseUrl: existingDatabaseUrl }
     baseURL,
     databaseUrl,
     mailDir: mail.dir,
+    s3Env: s3.env,
     serverPid: server.pid ?? 0,
     stop: async () => {
       if (server.pid) {
@@ -111,6 +118,7 @@ export async function startAppServer({ build, databaseUrl: existingDatabaseUrl }
         }
       }
       await mail.stop();
+      await s3.stop();
       rmSync(dir, { recursive: true, force: true });
     },
   };

@@ -7,6 +7,7 @@ export default async function setup(project: TestProject): Promise<() => Promise
   project.provide("baseURL", app.baseURL);
   project.provide("databaseUrl", app.databaseUrl);
   project.provide("mailDir", app.mailDir);
+  project.provide("s3Env", app.s3Env);
   project.provide("serverPid", app.serverPid);
   return app.stop;
 }

@@ -36,17 +36,27 @@ export class ApiClient {
     return response;
   }
 
+  /** The session cookies, for a request made without this client (e.g. a raw streamed upload). */
+  cookieHeader(): string {
+    return [...this.cookies].map(([k, v]) => `${k}=${v}`).join("; ");
+  }
+
+  /** A multipart upload through fetch, which sends Content-Length. */
+  async upload(pathname: string, form: FormData): Promise<Response> {
+    return fetch(new URL(pathname, this.baseURL), {
+      method: "POST",
+      headers: { origin: this.baseURL, "x-forwarded-for": this.address, ...(this.cookies.size ? { cookie: this.cookieHeader() } : {}) },
+      body: form,
+      redirect: "manual",
+    });
+  }
+
   get(pathname: string): Promise<Response> {
     return this.request("GET", pathname);
   }
 
   async signIn(email: string, password = DEMO_PASSWORD): Promise<Response> {
     return this.request("POST", "/api/auth/sign-in/email", { email, password });
-  }
-
-  /** The Cookie header this client sends, for requests made with other HTTP clients. */
-  cookieHeader(): string {
-    return [...this.cookies].map(([k, v]) => `${k}=${v}`).join("; ");
   }
 
   hasSession(): boolean {

@@ -25,3 +25,22 @@ export function treeRssBytes(rootPid: number): number {
   }
   return total;
 }
+
+/** Resident memory of a process group (the `next start` leader and every process under it), in bytes. */
+export function processGroupRssBytes(groupId: number): number {
+  let total = 0;
+  for (const entry of readdirSync("/proc")) {
+    if (!/^\d+$/.test(entry)) continue;
+    try {
+      const stat = readFileSync(`/proc/${entry}/stat`, "utf8");
+      // Fields after the command name in parentheses: state, ppid, pgrp (proc(5)).
+      const [, , pgrp] = stat.slice(stat.lastIndexOf(")") + 2).split(" ");
+      if (Number(pgrp) !== groupId) continue;
+      const rss = /^VmRSS:\s+(\d+) kB/m.exec(readFileSync(`/proc/${entry}/status`, "utf8"));
+      if (rss) total += Number(rss[1]) * 1024;
+    } catch {
+      // the process ended between the listing and the read
+    }
+  }
+  return total;
+}

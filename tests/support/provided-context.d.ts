@@ -5,6 +5,7 @@ declare module "vitest" {
     baseURL: string;
     databaseUrl: string;
     mailDir: string;
+    s3Env: Record<string, string>;
     serverPid: number;
   }
 }

@@ -3,6 +3,7 @@ import { notFound } from "next/navigation";
 import { listSetupHistory } from "@/db/queries/audit";
 import { getPlannerCatalogue } from "@/db/queries/catalogue";
 import { getSetupHeaderForViewer, listThread } from "@/db/queries/review";
+import { AttachmentsPanel } from "@/components/attachments/attachments-panel";
 import { toPlannerCatalogue } from "@/components/planner/to-planner-catalogue";
 import { DecisionForm } from "@/components/review/decision-form";
 import { HistoryList } from "@/components/review/history-list";
@@ -12,6 +13,7 @@ import { FlagBadge } from "@/components/ui/flag-badge";
 import { STAFF_ROLES, STATUS_WORDS } from "@/lib/domain";
 import { flagMessage } from "@/lib/flag-messages";
 import { requirePageViewer } from "@/lib/auth/guard";
+import { listAttachments } from "@/lib/server/attachments";
 import { isCurrentResultShape } from "@/lib/server/evaluate-draft";
 import { getSetup } from "@/lib/server/setups";
 
@@ -22,7 +24,12 @@ export default async function ReviewPage({ params }: PageProps<"/review/[id]">) 
   const viewer = await requirePageViewer(STAFF_ROLES, `/review/${id}`);
   const [setup, header] = await Promise.all([getSetup({ viewer, id }), getSetupHeaderForViewer({ id, viewer })]);
   if (!setup.ok || !header) notFound();
-  const [catalogueRows, thread, history] = await Promise.all([getPlannerCatalogue({ ownerId: header.ownerId }), listThread({ setupId: id }), listSetupHistory({ setupId: id })]);
+  const [catalogueRows, thread, history, files] = await Promise.all([
+    getPlannerCatalogue({ ownerId: header.ownerId }),
+    listThread({ setupId: id }),
+    listSetupHistory({ setupId: id }),
+    listAttachments({ viewer, setupId: id }),
+  ]);
   const { version, status, draft, result } = setup.data;
   const raised = (result?.flags ?? []).filter((f) => f.level !== "ok");
   const canDecide = status === "submitted" && header.ownerId !== viewer.id;
@@ -48,6 +55,7 @@ export default async function ReviewPage({ params }: PageProps<"/review/[id]">) 
             {header.ownerId === viewer.id ? "This is your own setup: someone else reviews it." : `No decision is open: the setup is ${STATUS_WORDS[status]}.`}
           </p>
         )}
+        <AttachmentsPanel setupId={id} initialAttachments={files.ok ? files.data.attachments : []} title="Customer's photos and datasheets" />
         <Thread setupId={id} viewerId={viewer.id} initialItems={thread.map((t) => ({ ...t, at: t.at.toISOString() }))} />
         <HistoryList entries={history} />
       </ReviewWorkspace>
