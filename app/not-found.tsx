@@ -1,11 +1,12 @@
-import Link from "next/link";
+import { NotFoundMessage } from "@/components/shell/not-found-message";
 
+export const metadata = { title: "Page not found" };
+
+// A URL that matches no route: only the root layout is around this page, so it brings its own main.
 export default function NotFound() {
   return (
-    <main className="mx-auto max-w-xl px-6 py-16">
-      <p className="figure text-sm text-muted">404</p>
-      <h1 className="mt-1 text-2xl">Nothing here</h1>
-      <Link href="/" className="mt-6 inline-block text-accent underline">Go to the start page</Link>
+    <main id="main" tabIndex={-1} className="mx-auto max-w-xl px-6 py-16 focus:outline-none">
+      <NotFoundMessage />
     </main>
   );
 }

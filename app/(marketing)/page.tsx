@@ -19,7 +19,7 @@ export default async function LandingPage() {
           )}
         </nav>
       </header>
-      <section className="mt-16">
+      <section id="main" tabIndex={-1} className="mt-16 focus:outline-none">
         <h1 className="text-4xl">Know where the mount goes before the first flight.</h1>
         <p className="mt-4 max-w-2xl text-lg text-muted">
           Trimrail plans a payload under a helium kite-balloon: an antenna, a camera or a sensor package on the sliding

@@ -1,6 +1,6 @@
 "use client";
 import dynamic from "next/dynamic";
-import { useState } from "react";
+import { useRef, useState } from "react";
 import { formatQuantity } from "@/lib/units";
 import type { SetupPayloadDraft } from "@/lib/setups/setup-draft";
 import { usePlanner, usePlannerActions } from "./planner-context";
@@ -43,6 +43,9 @@ export function PayloadsSection() {
   const actions = usePlannerActions();
   const [templateId, setTemplateId] = useState(catalogue.templates[0]?.id ?? "");
   const [editing, setEditing] = useState<Editing>(null);
+  // After Apply, Add payload or Remove the button pressed is gone: focus goes to the list instead of the page body.
+  const listRef = useRef<HTMLUListElement>(null);
+  const focusList = () => listRef.current?.focus();
 
   const addTemplate = () => {
     const tpl = catalogue.templates.find((t) => t.id === templateId);
@@ -53,7 +56,7 @@ export function PayloadsSection() {
 
   return (
     <Section title={`Payloads (${payloads.length})`} testId="section-payloads">
-      <ul className="divide-y divide-hairline" data-testid="payload-list">
+      <ul ref={listRef} tabIndex={-1} className="divide-y divide-hairline" data-testid="payload-list">
         {payloads.map((p, i) => (
           <li key={`${p.name}-${i}`} className="py-2" data-testid="payload-item">
             <div className="flex flex-wrap items-center gap-2 text-sm">
@@ -62,7 +65,7 @@ export function PayloadsSection() {
               <span className="text-muted">{p.attachment}{p.adapterId ? " + adapter" : ""}</span>
               <span className="ml-auto flex gap-2">
                 <button type="button" className="text-accent underline" onPointerEnter={loadPayloadForm} onFocus={loadPayloadForm} onClick={() => setEditing({ mode: "edit", index: i })}>Edit</button>
-                <button type="button" className="text-flag-stop underline" onClick={() => actions.removePayload(i)} aria-label={`Remove ${p.name}`}>Remove</button>
+                <button type="button" className="text-flag-stop underline" onClick={() => { actions.removePayload(i); focusList(); }} aria-label={`Remove ${p.name}`}>Remove</button>
               </span>
             </div>
             {editing?.mode === "edit" && editing.index === i && (
@@ -74,6 +77,7 @@ export function PayloadsSection() {
                 onSubmit={(next) => {
                   actions.updatePayload(i, next);
                   setEditing(null);
+                  focusList();
                 }}
                 onCancel={() => setEditing(null)}
               />
@@ -103,6 +107,7 @@ export function PayloadsSection() {
           onSubmit={(p) => {
             actions.addPayload(p);
             setEditing(null);
+            focusList();
           }}
           onCancel={() => setEditing(null)}
         />

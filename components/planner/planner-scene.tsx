@@ -82,7 +82,7 @@ export function PlannerScene() {
           Trim {formatFixed(trimDeg, 1)}°
         </span>
       </div>
-      <p className="sr-only" data-testid="scene-summary">{summary}</p>
+      <p className="sr-only" aria-live="polite" data-testid="scene-summary">{summary}</p>
     </div>
   );
 }

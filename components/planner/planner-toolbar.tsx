@@ -1,7 +1,7 @@
 "use client";
 import { useMutation } from "@tanstack/react-query";
 import { useRouter } from "next/navigation";
-import { useState } from "react";
+import { useEffect, useRef, useState } from "react";
 import { worstLevel } from "@/lib/balance";
 import { FlagBadge } from "@/components/ui/flag-badge";
 import { ApiError, savePreferencesRequest, saveSetupRequest, submitSetupRequest } from "@/lib/client/api";
@@ -22,6 +22,11 @@ export function PlannerToolbar() {
   const router = useRouter();
   const [acknowledged, setAcknowledged] = useState(false);
   const [message, setMessage] = useState<{ kind: "ok" | "error"; text: string; conflict?: boolean } | null>(null);
+  // After Save or Submit, focus goes to the result rather than falling to the page body.
+  const messageRef = useRef<HTMLParagraphElement>(null);
+  useEffect(() => {
+    if (message) messageRef.current?.focus();
+  }, [message]);
 
   const report = (error: unknown) =>
     setMessage({
@@ -115,7 +120,7 @@ export function PlannerToolbar() {
       {submitHint && <p className="basis-full text-xs text-muted" data-testid="submit-hint">{submitHint}</p>}
       {reopensHint && <p className="basis-full text-xs text-flag-caution" data-testid="reopens-hint">{reopensHint}</p>}
       {message && (
-        <p role={message.kind === "error" ? "alert" : "status"} className={`basis-full text-sm ${message.kind === "error" ? "text-flag-stop" : "text-flag-ok"}`} data-testid="save-message">
+        <p ref={messageRef} tabIndex={-1} role={message.kind === "error" ? "alert" : "status"} className={`basis-full text-sm ${message.kind === "error" ? "text-flag-stop" : "text-flag-ok"}`} data-testid="save-message">
           {message.text}
           {message.conflict && (
             <button type="button" className="ml-2 underline" onClick={() => window.location.reload()} data-testid="load-saved-version">

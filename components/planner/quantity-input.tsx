@@ -81,6 +81,7 @@ export function QuantityInput({
           placeholder={placeholder}
           disabled={disabled}
           aria-invalid={error ? true : undefined}
+          aria-describedby={error ? `${id}-error` : undefined}
           data-testid={testId}
           className={`figure w-28 rounded border bg-white px-2 py-1 ${error ? "border-flag-stop" : "border-hairline"}`}
           onChange={(e) => setText(e.target.value)}
@@ -91,7 +92,7 @@ export function QuantityInput({
         />
         <span className="unit text-muted">{unitOf(quantity, unitSystem)}</span>
       </div>
-      {error && <p className="mt-0.5 text-xs text-flag-stop" role="alert">{error}</p>}
+      {error && <p id={`${id}-error`} className="mt-0.5 text-xs text-flag-stop" role="alert">{error}</p>}
     </div>
   );
 }

@@ -12,7 +12,14 @@ export function SetupRowActions({ id, name }: { id: string; name: string }) {
     router.refresh();
   };
   const duplicate = useMutation({ mutationFn: () => duplicateSetupRequest(id), onSuccess: done });
-  const remove = useMutation({ mutationFn: () => deleteSetupRequest(id), onSuccess: done });
+  const remove = useMutation({
+    mutationFn: () => deleteSetupRequest(id),
+    onSuccess: () => {
+      done();
+      // The row and its buttons go away: focus the page's main content rather than leave it to the body.
+      document.getElementById("main")?.focus();
+    },
+  });
   const pending = duplicate.isPending || remove.isPending;
   const error = duplicate.error ?? remove.error;
   return (
