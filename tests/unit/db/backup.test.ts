@@ -53,7 +53,7 @@ describe("db:backup and db:restore", () => {
     const restore = run("db-restore", [backupFile], url);
     expect(restore.status, restore.stderr).toBe(0);
     expect(await names(url)).toEqual(before);
-  });
+  }, 90_000);
 
   it("returns a non-zero exit and a message for a backup file that is not a database, and leaves the live one alone", async () => {
     const url = `file:${path.join(dir, "live2.db")}`;
@@ -69,5 +69,5 @@ describe("db:backup and db:restore", () => {
     expect(restore.stderr).toMatch(/restore failed/);
     expect(await names(url)).toEqual(before);
     expect(run("db-restore", [], url).status).toBe(2);
-  });
+  }, 90_000);
 });
