@@ -17,6 +17,8 @@ export default defineConfig({
           name: "unit",
           include: ["tests/unit/**/*.test.ts"],
           environment: "node",
+          // A few unit tests spawn the CLI scripts (tsx starts in seconds on a busy machine).
+          testTimeout: 30_000,
         },
       },
       {
