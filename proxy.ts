@@ -32,6 +32,7 @@ export function proxy(request: NextRequest): NextResponse {
 }
 
 export const config = {
-  // Pages of the app and the API; never Next's own files or the models.
-  matcher: ["/setups/:path*", "/review/:path*", "/workshop/:path*", "/insight/:path*", "/dev/:path*", "/api/:path*"],
+  // The app's pages, and only those API paths with a percent-escape: a proxy that runs on a route
+  // makes Next hold the request body for it, and uploads must stream past it untouched.
+  matcher: ["/setups/:path*", "/review/:path*", "/workshop/:path*", "/insight/:path*", "/dev/:path*", "/api/(.*%.*)"],
 };
