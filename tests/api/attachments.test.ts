@@ -189,14 +189,15 @@ describe("a refused upload", () => {
     expect(await storedCounts(setupId)).toEqual(before);
   });
 
-  it("returns 413 long before a 200 MB stream is sent: the server stops reading and hangs up", async () => {
+  it("stops reading a 200 MB stream at the 10 MB mark and hangs up", async () => {
     const outcome = await streamUpload(baseURL, wren.cookieHeader(), setupId, { fileBytes: 200 * MB, start: await jpegWithGps(), keepSending: true });
-    expect(outcome.status, outcome.error ?? "").toBe(413);
-    // 10 MB, then at most 16 MB read and thrown away before the server hung up, plus what the
-    // sockets' buffers held (the moment of the answer itself is pinned in the unit test of the receiver).
-    expect(outcome.sentAtAnswerBytes).not.toBeNull();
+    // 10 MB read, then nothing: what else got out were the sockets' buffers filling before the hang-up.
     expect(outcome.sentBytes).toBeLessThan(40 * MB);
-    expect(outcome.error).toMatch(/ECONNRESET|EPIPE|socket hang up/);
+    // The answer is 413. A sender that keeps writing into a connection the server has closed may
+    // meet the TCP reset before it reads that answer (TCP, RFC 9293 §3.6.1); a client that reads
+    // while it sends, as the ones above, always gets the 413.
+    if (outcome.status === null) expect(outcome.error).toMatch(/EPIPE|ECONNRESET/);
+    else expect(outcome.status).toBe(413);
   });
 
   it("returns 409 for a 21st file and writes neither a row nor an object", async () => {
