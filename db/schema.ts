@@ -330,8 +330,9 @@ export const setupPayloads = sqliteTable(
   },
   (t) => [
     uniqueIndex("setup_payloads_order_idx").on(t.setupId, t.sortOrder),
-    index("setup_payloads_adapter_idx").on(t.adapterId),
-    index("setup_payloads_template_idx").on(t.templateId),
+    // Covering: "used by N setups" counts distinct setups from the index alone.
+    index("setup_payloads_adapter_idx").on(t.adapterId, t.setupId),
+    index("setup_payloads_template_idx").on(t.templateId, t.setupId),
     check("setup_payloads_category_check", inList("category", PAYLOAD_CATEGORIES)),
     check("setup_payloads_shape_check", inList("shape", PAYLOAD_SHAPES)),
     check("setup_payloads_attachment_check", inList("attachment", ATTACHMENTS)),
