@@ -5,6 +5,7 @@ import type { SetupPayloadDraft } from "@/lib/setups/setup-draft";
 import { BLANK_PAYLOAD, PayloadForm } from "./payload-form";
 import { usePlanner, usePlannerActions } from "./planner-context";
 import { Section } from "./section";
+import { isOffered } from "./types";
 
 type Editing = { mode: "add"; initial: SetupPayloadDraft } | { mode: "edit"; index: number } | null;
 
@@ -13,13 +14,16 @@ export function PayloadsSection() {
   const catalogue = usePlanner((s) => s.catalogue);
   const units = usePlanner((s) => s.unitSystem);
   const actions = usePlannerActions();
-  const [templateId, setTemplateId] = useState(catalogue.templates[0]?.id ?? "");
+  // Retired templates and adapters stay for the payloads that already name them, never as new choices.
+  const templates = catalogue.templates.filter((t) => t.active !== false);
+  const adaptersFor = (adapterId: string | null) => catalogue.adapters.filter((a) => isOffered(a, a.id === adapterId));
+  const [templateId, setTemplateId] = useState(templates[0]?.id ?? "");
   const [editing, setEditing] = useState<Editing>(null);
 
   const addTemplate = () => {
-    const tpl = catalogue.templates.find((t) => t.id === templateId);
+    const tpl = templates.find((t) => t.id === templateId);
     if (!tpl) return;
-    const { id, description: _description, ...fields } = tpl;
+    const { id, description: _description, active: _active, ...fields } = tpl;
     actions.addPayload({ ...fields, templateId: id, adapterId: null });
   };
 
@@ -41,7 +45,7 @@ export function PayloadsSection() {
               <PayloadForm
                 initial={p}
                 units={units}
-                adapters={catalogue.adapters}
+                adapters={adaptersFor(p.adapterId)}
                 submitLabel="Apply"
                 onSubmit={(next) => {
                   actions.updatePayload(i, next);
@@ -58,7 +62,7 @@ export function PayloadsSection() {
         <label className="text-sm text-muted">
           From the catalogue
           <select value={templateId} onChange={(e) => setTemplateId(e.target.value)} className="mt-0.5 block rounded border border-hairline bg-white px-2 py-1" data-testid="template-select">
-            {catalogue.templates.map((t) => (
+            {templates.map((t) => (
               <option key={t.id} value={t.id}>{t.name} ({formatQuantity("itemMass", t.massKg, units)})</option>
             ))}
           </select>
@@ -70,7 +74,7 @@ export function PayloadsSection() {
         <PayloadForm
           initial={editing.initial}
           units={units}
-          adapters={catalogue.adapters}
+          adapters={adaptersFor(null)}
           submitLabel="Add payload"
           onSubmit={(p) => {
             actions.addPayload(p);

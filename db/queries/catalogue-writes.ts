@@ -1,5 +1,6 @@
 import "server-only";
 import { and, eq, inArray, ne } from "drizzle-orm";
+import type { SQLiteColumn } from "drizzle-orm/sqlite-core";
 import { randomUUID } from "node:crypto";
 import { getDb } from "@/db";
 import { adapters, envelopeModels, envelopeUnits, mounts, payloadTemplates, unitLiftTests, user } from "@/db/schema";
@@ -16,9 +17,18 @@ const AUDIT_TYPES = { models: "envelope_model", units: "envelope_unit", mounts: 
 
 export type WriteOutcome<T = { id: string }> = { kind: "ok"; data: T } | { kind: "not_found" } | { kind: "taken"; field: string } | { kind: "in_use"; setupCount: number } | { kind: "has_units" };
 
+/** The columns that must be unique within each kind, as the maker names them. */
+const UNIQUE = {
+  models: { name: envelopeModels.name, slug: envelopeModels.slug },
+  units: { serial: envelopeUnits.serial },
+  mounts: { name: mounts.name },
+  adapters: { name: adapters.name },
+  templates: { name: payloadTemplates.name },
+} as const;
+
 async function isTaken(tx: Tx, kind: CatalogueKind, field: "name" | "slug" | "serial", value: string, exceptId: string | null): Promise<boolean> {
-  const table = TABLES[kind] as typeof envelopeModels & typeof envelopeUnits & typeof mounts;
-  const column = (table as unknown as Record<string, typeof mounts.name>)[field];
+  const table = TABLES[kind] as typeof mounts;
+  const column = (UNIQUE[kind] as Record<string, SQLiteColumn>)[field];
   const [row] = await tx
     .select({ id: table.id })
     .from(table)

@@ -13,11 +13,11 @@ import type { SetupDraft } from "@/lib/setups/setup-draft";
 
 // ---------------------------------------------------------------- a unit with its calibration
 
-export interface CalibratedUnit extends EnvelopeUnitRow {
+export type CalibratedUnit = EnvelopeUnitRow & {
   latestTest: UnitLiftTestRow | null;
   /** Measured ÷ predicted gross lift at the latest test; null: no test. */
   calibrationFactor: number | null;
-}
+};
 
 async function latestTestsByUnit(unitIds: readonly string[]): Promise<Map<string, UnitLiftTestRow>> {
   if (unitIds.length === 0) return new Map();
