@@ -83,3 +83,27 @@ export const markThreadReadRequest = (id: string) => call<null>("PUT", setupUrl(
 
 export const decideRequest = (id: string, input: { decision: DecisionOutcome; reason: string; reasonCodes: ReviewReasonCode[]; version: number }) =>
   call<{ id: string; status: SetupStatus; version: number }>("POST", setupUrl(id, "/decision"), input);
+
+// ---------------------------------------------------------------- the Workshop (maker)
+
+export type CatalogueKindPath = "models" | "units" | "mounts" | "adapters" | "templates";
+const catalogueUrl = (kind: CatalogueKindPath, id?: string, rest = "") => `/api/catalogue/${kind}${id ? `/${encodeURIComponent(id)}` : ""}${rest}`;
+
+/** Adds (id null) or replaces a catalogue item; the body is the kind's values in SI (lib/catalogue/schemas.ts). */
+export const saveCatalogueItemRequest = (kind: CatalogueKindPath, id: string | null, values: unknown) =>
+  id === null ? call<{ id: string }>("POST", catalogueUrl(kind), values) : call<{ id: string }>("PUT", catalogueUrl(kind, id), values);
+
+export const setCatalogueActiveRequest = (kind: CatalogueKindPath, id: string, active: boolean) =>
+  call<{ id: string; active: boolean }>("PUT", catalogueUrl(kind, id, "/active"), { active });
+
+export const deleteCatalogueItemRequest = (kind: CatalogueKindPath, id: string) => call<null>("DELETE", catalogueUrl(kind, id));
+
+export const addLiftTestRequest = (unitId: string, values: unknown) =>
+  call<{ id: string; calibrationFactor: number | null }>("POST", catalogueUrl("units", unitId, "/lift-tests"), values);
+
+export const deleteLiftTestRequest = (unitId: string, testId: string) => call<null>("DELETE", catalogueUrl("units", unitId, `/lift-tests/${encodeURIComponent(testId)}`));
+
+export const importTemplatesRequest = (csv: string) => call<{ created: number; updated: number }>("POST", "/api/catalogue/templates/import", { csv });
+
+/** The preview GLB of hull parameters not yet saved (maker only). */
+export const hullPreviewUrl = (hull: unknown) => `/api/catalogue/hull-preview.glb?hull=${encodeURIComponent(JSON.stringify(hull))}`;
