@@ -114,3 +114,20 @@ export const WORKSHOP_PAGE_SIZE = 25;
 export const pageQuerySchema = z.object({
   page: z.coerce.number().int("page must be a whole number").min(1, "page starts at 1").max(100_000).default(1),
 });
+
+/** The payload templates CSV's columns, SI units in their names (lib/catalogue/templates-csv.ts reads and writes them). */
+export const TEMPLATE_CSV_COLUMNS = [
+  "id",
+  "name",
+  "description",
+  "category",
+  "mass_kg",
+  "shape",
+  "length_m",
+  "width_m",
+  "height_m",
+  "attachment",
+  "drag_area_m2",
+  "offset_x_m",
+  "offset_z_m",
+] as const;

@@ -1,25 +1,11 @@
 import Papa from "papaparse";
-import { payloadTemplateValuesSchema, type PayloadTemplateValues } from "./schemas";
+import { payloadTemplateValuesSchema, TEMPLATE_CSV_COLUMNS, type PayloadTemplateValues } from "./schemas";
 
 // Payload templates as CSV: one row per template, SI units in the header names. Export and import
 // read the same columns, so a file exported, edited in a spreadsheet and imported round-trips.
 // Row numbers are as a spreadsheet shows them: the header is row 1, the first template row 2.
 
-export const TEMPLATE_CSV_COLUMNS = [
-  "id",
-  "name",
-  "description",
-  "category",
-  "mass_kg",
-  "shape",
-  "length_m",
-  "width_m",
-  "height_m",
-  "attachment",
-  "drag_area_m2",
-  "offset_x_m",
-  "offset_z_m",
-] as const;
+export { TEMPLATE_CSV_COLUMNS };
 type Column = (typeof TEMPLATE_CSV_COLUMNS)[number];
 
 /** Each column's field in the template's values ("id" is the row's own). */
