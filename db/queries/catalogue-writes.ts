@@ -203,7 +203,7 @@ export async function setCatalogueItemActive({ actorId, kind, id, active }: { ac
 export async function deleteCatalogueItem({ actorId, kind, id }: { actorId: string; kind: CatalogueKind; id: string }): Promise<WriteOutcome> {
   return getDb().transaction(async (tx) => {
     const table = TABLES[kind] as typeof mounts;
-    const [row] = await tx.select({ id: table.id, setupCount: setupCountSql(kind, table.id) }).from(table).where(eq(table.id, id));
+    const [row] = await tx.select({ id: table.id, setupCount: setupCountSql(kind) }).from(table).where(eq(table.id, id));
     if (!row) return { kind: "not_found" };
     if (Number(row.setupCount) > 0) return { kind: "in_use", setupCount: Number(row.setupCount) };
     if (kind === "models") {

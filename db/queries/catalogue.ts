@@ -2,7 +2,7 @@ import "server-only";
 import { and, asc, count, desc, eq, inArray, isNull, or, sql, type SQL } from "drizzle-orm";
 import type { SQLiteColumn, SQLiteTable } from "drizzle-orm/sqlite-core";
 import { getDb } from "@/db";
-import { adapters, envelopeModels, envelopeUnits, mounts, payloadTemplates, setupPayloads, setups, unitLiftTests, user } from "@/db/schema";
+import { adapters, envelopeModels, envelopeUnits, mounts, payloadTemplates, unitLiftTests, user } from "@/db/schema";
 import type { AdapterRow, EnvelopeUnitRow, MountRow, PayloadTemplateRow, UnitLiftTestRow } from "@/db/schema";
 import type { CatalogueKind } from "@/lib/catalogue/schemas";
 import { latestLiftTest, unitCalibrationFactor } from "@/lib/setups/calibration";
@@ -146,20 +146,28 @@ export interface Page<T> {
   pageSize: number;
 }
 
-/** How many setups name an item: a count over an index (setups_*_idx, setup_payloads_*_idx), never a scan. */
-export function setupCountSql(kind: CatalogueKind, id: SQLiteColumn): SQL<number> {
-  switch (kind) {
-    case "models":
-      return sql<number>`(select count(*) from ${setups} where ${setups.modelId} = ${id})`;
-    case "units":
-      return sql<number>`(select count(*) from ${setups} where ${setups.unitId} = ${id})`;
-    case "mounts":
-      return sql<number>`(select count(*) from ${setups} where ${setups.mountId} = ${id})`;
-    case "adapters":
-      return sql<number>`(select count(distinct ${setupPayloads.setupId}) from ${setupPayloads} where ${setupPayloads.adapterId} = ${id})`;
-    case "templates":
-      return sql<number>`(select count(distinct ${setupPayloads.setupId}) from ${setupPayloads} where ${setupPayloads.templateId} = ${id})`;
-  }
+const TABLE_NAMES: Record<CatalogueKind, string> = {
+  models: "envelope_models",
+  units: "envelope_units",
+  mounts: "mounts",
+  adapters: "adapters",
+  templates: "payload_templates",
+};
+const USAGE: Record<CatalogueKind, string> = {
+  models: `select count(*) from "setups" where "setups"."model_id" = `,
+  units: `select count(*) from "setups" where "setups"."unit_id" = `,
+  mounts: `select count(*) from "setups" where "setups"."mount_id" = `,
+  adapters: `select count(distinct "setup_payloads"."setup_id") from "setup_payloads" where "setup_payloads"."adapter_id" = `,
+  templates: `select count(distinct "setup_payloads"."setup_id") from "setup_payloads" where "setup_payloads"."template_id" = `,
+};
+
+/**
+ * How many setups name an item: a count over an index (setups_*_idx, setup_payloads_*_idx), never
+ * a scan. Written out with qualified names: drizzle leaves a single table's columns unqualified,
+ * and an unqualified "id" inside the subquery would be the setup's own.
+ */
+export function setupCountSql(kind: CatalogueKind): SQL<number> {
+  return sql<number>`(${sql.raw(`${USAGE[kind]}"${TABLE_NAMES[kind]}"."id"`)})`;
 }
 
 async function totalOf(table: SQLiteTable): Promise<number> {
@@ -171,7 +179,7 @@ const offsetOf = (page: number, pageSize: number) => (page - 1) * pageSize;
 
 export async function listModelsPage({ page, pageSize }: { page: number; pageSize: number }) {
   const rows = await getDb()
-    .select({ model: envelopeModels, setupCount: setupCountSql("models", envelopeModels.id) })
+    .select({ model: envelopeModels, setupCount: setupCountSql("models") })
     .from(envelopeModels)
     .orderBy(asc(envelopeModels.name), asc(envelopeModels.id))
     .limit(pageSize)
@@ -181,7 +189,7 @@ export async function listModelsPage({ page, pageSize }: { page: number; pageSiz
 
 export async function getModelById({ id }: { id: string }) {
   const [row] = await getDb()
-    .select({ model: envelopeModels, setupCount: setupCountSql("models", envelopeModels.id) })
+    .select({ model: envelopeModels, setupCount: setupCountSql("models") })
     .from(envelopeModels)
     .where(eq(envelopeModels.id, id));
   return row ? { ...row.model, setupCount: Number(row.setupCount) } : null;
@@ -197,7 +205,7 @@ export async function listModelChoices() {
 
 export async function listUnitsPage({ page, pageSize }: { page: number; pageSize: number }) {
   const rows = await getDb()
-    .select({ unit: envelopeUnits, modelName: envelopeModels.name, modelVolumeM3: envelopeModels.gasVolumeM3, ownerEmail: user.email, ownerName: user.name, setupCount: setupCountSql("units", envelopeUnits.id) })
+    .select({ unit: envelopeUnits, modelName: envelopeModels.name, modelVolumeM3: envelopeModels.gasVolumeM3, ownerEmail: user.email, ownerName: user.name, setupCount: setupCountSql("units") })
     .from(envelopeUnits)
     .innerJoin(envelopeModels, eq(envelopeUnits.modelId, envelopeModels.id))
     .leftJoin(user, eq(envelopeUnits.ownerId, user.id))
@@ -218,7 +226,7 @@ export async function listUnitsPage({ page, pageSize }: { page: number; pageSize
 export async function getUnitById({ id }: { id: string }) {
   const db = getDb();
   const [row] = await db
-    .select({ unit: envelopeUnits, model: envelopeModels, ownerEmail: user.email, ownerName: user.name, setupCount: setupCountSql("units", envelopeUnits.id) })
+    .select({ unit: envelopeUnits, model: envelopeModels, ownerEmail: user.email, ownerName: user.name, setupCount: setupCountSql("units") })
     .from(envelopeUnits)
     .innerJoin(envelopeModels, eq(envelopeUnits.modelId, envelopeModels.id))
     .leftJoin(user, eq(envelopeUnits.ownerId, user.id))
@@ -246,7 +254,7 @@ type SimpleRow<K extends Simple> = K extends "mounts" ? MountRow : K extends "ad
 export async function listSimplePage<K extends Simple>({ kind, page, pageSize }: { kind: K; page: number; pageSize: number }): Promise<Page<SimpleRow<K> & { setupCount: number }>> {
   const table = SIMPLE_TABLES[kind];
   const rows = await getDb()
-    .select({ item: table, setupCount: setupCountSql(kind, table.id) })
+    .select({ item: table, setupCount: setupCountSql(kind) })
     .from(table)
     .orderBy(asc(table.name), asc(table.id))
     .limit(pageSize)
@@ -256,7 +264,7 @@ export async function listSimplePage<K extends Simple>({ kind, page, pageSize }:
 
 export async function getSimpleById<K extends Simple>({ kind, id }: { kind: K; id: string }): Promise<(SimpleRow<K> & { setupCount: number }) | null> {
   const table = SIMPLE_TABLES[kind];
-  const [row] = await getDb().select({ item: table, setupCount: setupCountSql(kind, table.id) }).from(table).where(eq(table.id, id));
+  const [row] = await getDb().select({ item: table, setupCount: setupCountSql(kind) }).from(table).where(eq(table.id, id));
   return row ? { ...(row.item as SimpleRow<K>), setupCount: Number(row.setupCount) } : null;
 }
 
