@@ -41,7 +41,7 @@ export function toFormValues(si: object, fields: readonly NumberFieldSpec[], sys
   const form = clone(si) as Tree;
   for (const field of fields) {
     const value = getAt(si as Tree, field.path);
-    if (typeof value !== "number") {
+    if (typeof value !== "number" || !Number.isFinite(value)) {
       setAt(form, field.path, "");
       continue;
     }
