@@ -45,6 +45,8 @@ export const user = sqliteTable(
     updatedAt: updatedAt(),
   },
   (t) => [
+    // The Workshop's people list, by role then name, a page at a time.
+    index("user_role_name_idx").on(t.role, t.name, t.id),
     check("user_role_check", inList("role", ROLES)),
     check("user_unit_system_check", inList("unit_system", UNIT_SYSTEMS)),
   ],
@@ -139,7 +141,7 @@ export const envelopeModels = sqliteTable("envelope_models", {
   active: integer("active", { mode: "boolean" }).notNull().default(true),
   createdAt: createdAt(),
   updatedAt: updatedAt(),
-});
+}, (t) => [index("envelope_models_name_idx").on(t.name, t.id)]);
 
 export const envelopeUnits = sqliteTable(
   "envelope_units",

@@ -24,8 +24,10 @@ ALTER TABLE `setups` ADD `lift_check_solve_for` text;--> statement-breakpoint
 CREATE INDEX `setups_model_idx` ON `setups` (`model_id`);--> statement-breakpoint
 CREATE INDEX `setups_unit_idx` ON `setups` (`unit_id`);--> statement-breakpoint
 CREATE INDEX `setups_mount_idx` ON `setups` (`mount_id`);--> statement-breakpoint
+CREATE INDEX `envelope_models_name_idx` ON `envelope_models` (`name`,`id`);--> statement-breakpoint
 CREATE INDEX `setup_payloads_adapter_idx` ON `setup_payloads` (`adapter_id`,`setup_id`);--> statement-breakpoint
 CREATE INDEX `setup_payloads_template_idx` ON `setup_payloads` (`template_id`,`setup_id`);--> statement-breakpoint
+CREATE INDEX `user_role_name_idx` ON `user` (`role`,`name`,`id`);--> statement-breakpoint
 -- Backfill (written by hand): each unit's single weighing becomes its first lift test, at ISA
 -- pressure for its altitude and pure helium, as the calibration read it before.
 INSERT INTO `unit_lift_tests` (`id`, `unit_id`, `measured_gross_lift_kg`, `temperature_c`, `pressure_pa`, `altitude_m`, `purity`, `tested_on`, `notes`, `created_at`)
