@@ -96,8 +96,12 @@ export async function saveEnvelopeUnit({ actorId, id, values, today }: { actorId
       await recordAudit(tx, { actorId, action: "catalogue.create", entityType: "envelope_unit", entityId: newId, detail: { serial: values.serial } });
       return { kind: "ok", data: { id: newId } };
     }
-    const [before] = await tx.select({ modelId: envelopeUnits.modelId }).from(envelopeUnits).where(eq(envelopeUnits.id, id));
+    const [before] = await tx.select({ modelId: envelopeUnits.modelId, ownerId: envelopeUnits.ownerId, setupCount: setupCountSql("units") }).from(envelopeUnits).where(eq(envelopeUnits.id, id));
     if (!before) return { kind: "not_found" };
+    // Setups name the unit by its owner and model: moving it would leave them naming someone else's unit.
+    if (Number(before.setupCount) > 0 && (before.modelId !== values.modelId || before.ownerId !== ownerId)) {
+      return { kind: "bad", field: before.modelId !== values.modelId ? "modelId" : "ownerEmail", message: `${before.setupCount} setups name this unit as it is; retire it and add the unit anew instead` };
+    }
     await tx.update(envelopeUnits).set(columns).where(eq(envelopeUnits.id, id));
     await recordAudit(tx, { actorId, action: "catalogue.update", entityType: "envelope_unit", entityId: id, detail: { serial: values.serial } });
     return { kind: "ok", data: { id } };

@@ -221,3 +221,21 @@ describe("importTemplatesCsv", () => {
     expect(await templatesNow()).toEqual(before);
   });
 });
+
+describe("saveEnvelopeUnit", () => {
+  it("refuses to give a unit that setups name to another owner, writing nothing", async () => {
+    const refused = await catalogue.saveEnvelopeUnit({ viewer: MAKER, id: "unit-r11-0007", values: { serial: "R11-0007", modelId: "mdl-ridge-11", ownerEmail: "tobin@trimrail.test", measuredMassKg: 0.474, notes: "" } });
+    expect(!refused.ok && refused.error.issues?.[0].path).toBe("ownerEmail");
+    const [row] = await db.select().from(t.envelopeUnits).where(eq(t.envelopeUnits.id, "unit-r11-0007"));
+    expect(row.ownerId).toBe(WREN.id);
+  });
+
+  it("adds a unit for a customer by e-mail and refuses an e-mail that is no customer's", async () => {
+    const added = await catalogue.saveEnvelopeUnit({ viewer: MAKER, id: null, values: { serial: "R06-0099", modelId: "mdl-ridge-06", ownerEmail: "mirela@trimrail.test", measuredMassKg: 0.26, notes: "" } });
+    expect(added.ok).toBe(true);
+    const unit = added.ok ? await catalogue.getEnvelopeUnit({ viewer: MAKER, id: added.data.id }) : null;
+    expect(unit?.ok && unit.data.calibrationFactor).toBeNull();
+    const bad = await catalogue.saveEnvelopeUnit({ viewer: MAKER, id: null, values: { serial: "R06-0100", modelId: "mdl-ridge-06", ownerEmail: "support@trimrail.test", measuredMassKg: 0.26, notes: "" } });
+    expect(!bad.ok && bad.error.issues).toEqual([{ path: "ownerEmail", message: "no customer has that e-mail" }]);
+  });
+});
