@@ -9,6 +9,8 @@ import {
   DECISION_OUTCOMES,
   FLAG_CODES,
   FLAG_LEVELS,
+  LIFT_CHECK_LOADS,
+  LIFT_CHECK_UNKNOWNS,
   PAYLOAD_CATEGORIES,
   PAYLOAD_SHAPES,
   ROLES,
@@ -43,7 +45,9 @@ export const user = sqliteTable(
     createdAt: createdAt(),
     updatedAt: updatedAt(),
   },
-  () => [
+  (t) => [
+    // The Workshop's people list, by role then name, a page at a time.
+    index("user_role_name_idx").on(t.role, t.name, t.id),
     check("user_role_check", inList("role", ROLES)),
     check("user_unit_system_check", inList("unit_system", UNIT_SYSTEMS)),
   ],
@@ -138,7 +142,7 @@ export const envelopeModels = sqliteTable("envelope_models", {
   active: integer("active", { mode: "boolean" }).notNull().default(true),
   createdAt: createdAt(),
   updatedAt: updatedAt(),
-});
+}, (t) => [index("envelope_models_name_idx").on(t.name, t.id)]);
 
 export const envelopeUnits = sqliteTable(
   "envelope_units",
@@ -150,14 +154,42 @@ export const envelopeUnits = sqliteTable(
     serial: text("serial").notNull().unique(),
     ownerId: text("owner_id").references(() => user.id, { onDelete: "set null" }),
     measuredMassKg: real("measured_mass_kg").notNull(),
+    // The unit's first weighing, from before lift tests had their own table (unit_lift_tests). The
+    // migration copied it there as the first test; the calibration reads only unit_lift_tests.
     measuredGrossLiftKg: real("measured_gross_lift_kg").notNull(),
     measuredAtTemperatureC: real("measured_at_temperature_c").notNull(),
     measuredAtAltitudeM: real("measured_at_altitude_m").notNull(),
     measuredOn: text("measured_on").notNull(), // ISO date, yyyy-mm-dd
     notes: text("notes").notNull().default(""),
+    // Retired units stay for the setups that name them but are not offered to new ones.
+    active: integer("active", { mode: "boolean" }).notNull().default(true),
     createdAt: createdAt(),
   },
-  (t) => [index("envelope_units_owner_idx").on(t.ownerId)],
+  (t) => [index("envelope_units_owner_idx").on(t.ownerId), index("envelope_units_model_idx").on(t.modelId, t.serial)],
+);
+
+/**
+ * A serial unit's lift tests, one row per weighing: the gross lift measured at full fill, and the
+ * air and gas it was measured in. The latest test gives the unit's calibration factor.
+ */
+export const unitLiftTests = sqliteTable(
+  "unit_lift_tests",
+  {
+    id: text("id").primaryKey(),
+    unitId: text("unit_id")
+      .notNull()
+      .references(() => envelopeUnits.id, { onDelete: "cascade" }),
+    measuredGrossLiftKg: real("measured_gross_lift_kg").notNull(),
+    temperatureC: real("temperature_c").notNull(),
+    // Station pressure at the test; null: ISA at the altitude.
+    pressurePa: real("pressure_pa"),
+    altitudeM: real("altitude_m").notNull().default(0),
+    purity: real("purity").notNull().default(1),
+    testedOn: text("tested_on").notNull(), // ISO date, yyyy-mm-dd
+    notes: text("notes").notNull().default(""),
+    createdAt: createdAt(),
+  },
+  (t) => [index("unit_lift_tests_unit_idx").on(t.unitId, t.testedOn, t.createdAt)],
 );
 
 export const mounts = sqliteTable(
@@ -184,6 +216,7 @@ export const adapters = sqliteTable(
     toThread: text("to_thread", { enum: THREADS }).notNull(),
     massKg: real("mass_kg").notNull(),
     ratedLoadKg: real("rated_load_kg").notNull(),
+    active: integer("active", { mode: "boolean" }).notNull().default(true),
   },
   () => [
     check("adapters_from_check", inList("from_thread", ATTACHMENTS)),
@@ -213,6 +246,7 @@ export const payloadTemplates = sqliteTable(
     name: text("name").notNull().unique(),
     description: text("description").notNull().default(""),
     ...payloadColumns(),
+    active: integer("active", { mode: "boolean" }).notNull().default(true),
   },
   () => [
     check("payload_templates_category_check", inList("category", PAYLOAD_CATEGORIES)),
@@ -251,6 +285,13 @@ export const setups = sqliteTable(
     tetherMassPerMetreKg: real("tether_mass_per_metre_kg"),
     tetherLengthOutM: real("tether_length_out_m"),
     tetherBreakingLoadN: real("tether_breaking_load_n"),
+    // The day's lift check: free lift weighed at the field and the air temperature then (all null: none).
+    // The two word columns are checked by the draft's zod schema, not by a CHECK: SQLite can add a
+    // CHECK only by rebuilding the table, and this change stays additive.
+    liftCheckFreeLiftKg: real("lift_check_free_lift_kg"),
+    liftCheckTemperatureC: real("lift_check_temperature_c"),
+    liftCheckWeighedWith: text("lift_check_weighed_with", { enum: LIFT_CHECK_LOADS }),
+    liftCheckSolveFor: text("lift_check_solve_for", { enum: LIFT_CHECK_UNKNOWNS }),
     status: text("status", { enum: SETUP_STATUSES }).notNull().default("draft"),
     // Optimistic concurrency: every write must name the version it read, and bumps it.
     version: integer("version").notNull().default(1),
@@ -273,6 +314,10 @@ export const setups = sqliteTable(
     index("setups_status_model_idx").on(t.status, t.modelId, t.submittedAt, t.id),
     index("setups_submitted_idx").on(t.submittedAt, t.id),
     index("setups_created_idx").on(t.createdAt, t.modelId, t.status),
+    // "Used by N setups" in the Workshop: an indexed count per catalogue item.
+    index("setups_model_idx").on(t.modelId),
+    index("setups_unit_idx").on(t.unitId),
+    index("setups_mount_idx").on(t.mountId),
     check("setups_status_check", inList("status", SETUP_STATUSES)),
     check("setups_worst_flag_check", sql`worst_flag is null or ${inList("worst_flag", FLAG_LEVELS)}`),
   ],
@@ -322,7 +367,9 @@ export const setupPayloads = sqliteTable(
   },
   (t) => [
     uniqueIndex("setup_payloads_order_idx").on(t.setupId, t.sortOrder),
-    index("setup_payloads_template_idx").on(t.templateId),
+    // Covering: "used by N setups" counts distinct setups from the index alone.
+    index("setup_payloads_adapter_idx").on(t.adapterId, t.setupId),
+    index("setup_payloads_template_idx").on(t.templateId, t.setupId),
     check("setup_payloads_category_check", inList("category", PAYLOAD_CATEGORIES)),
     check("setup_payloads_shape_check", inList("shape", PAYLOAD_SHAPES)),
     check("setup_payloads_attachment_check", inList("attachment", ATTACHMENTS)),
@@ -444,6 +491,7 @@ export const auditLog = sqliteTable(
 export type UserRow = typeof user.$inferSelect;
 export type EnvelopeModelRow = typeof envelopeModels.$inferSelect;
 export type EnvelopeUnitRow = typeof envelopeUnits.$inferSelect;
+export type UnitLiftTestRow = typeof unitLiftTests.$inferSelect;
 export type MountRow = typeof mounts.$inferSelect;
 export type AdapterRow = typeof adapters.$inferSelect;
 export type PayloadTemplateRow = typeof payloadTemplates.$inferSelect;

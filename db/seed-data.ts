@@ -86,6 +86,34 @@ export const DEMO_UNITS: readonly DemoUnit[] = [
   { id: "unit-r18-0004", modelId: "mdl-ridge-18", serial: "R18-0004", ownerId: "usr-customer-4", measuredMassKg: 0.716, measuredGrossLiftKg: 1.86, measuredAtTemperatureC: 15, measuredAtAltitudeM: 40, measuredOn: "2026-07-30" },
 ];
 
+export interface DemoLiftTest {
+  id: string;
+  unitId: string;
+  measuredGrossLiftKg: number;
+  temperatureC: number;
+  pressurePa: number | null;
+  altitudeM: number;
+  purity: number;
+  testedOn: string;
+  notes: string;
+}
+
+/** Each unit's first weighing (as the migration moved it) and, for the workshop's spare, a re-test with a known mixed fill. */
+export const DEMO_LIFT_TESTS: readonly DemoLiftTest[] = [
+  ...DEMO_UNITS.map((u) => ({
+    id: `lt-${u.id}-first`,
+    unitId: u.id,
+    measuredGrossLiftKg: u.measuredGrossLiftKg,
+    temperatureC: u.measuredAtTemperatureC,
+    pressurePa: null,
+    altitudeM: u.measuredAtAltitudeM,
+    purity: 1,
+    testedOn: u.measuredOn,
+    notes: "first weighing at the workshop",
+  })),
+  { id: "lt-unit-r11-0031-retest", unitId: "unit-r11-0031", measuredGrossLiftKg: 1.07, temperatureC: 12, pressurePa: 100_900, altitudeM: 40, purity: 0.96, testedOn: "2026-11-24", notes: "re-weighed after a seam repair; cylinder assayed at 96 %" },
+];
+
 export interface DemoMount {
   id: string;
   name: string;

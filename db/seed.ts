@@ -2,12 +2,14 @@ import { hashPassword } from "better-auth/crypto";
 import { eq } from "drizzle-orm";
 import { deriveEnvelopeGeometry, demoHulls, evaluateBalance, worstLevel, type DemoHullName } from "@/lib/balance";
 import { toBalanceInput, type SetupCatalogue } from "@/lib/setups/balance-input";
+import { latestLiftTest, unitCalibrationFactor } from "@/lib/setups/calibration";
 import type { SetupDraft } from "@/lib/setups/setup-draft";
 import { columnsFromDraft, payloadRowsFromDraft, resultRows, summaryColumns } from "./setup-columns";
 import type { Database } from "./index";
 import * as t from "./schema";
 import {
   DEMO_ADAPTERS,
+  DEMO_LIFT_TESTS,
   DEMO_MODELS,
   DEMO_MOUNTS,
   DEMO_PASSWORD,
@@ -53,6 +55,17 @@ export function demoModelRow(m: (typeof DEMO_MODELS)[number]): typeof t.envelope
     createdAt: new Date(SEED_EPOCH_MS - 400 * DAY_MS),
     updatedAt: new Date(SEED_EPOCH_MS - 400 * DAY_MS),
   };
+}
+
+const LIFT_TESTS_AT = new Date(SEED_EPOCH_MS - 100 * DAY_MS);
+
+/** A demo unit as the catalogue queries answer it: with its latest lift test and calibration factor. */
+export function demoCalibratedUnit(u: (typeof DEMO_UNITS)[number]) {
+  const model = DEMO_MODELS.find((m) => m.id === u.modelId);
+  if (!model) throw new Error(`seed: unit ${u.id} names an unknown model`);
+  const tests = DEMO_LIFT_TESTS.filter((t) => t.unitId === u.id).map((t) => ({ ...t, createdAt: LIFT_TESTS_AT }));
+  const latestTest = latestLiftTest(tests);
+  return { ...u, active: true, latestTest, calibrationFactor: unitCalibrationFactor(demoModelRow(model).gasVolumeM3, latestTest) };
 }
 
 export function demoSetupDraft(s: DemoSetup, railStartXM: number, railEndXM: number): SetupDraft {
@@ -113,6 +126,7 @@ export async function seedDemo(db: Database): Promise<SeedCounts> {
   const models = DEMO_MODELS.map(demoModelRow);
   await db.insert(t.envelopeModels).values(models).onConflictDoNothing();
   await db.insert(t.envelopeUnits).values(DEMO_UNITS.map((u) => ({ ...u, createdAt: new Date(SEED_EPOCH_MS - 100 * DAY_MS) }))).onConflictDoNothing();
+  await db.insert(t.unitLiftTests).values(DEMO_LIFT_TESTS.map((lt) => ({ ...lt, createdAt: LIFT_TESTS_AT }))).onConflictDoNothing();
   await db.insert(t.mounts).values([...DEMO_MOUNTS]).onConflictDoNothing();
   await db.insert(t.adapters).values([...DEMO_ADAPTERS]).onConflictDoNothing();
   await db.insert(t.payloadTemplates).values([...DEMO_TEMPLATES]).onConflictDoNothing();
@@ -122,7 +136,8 @@ export async function seedDemo(db: Database): Promise<SeedCounts> {
     const model = models.find((m) => m.id === s.modelId);
     const mount = DEMO_MOUNTS.find((m) => m.id === s.mountId);
     if (!model || !mount) throw new Error(`seed: setup ${s.id} names an unknown model or mount`);
-    const unit = s.unitId ? (DEMO_UNITS.find((u) => u.id === s.unitId) ?? null) : null;
+    const demoUnit = s.unitId ? DEMO_UNITS.find((u) => u.id === s.unitId) : undefined;
+    const unit = demoUnit ? demoCalibratedUnit(demoUnit) : null;
     const draft = demoSetupDraft(s, model.railStartXM, model.railEndXM);
     const catalogue: SetupCatalogue = { model: model as SetupCatalogue["model"], unit, mount, adaptersById };
     const result = evaluateBalance(toBalanceInput(draft, catalogue));

@@ -28,6 +28,10 @@ export function columnsFromDraft(draft: SetupDraft) {
     tetherMassPerMetreKg: draft.tether?.massPerMetreKg ?? null,
     tetherLengthOutM: draft.tether?.lengthOutM ?? null,
     tetherBreakingLoadN: draft.tether?.breakingLoadN ?? null,
+    liftCheckFreeLiftKg: draft.liftCheck?.freeLiftKg ?? null,
+    liftCheckTemperatureC: draft.liftCheck?.temperatureC ?? null,
+    liftCheckWeighedWith: draft.liftCheck?.weighedWith ?? null,
+    liftCheckSolveFor: draft.liftCheck?.solveFor ?? null,
   } satisfies Partial<SetupRow>;
 }
 
@@ -48,6 +52,10 @@ export function draftFromRows(row: SetupRow, payloadRows: readonly SetupPayloadR
   const tether =
     row.tetherMassPerMetreKg !== null && row.tetherLengthOutM !== null && row.tetherBreakingLoadN !== null
       ? { massPerMetreKg: row.tetherMassPerMetreKg, lengthOutM: row.tetherLengthOutM, breakingLoadN: row.tetherBreakingLoadN }
+      : null;
+  const liftCheck =
+    row.liftCheckFreeLiftKg !== null && row.liftCheckTemperatureC !== null && row.liftCheckWeighedWith !== null && row.liftCheckSolveFor !== null
+      ? { freeLiftKg: row.liftCheckFreeLiftKg, temperatureC: row.liftCheckTemperatureC, weighedWith: row.liftCheckWeighedWith, solveFor: row.liftCheckSolveFor }
       : null;
   return {
     name: row.name,
@@ -82,6 +90,8 @@ export function draftFromRows(row: SetupRow, payloadRows: readonly SetupPayloadR
         offsetXM: p.offsetXM,
         offsetZM: p.offsetZM,
       })),
+    // Only a setup with a check carries the key, so drafts from before the check read back unchanged.
+    ...(liftCheck ? { liftCheck } : {}),
   };
 }
 

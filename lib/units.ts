@@ -1,5 +1,5 @@
 import type { UnitSystem } from "@/lib/domain";
-import { CUBIC_FOOT_M3, FOOT_M, INCH_M, POUND_FORCE_N, POUND_KG } from "@/lib/balance/units-si";
+import { CUBIC_FOOT_M3, FOOT_M, INCH_M, INCH_OF_MERCURY_PA, KSI_PA, POUND_FORCE_N, POUND_KG } from "@/lib/balance/units-si";
 
 // Display units only: the engine and the database stay in SI. The exact definitions (1 ft = 0.3048 m,
 // 1 lb = 0.45359237 kg, lbf = lb × g0) are the engine's own; here only what a display adds:
@@ -13,7 +13,9 @@ const fahrenheitToCelsius = (f: number): number => ((f - 32) * 5) / 9;
 
 export type Quantity =
   | "mass" | "itemMass" | "length" | "smallLength" | "distance" | "volume" | "speed" | "temperature"
-  | "temperatureDifference" | "force" | "massPerLength" | "area" | "angle" | "ratio" | "duration";
+  | "temperatureDifference" | "force" | "massPerLength" | "area" | "angle" | "ratio" | "duration"
+  // A hull's surface or a sail (m², ft²) and a station pressure (hPa, inHg), for the Workshop.
+  | "surfaceArea" | "pressure" | "stress";
 
 interface UnitDef {
   unit: string;
@@ -57,6 +59,9 @@ const UNITS: Record<UnitSystem, Record<Quantity, UnitDef>> = {
     force: linear("N", 1, 1),
     massPerLength: linear("g/m", 0.001, 2),
     area: linear("cm²", 0.0001, 0),
+    surfaceArea: linear("m²", 1, 3),
+    pressure: linear("hPa", 100, 1),
+    stress: linear("MPa", 1e6, 0),
     ...SHARED,
   },
   imperial: {
@@ -73,6 +78,9 @@ const UNITS: Record<UnitSystem, Record<Quantity, UnitDef>> = {
     force: linear("lbf", POUND_FORCE_N, 2),
     massPerLength: linear("oz/ft", OUNCE_KG / FOOT_M, 3),
     area: linear("in²", INCH_M ** 2, 1),
+    surfaceArea: linear("ft²", FOOT_M ** 2, 2),
+    pressure: linear("inHg", INCH_OF_MERCURY_PA, 2),
+    stress: linear("ksi", KSI_PA, 1),
     ...SHARED,
   },
 };

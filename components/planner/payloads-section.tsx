@@ -5,6 +5,7 @@ import { formatQuantity } from "@/lib/units";
 import type { SetupPayloadDraft } from "@/lib/setups/setup-draft";
 import { usePlanner, usePlannerActions } from "./planner-context";
 import { Section } from "./section";
+import { isOffered } from "./types";
 
 // The form (and its form library) is only needed once someone adds or edits a payload; pointing at
 // a button that opens it starts the download.
@@ -41,16 +42,19 @@ export function PayloadsSection() {
   const catalogue = usePlanner((s) => s.catalogue);
   const units = usePlanner((s) => s.unitSystem);
   const actions = usePlannerActions();
-  const [templateId, setTemplateId] = useState(catalogue.templates[0]?.id ?? "");
+  // Retired templates and adapters stay for the payloads that already name them, never as new choices.
+  const templates = catalogue.templates.filter((t) => t.active !== false);
+  const adaptersFor = (adapterId: string | null) => catalogue.adapters.filter((a) => isOffered(a, a.id === adapterId));
+  const [templateId, setTemplateId] = useState(templates[0]?.id ?? "");
   const [editing, setEditing] = useState<Editing>(null);
   // After Apply, Add payload or Remove the button pressed is gone: focus goes to the list instead of the page body.
   const listRef = useRef<HTMLUListElement>(null);
   const focusList = () => listRef.current?.focus();
 
   const addTemplate = () => {
-    const tpl = catalogue.templates.find((t) => t.id === templateId);
+    const tpl = templates.find((t) => t.id === templateId);
     if (!tpl) return;
-    const { id, description: _description, ...fields } = tpl;
+    const { id, description: _description, active: _active, ...fields } = tpl;
     actions.addPayload({ ...fields, templateId: id, adapterId: null });
   };
 
@@ -72,7 +76,7 @@ export function PayloadsSection() {
               <PayloadForm
                 initial={p}
                 units={units}
-                adapters={catalogue.adapters}
+                adapters={adaptersFor(p.adapterId)}
                 submitLabel="Apply"
                 onSubmit={(next) => {
                   actions.updatePayload(i, next);
@@ -90,7 +94,7 @@ export function PayloadsSection() {
         <label className="text-sm text-muted">
           From the catalogue
           <select value={templateId} onChange={(e) => setTemplateId(e.target.value)} className="mt-0.5 block rounded border border-hairline bg-white px-2 py-1" data-testid="template-select">
-            {catalogue.templates.map((t) => (
+            {templates.map((t) => (
               <option key={t.id} value={t.id}>{t.name} ({formatQuantity("itemMass", t.massKg, units)})</option>
             ))}
           </select>
@@ -102,7 +106,7 @@ export function PayloadsSection() {
         <PayloadForm
           initial={editing.initial}
           units={units}
-          adapters={catalogue.adapters}
+          adapters={adaptersFor(null)}
           submitLabel="Add payload"
           onSubmit={(p) => {
             actions.addPayload(p);

@@ -2,8 +2,8 @@ import { createStore, type StoreApi } from "zustand/vanilla";
 import type { SetupStatus, UnitSystem } from "@/lib/domain";
 import { evaluateBalance, solveLevelTrimPositionX, type BalanceInput, type BalanceResult, type LevelTrimFailure } from "@/lib/balance";
 import { formatQuantity } from "@/lib/units";
-import { toBalanceInput } from "@/lib/setups/balance-input";
-import type { SetupDraft, SetupPayloadDraft } from "@/lib/setups/setup-draft";
+import { toBalanceInput, type SetupCatalogue } from "@/lib/setups/balance-input";
+import type { LiftCheckDraft, SetupDraft, SetupPayloadDraft } from "@/lib/setups/setup-draft";
 import type { PlannerCatalogue, PlannerData, PlannerModel, TrimCase } from "./types";
 
 const LEVEL_FAILURES: Record<LevelTrimFailure, string> = {
@@ -23,6 +23,8 @@ export interface PlannerActions {
   setSite: (patch: Partial<SetupDraft["site"]>) => void;
   setGas: (patch: Partial<SetupDraft["gas"]>) => void;
   setTether: (tether: SetupDraft["tether"]) => void;
+  /** The day's lift check as weighed at the field; null removes it. */
+  setLiftCheck: (liftCheck: LiftCheckDraft | null) => void;
   addPayload: (payload: SetupPayloadDraft) => void;
   updatePayload: (index: number, payload: SetupPayloadDraft) => void;
   removePayload: (index: number) => void;
@@ -48,13 +50,18 @@ export function modelOf(catalogue: PlannerCatalogue, modelId: string): PlannerMo
   return catalogue.models.find((m) => m.id === modelId) ?? catalogue.models[0];
 }
 
-/** The engine's input for a draft, from the catalogue the page was given. */
-export function inputFor(draft: SetupDraft, catalogue: PlannerCatalogue): BalanceInput {
+/** The catalogue rows a draft names, from the catalogue the page was given. */
+export function setupCatalogueFor(draft: SetupDraft, catalogue: PlannerCatalogue): SetupCatalogue {
   const model = modelOf(catalogue, draft.modelId);
   const unit = catalogue.units.find((u) => u.id === draft.unitId) ?? null;
   const mount = catalogue.mounts.find((m) => m.id === draft.mountId) ?? catalogue.mounts[0];
   const adaptersById = Object.fromEntries(catalogue.adapters.map((a) => [a.id, a]));
-  return toBalanceInput(draft, { model, unit, mount, adaptersById });
+  return { model, unit, mount, adaptersById };
+}
+
+/** The engine's input for a draft, from the catalogue the page was given. */
+export function inputFor(draft: SetupDraft, catalogue: PlannerCatalogue): BalanceInput {
+  return toBalanceInput(draft, setupCatalogueFor(draft, catalogue));
 }
 
 const now = (): number => (typeof performance === "undefined" ? 0 : performance.now());
@@ -123,6 +130,7 @@ export function createPlannerStore(data: PlannerData): PlannerStore {
         setSite: (patch) => edit((d) => ({ ...d, site: { ...d.site, ...patch } })),
         setGas: (patch) => edit((d) => ({ ...d, gas: { ...d.gas, ...patch } })),
         setTether: (tether) => edit((d) => ({ ...d, tether })),
+        setLiftCheck: (liftCheck) => edit((d) => ({ ...d, liftCheck })),
         addPayload: (payload) => edit((d) => ({ ...d, payloads: [...d.payloads, payload] })),
         updatePayload: (index, payload) => edit((d) => ({ ...d, payloads: d.payloads.map((p, i) => (i === index ? payload : p)) })),
         removePayload: (index) => edit((d) => ({ ...d, payloads: d.payloads.filter((_, i) => i !== index) })),

@@ -4,27 +4,39 @@ import type { AdapterSpec, ModelSpec, MountSpec, UnitSpec } from "@/lib/setups/b
 import type { SetupDraft, SetupPayloadDraft } from "@/lib/setups/setup-draft";
 
 // Plain, serialisable catalogue records the server page hands to the Planner.
+// `active` false: retired in the Workshop. Such an item is here only because the open setup names
+// it; the Planner keeps it for that setup but does not offer it as a new choice.
 export interface PlannerModel extends ModelSpec {
   id: string;
   name: string;
   slug: string;
   glbPath: string;
   railTabCount: number;
+  active?: boolean;
 }
 export interface PlannerUnit extends UnitSpec {
   id: string;
   modelId: string;
   serial: string;
+  /** The latest lift test's gross lift and date; null: never tested. */
+  testedGrossLiftKg: number | null;
+  testedOn: string | null;
+  active?: boolean;
 }
 export interface PlannerMount extends MountSpec {
   id: string;
   name: string;
+  active?: boolean;
 }
 export interface PlannerAdapter extends AdapterSpec {
   id: string;
   name: string;
+  active?: boolean;
 }
-export type PlannerTemplate = Omit<SetupPayloadDraft, "templateId" | "adapterId"> & { id: string; description: string };
+export type PlannerTemplate = Omit<SetupPayloadDraft, "templateId" | "adapterId"> & { id: string; description: string; active?: boolean };
+
+/** Whether an item may be offered as a new choice (retired ones only stay where already chosen). */
+export const isOffered = (item: { active?: boolean }, chosen: boolean): boolean => item.active !== false || chosen;
 
 export interface PlannerCatalogue {
   models: PlannerModel[];

@@ -1,5 +1,5 @@
 import "server-only";
-import { asc, eq } from "drizzle-orm";
+import { asc, count, eq } from "drizzle-orm";
 import { randomUUID } from "node:crypto";
 import { getDb } from "@/db";
 import { auditLog, user } from "@/db/schema";
@@ -18,6 +18,21 @@ export async function listUsers(): Promise<UserListItem[]> {
     .select({ id: user.id, name: user.name, email: user.email, role: user.role, createdAt: user.createdAt })
     .from(user)
     .orderBy(asc(user.role), asc(user.name));
+}
+
+/** A page of accounts by role then name, for the Workshop's people list. */
+export async function listUsersPage({ page, pageSize }: { page: number; pageSize: number }): Promise<{ rows: UserListItem[]; total: number; page: number; pageSize: number }> {
+  const db = getDb();
+  const [rows, [totals]] = await Promise.all([
+    db
+      .select({ id: user.id, name: user.name, email: user.email, role: user.role, createdAt: user.createdAt })
+      .from(user)
+      .orderBy(asc(user.role), asc(user.name), asc(user.id))
+      .limit(pageSize)
+      .offset((page - 1) * pageSize),
+    db.select({ n: count() }).from(user),
+  ]);
+  return { rows, total: totals?.n ?? 0, page, pageSize };
 }
 
 /** Changes one account's role and records who did it; returns false when there is no such account. */

@@ -19,3 +19,4 @@ export * from "./geometry-mesh";
 export * from "./geometry-envelope";
 export * from "./schema";
 export * from "./evaluate";
+export * from "./lift-check";

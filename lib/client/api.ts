@@ -119,3 +119,26 @@ export async function uploadAttachmentRequest(setupId: string, file: File, optio
   if (answer.status < 200 || answer.status >= 300) throw new ApiError(answer.status, data.error ?? { code: "internal", message: `The server answered ${answer.status}.` });
   return data as AttachmentView;
 }
+// ---------------------------------------------------------------- the Workshop (maker)
+
+export type CatalogueKindPath = "models" | "units" | "mounts" | "adapters" | "templates";
+const catalogueUrl = (kind: CatalogueKindPath, id?: string, rest = "") => `/api/catalogue/${kind}${id ? `/${encodeURIComponent(id)}` : ""}${rest}`;
+
+/** Adds (id null) or replaces a catalogue item; the body is the kind's values in SI (lib/catalogue/schemas.ts). */
+export const saveCatalogueItemRequest = (kind: CatalogueKindPath, id: string | null, values: unknown) =>
+  id === null ? call<{ id: string }>("POST", catalogueUrl(kind), values) : call<{ id: string }>("PUT", catalogueUrl(kind, id), values);
+
+export const setCatalogueActiveRequest = (kind: CatalogueKindPath, id: string, active: boolean) =>
+  call<{ id: string; active: boolean }>("PUT", catalogueUrl(kind, id, "/active"), { active });
+
+export const deleteCatalogueItemRequest = (kind: CatalogueKindPath, id: string) => call<null>("DELETE", catalogueUrl(kind, id));
+
+export const addLiftTestRequest = (unitId: string, values: unknown) =>
+  call<{ id: string; calibrationFactor: number | null }>("POST", catalogueUrl("units", unitId, "/lift-tests"), values);
+
+export const deleteLiftTestRequest = (unitId: string, testId: string) => call<null>("DELETE", catalogueUrl("units", unitId, `/lift-tests/${encodeURIComponent(testId)}`));
+
+export const importTemplatesRequest = (csv: string) => call<{ created: number; updated: number }>("POST", "/api/catalogue/templates/import", { csv });
+
+/** The preview GLB of hull parameters not yet saved (maker only). */
+export const hullPreviewUrl = (hull: unknown) => `/api/catalogue/hull-preview.glb?hull=${encodeURIComponent(JSON.stringify(hull))}`;

@@ -5,3 +5,4 @@ export * from "./roles";
 export * from "./setups";
 export * from "./input-limits";
 export * from "./workflow";
+export * from "./lift-check";

@@ -31,6 +31,8 @@ export const INPUT_LIMITS = {
   payloadDragAreaM2: limit("drag area", "m²", 0, 5),
   payloadOffsetXM: limit("offset x", "m", -2, 2),
   payloadOffsetZM: limit("offset z", "m", -5, 1),
+  // The day's lift check: a lifter that sinks on the scale reads as a negative free lift.
+  liftCheckFreeLiftKg: limit("weighed free lift", "kg", -20, 100),
 } as const satisfies Record<string, InputLimit>;
 
 export type InputLimitKey = keyof typeof INPUT_LIMITS;

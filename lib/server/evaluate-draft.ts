@@ -17,7 +17,7 @@ const badName = (message: string, issues: FieldIssue[]) => fail("bad_request", m
  * a number from the client's result. A name that does not exist is a 400 with the field at fault,
  * found here rather than by a foreign-key check in the middle of a write.
  */
-export async function evaluateDraft({ draft, ownerId, path = "draft" }: { draft: SetupDraft; ownerId: string; path?: string }): Promise<Result<ServerEvaluation>> {
+export async function evaluateDraft({ draft, ownerId, path = "draft", forNewSetup = false }: { draft: SetupDraft; ownerId: string; path?: string; forNewSetup?: boolean }): Promise<Result<ServerEvaluation>> {
   const found = await getCatalogueForDraft({ draft, ownerId });
   if (!found.model) return badName("That envelope model does not exist.", [{ path: `${path}.modelId`, message: "unknown envelope model" }]);
   if (!found.mount) return badName("That mount does not exist.", [{ path: `${path}.mountId`, message: "unknown mount" }]);
@@ -30,6 +30,19 @@ export async function evaluateDraft({ draft, ownerId, path = "draft" }: { draft:
     ...(p.adapterId !== null && !found.adaptersById[p.adapterId] ? [{ path: `${path}.payloads[${i}].adapterId`, message: "unknown adapter" }] : []),
   ]);
   if (unknownNames.length) return badName("A payload names a template or adapter that does not exist.", unknownNames);
+  // Retired items keep old setups working but are not offered to new ones.
+  if (forNewSetup) {
+    const retired: FieldIssue[] = [
+      ...(found.model.active ? [] : [{ path: `${path}.modelId`, message: "retired envelope model" }]),
+      ...(found.mount.active ? [] : [{ path: `${path}.mountId`, message: "retired mount" }]),
+      ...(found.unit && !found.unit.active ? [{ path: `${path}.unitId`, message: "retired serial unit" }] : []),
+      ...draft.payloads.flatMap((p, i) => [
+        ...(p.adapterId !== null && found.adaptersById[p.adapterId] && !found.adaptersById[p.adapterId].active ? [{ path: `${path}.payloads[${i}].adapterId`, message: "retired adapter" }] : []),
+        ...(p.templateId !== null && found.retiredTemplateIds.has(p.templateId) ? [{ path: `${path}.payloads[${i}].templateId`, message: "retired payload template" }] : []),
+      ]),
+    ];
+    if (retired.length) return badName("A new setup cannot use a retired catalogue item.", retired);
+  }
 
   const input = toBalanceInput(draft, { model: found.model, unit: found.unit, mount: found.mount, adaptersById: found.adaptersById });
   const checked = balanceInputSchema.safeParse(input);

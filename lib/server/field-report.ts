@@ -1,5 +1,5 @@
 import "server-only";
-import { getPlannerCatalogue } from "@/db/queries/catalogue";
+import { catalogueIdsOfDraft, getPlannerCatalogue } from "@/db/queries/catalogue";
 import { getSetupHeaderForViewer, listThread } from "@/db/queries/review";
 import { getSetupById } from "@/db/queries/setups";
 import type { Viewer } from "@/lib/auth/access";
@@ -21,7 +21,7 @@ export async function getFieldReport({ viewer, id }: { viewer: Viewer; id: strin
     if (!fresh.ok) return fresh;
     result = fresh.data.result;
   }
-  const [catalogue, thread] = await Promise.all([getPlannerCatalogue({ ownerId: header.ownerId }), listThread({ setupId: id })]);
+  const [catalogue, thread] = await Promise.all([getPlannerCatalogue({ ownerId: header.ownerId, includeIds: catalogueIdsOfDraft(draft) }), listThread({ setupId: id })]);
   const model = catalogue.models.find((m) => m.id === draft.modelId);
   const unit = catalogue.units.find((u) => u.id === draft.unitId);
   const mount = catalogue.mounts.find((m) => m.id === draft.mountId);
@@ -37,7 +37,11 @@ export async function getFieldReport({ viewer, id }: { viewer: Viewer; id: strin
       draft,
       result,
       modelName: header.modelName,
-      unitText: unit ? `${unit.serial}: weighed ${formatQuantity("mass", unit.measuredMassKg, units)}, gross lift ${formatQuantity("mass", unit.measuredGrossLiftKg, units)} on ${unit.measuredOn}` : null,
+      unitText: unit
+        ? unit.latestTest && unit.calibrationFactor !== null
+          ? `${unit.serial}: weighed ${formatQuantity("mass", unit.measuredMassKg, units)}, gross lift ${formatQuantity("mass", unit.latestTest.measuredGrossLiftKg, units)} on ${unit.latestTest.testedOn} (lift ×${unit.calibrationFactor.toFixed(3)} of the model's)`
+          : `${unit.serial}: weighed ${formatQuantity("mass", unit.measuredMassKg, units)}, no lift test (the model's volume)`
+        : null,
       mount: mount ? { name: mount.name, thread: mount.thread, ratedLoadKg: mount.ratedLoadKg } : { name: "unknown mount", thread: "", ratedLoadKg: 0 },
       rail: { startXM: model?.railStartXM ?? 0, endXM: model?.railEndXM ?? 1 },
       adapterNames: Object.fromEntries(catalogue.adapters.map((a) => [a.id, a.name])),

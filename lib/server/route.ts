@@ -32,27 +32,42 @@ export interface RouteSpec<P, Q, B> {
 
 /** What a core returns for a route that answers with a file. */
 export interface FileBody {
-  /** The whole file, or a stream of it (then give `sizeBytes` when it is known). */
-  bytes: Uint8Array | ReadableStream<Uint8Array>;
+  /**
+   * The whole file; a stream of it (then give `sizeBytes` when it is known); or a function that
+   * makes the bytes, called only when the client's copy (by `etag`) is stale.
+   */
+  bytes: Uint8Array | ReadableStream<Uint8Array> | (() => Promise<Uint8Array>);
   sizeBytes?: number | null;
   contentType: string;
   fileName: string;
   /** "attachment" makes the browser download it; "inline" may show it. */
   disposition: "attachment" | "inline";
-  /** Unset: "private, no-store". A file that never changes under its address may be kept longer. */
+  /** A strong validator of the bytes (quoted, e.g. "\"abc\""): a matching If-None-Match is answered 304. */
+  etag?: string;
+  /** Unset: "private, no-store". E.g. "private, no-cache" for a file that revalidates by its ETag. */
   cacheControl?: string;
 }
 
-function fileResponse(file: FileBody): Response {
+/** If-None-Match lists ETags (or "*"); weak ones compare by their opaque part (RFC 9110 §13.1.2). */
+function etagMatches(header: string | null, etag: string): boolean {
+  if (!header) return false;
+  const bare = (tag: string) => tag.trim().replace(/^W\//, "");
+  return header.split(",").some((tag) => tag.trim() === "*" || bare(tag) === bare(etag));
+}
+
+async function fileResponse(file: FileBody, request: Request): Promise<Response> {
   const name = file.fileName.replace(/[^\w.-]+/g, "_");
-  const length = file.bytes instanceof Uint8Array ? file.bytes.byteLength : file.sizeBytes;
-  return new Response(file.bytes as BodyInit, {
+  const cache = { "cache-control": file.cacheControl ?? "private, no-store", ...(file.etag ? { etag: file.etag } : {}) };
+  if (file.etag && etagMatches(request.headers.get("if-none-match"), file.etag)) return new Response(null, { status: 304, headers: cache });
+  const bytes = typeof file.bytes === "function" ? await file.bytes() : file.bytes;
+  const length = bytes instanceof Uint8Array ? bytes.byteLength : file.sizeBytes;
+  return new Response(bytes as BodyInit, {
     headers: {
       "content-type": file.contentType,
       ...(length === null || length === undefined ? {} : { "content-length": String(length) }),
       "content-disposition": `${file.disposition}; filename="${name}"`,
       "x-content-type-options": "nosniff",
-      "cache-control": file.cacheControl ?? "private, no-store",
+      ...cache,
     },
   });
 }
@@ -118,7 +133,7 @@ export function route<T, P = undefined, Q = undefined, B = undefined>(
       const result = await handler({ viewer: viewer as Viewer, request, ...input.data });
       if (!result.ok) return errorResponse(result.error);
       if (spec.status === 204) return new Response(null, { status: 204 });
-      if (spec.respond === "file") return fileResponse(result.data as FileBody);
+      if (spec.respond === "file") return await fileResponse(result.data as FileBody, request);
       return Response.json(result.data, { status: spec.status ?? 200 });
     } catch (error) {
       return errorResponse(internalError(error, `${request.method} ${new URL(request.url).pathname}`));

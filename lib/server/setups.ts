@@ -77,8 +77,8 @@ function toView(setup: setupsDb.StoredSetup): SetupView {
   return { id: row.id, version: row.version, status: row.status, draft, result, worstFlag: row.worstFlag };
 }
 
-async function createFromDraft(viewer: Viewer, draft: SetupDraft, path: string): Promise<Result<{ id: string; version: number; result: BalanceResult }>> {
-  const evaluated = await evaluateDraft({ draft, ownerId: viewer.id, path });
+async function createFromDraft(viewer: Viewer, draft: SetupDraft, path: string, forNewSetup = true): Promise<Result<{ id: string; version: number; result: BalanceResult }>> {
+  const evaluated = await evaluateDraft({ draft, ownerId: viewer.id, path, forNewSetup });
   if (!evaluated.ok) return evaluated;
   const id = await setupsDb.createSetup({ ownerId: viewer.id, draft, evaluated: evaluated.data });
   return ok({ id, version: 1, result: evaluated.data.result });
@@ -103,7 +103,8 @@ export async function createSetup({
 export async function duplicateSetup({ viewer, id }: { viewer: Viewer; id: string }): Promise<Result<{ id: string; version: number; result: BalanceResult }>> {
   const source = await setupsDb.getSetupById({ id, ownerId: viewer.id });
   if (!source) return notYours(viewer, id);
-  return createFromDraft(viewer, { ...source.draft, name: `Copy of ${source.draft.name}`.slice(0, 120) }, "draft");
+  // A copy of a working setup keeps what it names, retired or not.
+  return createFromDraft(viewer, { ...source.draft, name: `Copy of ${source.draft.name}`.slice(0, 120) }, "draft", false);
 }
 
 /** Saves with the version that was read; a stale version is a conflict and nothing is written. */

@@ -1,4 +1,4 @@
-import { gasVolumeFromLiftMeasurementM3, type BalanceInput, type HullParams, type LimitsInput } from "@/lib/balance";
+import { dayLiftCheck, setupMass, type BalanceInput, type DayLiftCheckResult, type HullParams, type LimitsInput } from "@/lib/balance";
 import type { Attachment, Thread } from "@/lib/domain";
 import type { SetupDraft } from "./setup-draft";
 
@@ -21,9 +21,8 @@ export interface ModelSpec {
 }
 export interface UnitSpec {
   measuredMassKg: number;
-  measuredGrossLiftKg: number;
-  measuredAtTemperatureC: number;
-  measuredAtAltitudeM: number;
+  /** Measured ÷ predicted gross lift at the unit's latest lift test (lib/setups/calibration.ts); null: not tested. */
+  calibrationFactor: number | null;
 }
 export interface MountSpec {
   thread: Thread;
@@ -46,17 +45,48 @@ export interface SetupCatalogue {
 /**
  * Turns a setup and the catalogue rows it names into the engine's input. The same function runs in
  * the Planner (live) and on the server (stored result), so both always agree.
- * A serial unit's weighed mass replaces the model's nominal mass, and its weighed gross lift gives
- * the gas volume it really holds in place of the model's drawn volume.
+ * A serial unit's weighed mass replaces the model's nominal mass, and its calibration factor scales
+ * the model's drawn volume to the volume it really holds. A day's lift check, when the person
+ * entered one and it can be used, then replaces the purity (or the volume) with the one it implies.
  */
 export function toBalanceInput(draft: SetupDraft, catalogue: SetupCatalogue): BalanceInput {
+  const planned = plannedBalanceInput(draft, catalogue);
+  const check = liftCheckOf(draft, planned);
+  if (!check || check.problem) return planned;
+  return {
+    ...planned,
+    envelope: { ...planned.envelope, gasVolumeM3: check.gasVolumeM3 },
+    gas: { ...planned.gas, purity: check.purity },
+  };
+}
+
+/** What the day's lift check of this draft implies, against the input as planned; null without one. */
+export function liftCheckOf(draft: SetupDraft, planned: BalanceInput): DayLiftCheckResult | null {
+  const check = draft.liftCheck;
+  if (!check) return null;
+  return dayLiftCheck({
+    freeLiftKg: check.freeLiftKg,
+    weighedMassKg: check.weighedWith === "setup" ? setupMass(planned).totalMassKg : planned.envelope.massKg,
+    temperatureC: check.temperatureC,
+    altitudeM: draft.site.altitudeM,
+    ...(draft.site.pressurePa === null ? {} : { pressurePa: draft.site.pressurePa }),
+    superheatK: draft.gas.superheatK,
+    fillFraction: draft.gas.fillFraction,
+    gasVolumeM3: planned.envelope.gasVolumeM3,
+    purity: draft.gas.purity,
+    solveFor: check.solveFor,
+  });
+}
+
+const usableFactor = (factor: number | null | undefined): number => (factor !== null && factor !== undefined && Number.isFinite(factor) && factor > 0 ? factor : 1);
+
+/** The engine's input from the draft as entered, before any lift check. */
+export function plannedBalanceInput(draft: SetupDraft, catalogue: SetupCatalogue): BalanceInput {
   const { model, unit, mount, adaptersById } = catalogue;
   const site = draft.site;
   return {
     envelope: {
-      gasVolumeM3: unit
-        ? gasVolumeFromLiftMeasurementM3({ grossLiftKg: unit.measuredGrossLiftKg, altitudeM: unit.measuredAtAltitudeM, temperatureC: unit.measuredAtTemperatureC })
-        : model.gasVolumeM3,
+      gasVolumeM3: model.gasVolumeM3 * (unit ? usableFactor(unit.calibrationFactor) : 1),
       massKg: unit?.measuredMassKg ?? model.nominalMassKg,
       buoyancyCentre: { x: model.buoyancyCentreXM, z: model.buoyancyCentreZM },
       massCentre: { x: model.massCentreXM, z: model.massCentreZM },

@@ -1,5 +1,5 @@
 import { z } from "zod";
-import { ATTACHMENTS, INPUT_LIMITS, MAX_NAME_LENGTH, MAX_PAYLOADS_PER_SETUP, PAYLOAD_CATEGORIES, PAYLOAD_SHAPES, type InputLimitKey } from "@/lib/domain";
+import { ATTACHMENTS, INPUT_LIMITS, LIFT_CHECK_LOADS, LIFT_CHECK_UNKNOWNS, MAX_NAME_LENGTH, MAX_PAYLOADS_PER_SETUP, PAYLOAD_CATEGORIES, PAYLOAD_SHAPES, type InputLimitKey } from "@/lib/domain";
 
 // What a person edits in the Planner and what the server stores: the inputs of a setup, never its
 // computed balance (the server recomputes that from these and the catalogue).
@@ -29,6 +29,14 @@ export const setupPayloadDraftSchema = z.object({
   offsetZM: bounded("payloadOffsetZM"),
 });
 
+/** The day's lift check: the free lift weighed at the field, the air temperature then, what hung on it, what it settles. */
+export const liftCheckDraftSchema = z.object({
+  freeLiftKg: bounded("liftCheckFreeLiftKg"),
+  temperatureC: bounded("temperatureC"),
+  weighedWith: z.enum(LIFT_CHECK_LOADS, { message: `What hung on it must be one of ${LIFT_CHECK_LOADS.join(", ")}.` }),
+  solveFor: z.enum(LIFT_CHECK_UNKNOWNS, { message: `The check settles one of ${LIFT_CHECK_UNKNOWNS.join(", ")}.` }),
+});
+
 export const setupDraftSchema = z.object({
   name: name("Give the setup a name."),
   modelId: id,
@@ -56,7 +64,10 @@ export const setupDraftSchema = z.object({
     })
     .nullable(),
   payloads: z.array(setupPayloadDraftSchema).max(MAX_PAYLOADS_PER_SETUP, `At most ${MAX_PAYLOADS_PER_SETUP} payloads on one mount.`),
+  /** Absent or null: no lift check today; the gas is as entered. */
+  liftCheck: liftCheckDraftSchema.nullable().optional(),
 });
 
 export type SetupDraft = z.infer<typeof setupDraftSchema>;
 export type SetupPayloadDraft = z.infer<typeof setupPayloadDraftSchema>;
+export type LiftCheckDraft = z.infer<typeof liftCheckDraftSchema>;

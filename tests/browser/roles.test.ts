@@ -71,21 +71,23 @@ describe("signing in as each demo role in Chromium", () => {
     });
   }
 
-  it("lets the maker change a role in the Workshop, and the change holds after a reload", async () => {
+  it("lets the maker change a role in the Workshop after confirming it, and the change holds after a reload", async () => {
     const context = await newPersonContext(browser, baseURL);
     const page = await context.newPage();
     const signIn = new SignInPage(page);
-    await signIn.open("/workshop");
+    await signIn.open("/workshop/people");
     await signIn.signIn("maker@trimrail.test", DEMO_PASSWORD);
-    await page.waitForURL(/\/workshop$/);
-    const orrinRole = page.getByTestId("workshop-users").getByRole("row", { name: /orrin@trimrail\.test/ }).getByLabel("Role");
-    await expect(orrinRole.inputValue()).resolves.toBe("support");
-    await orrinRole.selectOption("customer");
-    await expect.poll(() => page.getByTestId("workshop-users").getByRole("status").first().innerText()).toBe("saved");
-    await page.reload();
-    await expect(orrinRole.inputValue()).resolves.toBe("customer");
-    await orrinRole.selectOption("support");
-    await expect.poll(() => page.getByTestId("workshop-users").getByRole("status").first().innerText()).toBe("saved");
+    await page.waitForURL(/\/workshop\/people$/);
+    const orrin = () => page.getByTestId("workshop-users").getByRole("row", { name: /orrin@trimrail\.test/ }).getByTestId("role-select");
+    await expect(orrin().getAttribute("data-role")).resolves.toBe("support");
+    for (const role of ["customer", "support"] as const) {
+      await orrin().getByLabel("Role of Orrin Pell").selectOption(role);
+      await orrin().getByRole("button", { name: "Change Orrin Pell's role…" }).click();
+      await orrin().getByRole("button", { name: `Yes, make Orrin Pell ${role}` }).click();
+      await expect.poll(() => orrin().getByRole("status").innerText()).toBe(`Orrin Pell is now ${role}.`);
+      await page.reload();
+      await expect(orrin().getAttribute("data-role")).resolves.toBe(role);
+    }
     await context.close();
   });
 

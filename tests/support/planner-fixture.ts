@@ -1,5 +1,5 @@
 import { DEMO_ADAPTERS, DEMO_MODELS, DEMO_MOUNTS, DEMO_SETUPS, DEMO_TEMPLATES, DEMO_UNITS } from "../../db/seed-data";
-import { demoModelRow, demoSetupDraft } from "../../db/seed";
+import { demoCalibratedUnit, demoModelRow, demoSetupDraft } from "../../db/seed";
 import { toPlannerCatalogue } from "../../components/planner/to-planner-catalogue";
 import type { PlannerData } from "../../components/planner/types";
 
@@ -9,7 +9,7 @@ export function plannerDataFor(setupId: string): PlannerData {
   if (!setup) throw new Error(`no demo setup ${setupId}`);
   const catalogue = toPlannerCatalogue({
     models: DEMO_MODELS.map((m) => demoModelRow(m) as Parameters<typeof toPlannerCatalogue>[0]["models"][number]),
-    units: DEMO_UNITS.filter((u) => u.ownerId === setup.ownerId).map((u) => ({ ...u })),
+    units: DEMO_UNITS.filter((u) => u.ownerId === setup.ownerId).map(demoCalibratedUnit),
     mounts: DEMO_MOUNTS.map((m) => ({ ...m })),
     adapters: DEMO_ADAPTERS.map((a) => ({ ...a })),
     templates: DEMO_TEMPLATES.map((t) => ({ ...t })),

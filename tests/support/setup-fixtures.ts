@@ -1,7 +1,8 @@
 import { eq, inArray } from "drizzle-orm";
 import { expect } from "vitest";
 import type { openDatabase } from "../../db/index";
-import { adapters, envelopeModels, envelopeUnits, mounts } from "../../db/schema";
+import { adapters, envelopeModels, envelopeUnits, mounts, unitLiftTests } from "../../db/schema";
+import { latestLiftTest, unitCalibrationFactor } from "../../lib/setups/calibration";
 import { evaluateBalance, worstLevel, type FlagLevel } from "../../lib/balance";
 import { toBalanceInput, type SetupCatalogue } from "../../lib/setups/balance-input";
 import type { SetupDraft } from "../../lib/setups/setup-draft";
@@ -13,7 +14,9 @@ type Db = ReturnType<typeof openDatabase>["db"];
 export async function catalogueFor(db: Db, draft: SetupDraft): Promise<SetupCatalogue> {
   const [model] = await db.select().from(envelopeModels).where(eq(envelopeModels.id, draft.modelId));
   const [mount] = await db.select().from(mounts).where(eq(mounts.id, draft.mountId));
-  const [unit] = draft.unitId ? await db.select().from(envelopeUnits).where(eq(envelopeUnits.id, draft.unitId)) : [];
+  const [unitRow] = draft.unitId ? await db.select().from(envelopeUnits).where(eq(envelopeUnits.id, draft.unitId)) : [];
+  const tests = unitRow ? await db.select().from(unitLiftTests).where(eq(unitLiftTests.unitId, unitRow.id)) : [];
+  const unit = unitRow && model ? { ...unitRow, calibrationFactor: unitCalibrationFactor(model.gasVolumeM3, latestLiftTest(tests)) } : undefined;
   const adapterIds = draft.payloads.map((p) => p.adapterId).filter((id): id is string => id !== null);
   const adapterRows = adapterIds.length ? await db.select().from(adapters).where(inArray(adapters.id, adapterIds)) : [];
   expect(model, `model ${draft.modelId}`).toBeDefined();
