@@ -54,9 +54,9 @@ async function grossLiftOf(draft: Awaited<ReturnType<typeof draftOf>>["draft"], 
   return evaluated.data.result.grossLiftKg;
 }
 
-describe("the first-weighing backfill of migration 0002", () => {
+describe("the first-weighing backfill of the workshop migration", () => {
   it("returns each unit's single weighing as its first lift test", async () => {
-    const sql = readFileSync(path.join(MIGRATIONS_FOLDER, "0002_workshop.sql"), "utf8");
+    const sql = readFileSync(path.join(MIGRATIONS_FOLDER, "0003_workshop.sql"), "utf8");
     const backfill = sql.slice(sql.indexOf("INSERT INTO `unit_lift_tests`"));
     const { client, db: fresh } = openDatabase(`file:${path.join(dir, "backfill.db")}`);
     await migrateDatabase(fresh);
