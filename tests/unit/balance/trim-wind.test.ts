@@ -136,17 +136,24 @@ describe("evaluateBalance in wind", () => {
     expect(Math.tan((wind.tetherAngleDeg * Math.PI) / 180)).toBeCloseTo(wind.dragN / verticalN, 9);
   });
 
-  it("flies as a kite without free lift when the sail lifts enough, and flags a stop when it cannot", () => {
+  it("returns no wind case and stop flags that say it does not fly when it has no free lift, whatever the sail would lift", () => {
     const setup = demoSetup();
     const heavy: BalanceInput = { ...setup, payloads: [{ ...setup.payloads[0], massKg: 0.65 }] };
     const calm = evaluateBalance({ ...heavy, site: { ...heavy.site, windMS: 0 } });
     expect(calm.freeLiftKg).toBeLessThan(0);
     expect(calm.wind).toBeNull();
-    const breezy = evaluateBalance({ ...heavy, site: { ...heavy.site, windMS: 9 } });
-    expect(breezy.wind?.liftN ?? 0).toBeGreaterThan(0);
-    const still = evaluateBalance({ ...heavy, site: { ...heavy.site, windMS: 0.5 } });
-    expect(still.wind).toBeNull();
-    expect(flagLevels(still, "trim-wind")).toEqual(["stop"]);
+    // In 9 m/s the sail alone would hold it up as a kite, but it cannot be launched and falls in a lull.
+    const breezy = evaluateBalance({ ...heavy, site: { ...heavy.site, windMS: 9, gustMS: 12 } });
+    expect(breezy.wind).toBeNull();
+    expect(breezy.gust).toBeNull();
+    for (const code of ["trim-wind", "trim-gust"] as const) {
+      const flag = breezy.flags.find((f) => f.code === code);
+      expect(flag?.level).toBe("stop");
+      expect(flag?.params).toMatchObject({ failure: "no-free-lift" });
+      expect(flag?.message).toMatch(/it does not fly/);
+    }
+    // No ok flag speaks of the wind: neither trim nor tether angle.
+    expect(breezy.flags.filter((f) => /wind|gust/.test(f.code) && f.level === "ok")).toEqual([]);
   });
 
   it("reports the gust case at gustMS and none without it", () => {
