@@ -227,7 +227,7 @@ const MESSAGES: { readonly [C in FlagCode]: Wording<C> } = {
   },
 
   "tether-on-ground": ({ figures: { onGround, lineOut, speed }, params }, say) =>
-    `${capitalised(inCase(params.case, speed, say))} ${say.value(onGround)} of the ${say.value(lineOut)} of tether out ` +
+    `${capitalised(inCase(params.case, speed, say))}, ${say.value(onGround)} of the ${say.value(lineOut)} of tether out ` +
     "lies on the ground: the lifter cannot hold its line up in that wind and flies lower, and the line can snag or be walked over.",
 
   "helium-top-up": ({ figures: { topUpAfter, lossPerDay, freeLiftRatio }, params }, say) =>

@@ -108,10 +108,10 @@ function windNear(loads: Loads, z: number, z0: number, wind0: number): number {
 /** d(H, V, x, z)/dσ at tension (h, v) in a wind of windMS, into dH, dV, dX, dZ. */
 function derivative(loads: Loads, h: number, v: number, windMS: number): void {
   const tension = Math.sqrt(h * h + v * v);
-  // A slack point (no tension at all) only happens in still air where the line meets the ground:
-  // it hangs straight down there.
+  // With no horizontal tension (still air) the line hangs straight down, also at a stage that
+  // looks a hair past the touchdown (V a rounding below zero) and where it goes slack (T = 0).
   const c = tension > 0 ? h / tension : 0;
-  const n = tension > 0 ? v / tension : 1;
+  const n = tension > 0 && h > 0 ? v / tension : 1;
   let fx = 0;
   let fz = -loads.w;
   if (loads.drag) {
@@ -148,6 +148,36 @@ function rk4Step(loads: Loads, h: number, v: number, x: number, z: number, wind:
   sX = x + sixth * (x1 + 2 * x2 + 2 * x3 + dX);
   sZ = z + sixth * (z1 + 2 * z2 + 2 * z3 + dZ);
   sWind = loads.drag ? windNear(loads, sZ, zd, windD) : 0;
+}
+
+/**
+ * The displacement along a piece of line of length `lengthM` whose tension goes linearly from
+ * (h0, v0) to (h1, v1), i.e. under a constant load f = ΔP/length: into sX, sZ. With f along the
+ * unit u and e ⊥ u, P = a(σ)·u + b·e with a growing at |f| per metre, and the line's direction
+ * P/|P| integrates to u·(|P₁| − |P₀|)/|f| + e·(b/|f|)·(asinh(a₁/|b|) − asinh(a₀/|b|)), the
+ * catenary's integrals (Irvine, Cable Structures) about the load's direction.
+ */
+function straightLoadPiece(h0: number, v0: number, h1: number, v1: number, lengthM: number): void {
+  const fx = (h1 - h0) / lengthM, fz = (v1 - v0) / lengthM;
+  const load = Math.hypot(fx, fz);
+  const t0 = Math.hypot(h0, v0);
+  if (!(load > 0) || !(lengthM > 0)) {
+    sX = t0 > 0 ? (-lengthM * h0) / t0 : 0;
+    sZ = t0 > 0 ? (-lengthM * v0) / t0 : -lengthM;
+    return;
+  }
+  const ux = fx / load, uz = fz / load;
+  const ex = -uz, ez = ux;
+  const a0 = h0 * ux + v0 * uz, a1 = h1 * ux + v1 * uz;
+  const b = h0 * ex + v0 * ez;
+  const along = (Math.hypot(h1, v1) - t0) / load;
+  // Sideways tension this small bends the piece by b·ln(1/b) → 0, below rounding: none at all.
+  const across = Math.abs(b) <= 1e-12 * (t0 + Math.hypot(h1, v1))
+    ? 0
+    : (b / load) * (Math.asinh(a1 / Math.abs(b)) - Math.asinh(a0 / Math.abs(b)));
+  // The line runs against its tension going down: the displacement is minus the integral.
+  sX = -(along * ux + across * ex);
+  sZ = -(along * uz + across * ez);
 }
 
 /**
@@ -189,7 +219,12 @@ export function integrateLine(
       }
       const touchDs = Math.abs(lowV) <= Math.abs(highV) ? lowDs : highDs;
       rk4Step(loads, h, v, x, z, wind, touchDs);
-      h = sH; v = 0; x = sX; z = sZ;
+      // The line turns sharply where it meets the ground when little pulls it sideways (its
+      // bend radius there is H/w), too sharply for the stages of a step. Over this last piece the
+      // load is taken as constant (the step's mean), which makes the piece a catenary about the
+      // load's direction, integrated exactly: the tension at both ends is RK4's.
+      straightLoadPiece(h, v, sH, 0, touchDs);
+      h = sH; v = 0; x += sX; z += sZ;
       hungM = step * ds + touchDs;
       break;
     }

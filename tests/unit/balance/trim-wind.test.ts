@@ -162,3 +162,24 @@ describe("evaluateBalance in wind", () => {
     expect(evaluateBalance({ ...setup, site: { windMS: 4 } }).gust).toBeNull();
   });
 });
+
+describe("evaluateBalance with induced drag", () => {
+  it("returns the old drag without an aspect ratio, and C_D = C_D0 + C_L²/(π·e·AR) with one (lifting-line theory; e = 0.7, common practice)", () => {
+    const demo = demoSetup();
+    // Uniform wind and no tether, so the wind at the lifter is the wind given.
+    const setup: BalanceInput = { ...demo, site: { windMS: 6, windShearExponent: 0 }, tether: undefined };
+    const aero = setup.envelope.aero!;
+    const plain = evaluateBalance(setup).wind!;
+    const withAr = evaluateBalance({ ...setup, envelope: { ...setup.envelope, aero: { ...aero, aspectRatio: 1.5 } } }).wind!;
+    const q = withAr.dynamicPressurePa;
+    const cl = aero.liftSlopePerRad * ((withAr.trimDeg - aero.zeroLiftTrimDeg) * Math.PI) / 180;
+    const payloadAreaM2 = (setup.payloads[0].dragAreaM2 ?? 0) + 1.05 * setup.payloads[1].size!.widthM * setup.payloads[1].size!.heightM;
+    const expectedN = q * (aero.sailAreaM2 * (aero.dragCoefficient + (cl * cl) / (Math.PI * 0.7 * 1.5)) + payloadAreaM2);
+    expect(withAr.dragN).toBeCloseTo(expectedN, 9);
+    expect(withAr.dragN).toBeGreaterThan(plain.dragN);
+    expect(withAr.tetherAngleDeg).toBeGreaterThan(plain.tetherAngleDeg);
+    // A stated span efficiency replaces the default: e = 1 (elliptic loading) drags least.
+    const elliptic = evaluateBalance({ ...setup, envelope: { ...setup.envelope, aero: { ...aero, aspectRatio: 1.5, spanEfficiency: 1 } } }).wind!;
+    expect(elliptic.dragN).toBeLessThan(withAr.dragN);
+  });
+});
