@@ -21,12 +21,17 @@ export function columnsFromDraft(draft: SetupDraft) {
     pressurePa: draft.site.pressurePa,
     windMS: draft.site.windMS,
     gustMS: draft.site.gustMS,
+    windMeasuredAtM: draft.site.windMeasuredAtM,
+    windShearExponent: draft.site.windShearExponent,
+    relativeHumidity: draft.site.relativeHumidity,
     purity: draft.gas.purity,
     superheatK: draft.gas.superheatK,
     fillFraction: draft.gas.fillFraction,
     tetherMassPerMetreKg: draft.tether?.massPerMetreKg ?? null,
     tetherLengthOutM: draft.tether?.lengthOutM ?? null,
     tetherBreakingLoadN: draft.tether?.breakingLoadN ?? null,
+    tetherDiameterM: draft.tether?.diameterM ?? null,
+    targetHeightM: draft.targetHeightM,
   } satisfies Partial<SetupRow>;
 }
 
@@ -46,7 +51,7 @@ export function payloadRowsFromDraft(setupId: string, draft: SetupDraft, idFor: 
 export function draftFromRows(row: SetupRow, payloadRows: readonly SetupPayloadRow[]): SetupDraft {
   const tether =
     row.tetherMassPerMetreKg !== null && row.tetherLengthOutM !== null && row.tetherBreakingLoadN !== null
-      ? { massPerMetreKg: row.tetherMassPerMetreKg, lengthOutM: row.tetherLengthOutM, breakingLoadN: row.tetherBreakingLoadN }
+      ? { massPerMetreKg: row.tetherMassPerMetreKg, lengthOutM: row.tetherLengthOutM, breakingLoadN: row.tetherBreakingLoadN, diameterM: row.tetherDiameterM }
       : null;
   return {
     name: row.name,
@@ -61,9 +66,13 @@ export function draftFromRows(row: SetupRow, payloadRows: readonly SetupPayloadR
       pressurePa: row.pressurePa,
       windMS: row.windMS,
       gustMS: row.gustMS,
+      windMeasuredAtM: row.windMeasuredAtM,
+      windShearExponent: row.windShearExponent,
+      relativeHumidity: row.relativeHumidity,
     },
     gas: { purity: row.purity, superheatK: row.superheatK, fillFraction: row.fillFraction },
     tether,
+    targetHeightM: row.targetHeightM,
     payloads: [...payloadRows]
       .sort((a, b) => a.sortOrder - b.sortOrder)
       .map((p) => ({

@@ -43,6 +43,11 @@ export interface SetupCatalogue {
   adaptersById: Readonly<Record<string, AdapterSpec>>;
 }
 
+function tetherInput(tether: NonNullable<SetupDraft["tether"]>): NonNullable<BalanceInput["tether"]> {
+  const { diameterM, ...line } = tether;
+  return diameterM === null ? line : { ...line, diameterM };
+}
+
 /**
  * Turns a setup and the catalogue rows it names into the engine's input. The same function runs in
  * the Planner (live) and on the server (stored result), so both always agree.
@@ -73,6 +78,9 @@ export function toBalanceInput(draft: SetupDraft, catalogue: SetupCatalogue): Ba
       ...(site.pressurePa === null ? {} : { pressurePa: site.pressurePa }),
       windMS: site.windMS,
       ...(site.gustMS === null ? {} : { gustMS: site.gustMS }),
+      windMeasuredAtM: site.windMeasuredAtM,
+      windShearExponent: site.windShearExponent,
+      ...(site.relativeHumidity === null ? {} : { relativeHumidity: site.relativeHumidity }),
     },
     mount: {
       positionX: draft.mountPositionXM,
@@ -93,6 +101,6 @@ export function toBalanceInput(draft: SetupDraft, catalogue: SetupCatalogue): Ba
         dragAreaM2: p.dragAreaM2,
       };
     }),
-    ...(draft.tether ? { tether: { ...draft.tether } } : {}),
+    ...(draft.tether ? { tether: tetherInput(draft.tether) } : {}),
   };
 }

@@ -10,6 +10,7 @@ import {
   profileRadiusAt,
   tetherClearanceM,
   type BalanceInput,
+  type Flag,
 } from "@/lib/balance";
 import { demoSetup, flagLevels } from "./setups";
 
@@ -69,7 +70,7 @@ describe("evaluateBalance tether clearance, with the line on its upwind side", (
     };
     const whip = evaluateBalance(mirrored).flags.find((f) => f.code === "clearance-tether" && f.payloads?.[0].index === 0);
     expect(whip?.level).toBe("ok");
-    expect(whip!.figures.gap.value).toBeGreaterThan(0.05);
+    expect((whip as Flag<"clearance-tether">).figures.gap.value).toBeGreaterThan(0.05);
   });
 
   it("returns the payload hanging aft in touch with the line when the trim exceeds the tether angle (the line then leans aft in the body frame)", () => {
