@@ -231,7 +231,8 @@ const MESSAGES: { readonly [C in FlagCode]: Wording<C> } = {
     "lies on the ground: the lifter cannot hold its line up in that wind and flies lower, and the line can snag or be walked over.",
 
   "helium-top-up": ({ figures: { topUpAfter, lossPerDay, freeLiftRatio }, params }, say) =>
-    `Top up after about ${say.value(topUpAfter)}: losing ${say.value(lossPerDay)} of the gas a day${LOSS_WORDS[params.lossSource]}, free lift ` +
+    // A flag stored before the loss had a source has no lossSource: it says nothing of one.
+    `Top up after about ${say.value(topUpAfter)}: losing ${say.value(lossPerDay)} of the gas a day${LOSS_WORDS[params.lossSource] ?? ""}, free lift ` +
     `falls from ${say.value(freeLiftRatio)} of gross lift to the ${say.limit(freeLiftRatio)} caution limit by then.`,
 
   "moored-balloon-rules": ({ level, figures: { gasVolume, diameter } }, say) => {

@@ -295,6 +295,26 @@ describe("flagMessage", () => {
     expect(up.message).toBe("Calm trim is 12.3° nose up; caution beyond ±10.0°. Slide the mount forward.");
   });
 
+  it("returns the message in every flag's JSON, after code and level, as the API, the CLI and the stored result carry it", () => {
+    for (const flag of evaluateBalance(demoSetup()).flags) {
+      const json = JSON.parse(JSON.stringify(flag)) as Record<string, unknown>;
+      expect(Object.keys(json).slice(0, 5)).toEqual(["code", "level", "message", "figures", "params"]);
+      expect(json.message).toBe(flagMessage(flag, "metric"));
+    }
+  });
+
+  it("returns words without a gap for flags stored before their newer parameters existed", () => {
+    const stored = JSON.parse(JSON.stringify(evaluateBalance(demoSetup()).flags)) as Array<{ code: string; params: Record<string, unknown> }>;
+    for (const flag of stored) {
+      // What a result saved before the tether line had: no line end, no loss source.
+      delete flag.params.end;
+      delete flag.params.lossSource;
+      for (const system of ["metric", "imperial"] as const) {
+        expect(flagMessage(flag as unknown as Flag, system)).not.toMatch(/undefined|NaN/);
+      }
+    }
+  });
+
   it("returns the gust's own words for a gust flag", () => {
     const gust = evaluateBalance(demoSetup()).flags.find((f) => f.code === "trim-gust");
     expect(gust?.message).toMatch(/^Trim in gusts of 7\.0 m\/s/);
