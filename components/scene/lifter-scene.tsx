@@ -108,7 +108,7 @@ const Lifter = memo(function Lifter(props: LifterProps) {
 
       <Tether top={tetherWorld} tetherAngleDeg={grounded ? 0 : tetherAngleDeg} groundY={groundY} shape={grounded ? null : tetherLine} />
       {grounded && groundedLabel ? (
-        <GroundLabel text={groundedLabel} position={[0.5 * hullLengthM, groundY + 0.06 * unitM, 0.6 * hullMaxDiameterM]} heightM={0.08 * unitM} />
+        <GroundLabel text={groundedLabel} position={[0.5 * hullLengthM, groundY + 0.04 * unitM, 1.2 * hullMaxDiameterM]} heightM={0.07 * unitM} />
       ) : null}
       <Markers
         buoyancy={buoyancyWorld} mass={massWorld} tether={tetherWorld} sizeM={0.07 * unitM}

@@ -37,6 +37,6 @@ export interface LifterSceneProps {
   tetherLine?: readonly SceneVec[] | null;
   /** The lifter does not fly: it is drawn resting on the ground, level, with its line slack. */
   grounded?: boolean;
-  /** Short text on the ground beside a grounded lifter, in the user's words (e.g. "on the ground: no free lift"). */
+  /** Short text (22 characters at most) on the ground beside a grounded lifter, e.g. "it does not fly". */
   groundedLabel?: string;
 }
