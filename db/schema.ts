@@ -279,6 +279,11 @@ export const setups = sqliteTable(
     pressurePa: real("pressure_pa"), // null: ISA at the altitude
     windMS: real("wind_m_s").notNull().default(0),
     gustMS: real("gust_m_s"),
+    // Where the wind was measured and how it grows with height (the power law); defaults: a 10 m
+    // mast (WMO-No. 8) and α = 1/7 (common practice), as the engine assumes for older rows.
+    windMeasuredAtM: real("wind_measured_at_m").notNull().default(10),
+    windShearExponent: real("wind_shear_exponent").notNull().default(1 / 7),
+    relativeHumidity: real("relative_humidity"), // null: dry air, as ISA
     purity: real("purity").notNull().default(1),
     superheatK: real("superheat_k").notNull().default(0),
     fillFraction: real("fill_fraction").notNull().default(1),
@@ -292,6 +297,9 @@ export const setups = sqliteTable(
     liftCheckTemperatureC: real("lift_check_temperature_c"),
     liftCheckWeighedWith: text("lift_check_weighed_with", { enum: LIFT_CHECK_LOADS }),
     liftCheckSolveFor: text("lift_check_solve_for", { enum: LIFT_CHECK_UNKNOWNS }),
+    tetherDiameterM: real("tether_diameter_m"), // null: no line drag
+    // The payload height the customer wants, for the operating envelope's line out.
+    targetHeightM: real("target_height_m"),
     status: text("status", { enum: SETUP_STATUSES }).notNull().default("draft"),
     // Optimistic concurrency: every write must name the version it read, and bumps it.
     version: integer("version").notNull().default(1),

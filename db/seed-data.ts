@@ -197,17 +197,23 @@ export interface DemoSetup {
   gustMS: number | null;
   purity: number;
   tetherLengthOutM: number;
+  /** Where the wind was read; absent = a 10 m mast. */
+  windMeasuredAtM?: number;
+  /** 0–1; absent = dry air. */
+  relativeHumidity?: number;
+  /** The payload height the customer wants, for the operating envelope. */
+  targetHeightM?: number;
   status: SetupStatus;
   payloads: DemoSetupPayload[];
   daysAgo: number;
 }
 
-const tether = { tetherMassPerMetreKg: 0.0012, tetherBreakingLoadN: 900 } as const;
+const tether = { tetherMassPerMetreKg: 0.0012, tetherBreakingLoadN: 900, tetherDiameterM: 0.0015 } as const;
 export const DEMO_TETHER = tether;
 
 export const DEMO_SETUPS: readonly DemoSetup[] = [
   // Wren Halloway, the demo customer: one in every state.
-  { id: "set-wren-whip", ownerId: "usr-customer-1", name: "Field day VHF whip", modelId: "mdl-ridge-11", unitId: "unit-r11-0007", mountId: "mnt-slider-14", railFraction: 0.5, siteName: "Harrow Down club field", altitudeM: 120, temperatureC: 14, windMS: 4, gustMS: 7, purity: 0.98, tetherLengthOutM: 60, status: "draft", payloads: [{ templateId: "tpl-vhf-whip" }, { templateId: "tpl-th-logger", extraOffsetXM: 0.06 }], daysAgo: 1 },
+  { id: "set-wren-whip", ownerId: "usr-customer-1", name: "Field day VHF whip", modelId: "mdl-ridge-11", unitId: "unit-r11-0007", mountId: "mnt-slider-14", railFraction: 0.5, siteName: "Harrow Down club field", altitudeM: 120, temperatureC: 14, windMS: 4, gustMS: 7, purity: 0.98, tetherLengthOutM: 60, windMeasuredAtM: 2, targetHeightM: 40, status: "draft", payloads: [{ templateId: "tpl-vhf-whip" }, { templateId: "tpl-th-logger", extraOffsetXM: 0.06 }], daysAgo: 1 },
   { id: "set-wren-cam", ownerId: "usr-customer-1", name: "Orchard survey camera", modelId: "mdl-ridge-11", unitId: "unit-r11-0007", mountId: "mnt-slider-14", railFraction: 0.45, siteName: "Quillby orchard", altitudeM: 60, temperatureC: 18, windMS: 3, gustMS: 6, purity: 0.99, tetherLengthOutM: 40, status: "submitted", payloads: [{ templateId: "tpl-action-cam" }], daysAgo: 3 },
   { id: "set-wren-logger", ownerId: "usr-customer-1", name: "Hill logger, small envelope", modelId: "mdl-ridge-06", unitId: "unit-r06-0012", mountId: "mnt-slider-lite", railFraction: 0.5, siteName: "Cold Fell summit", altitudeM: 610, temperatureC: 6, windMS: 5, gustMS: 9, purity: 0.97, tetherLengthOutM: 30, status: "changes_requested", payloads: [{ templateId: "tpl-th-logger" }], daysAgo: 6 },
   { id: "set-wren-strobe", ownerId: "usr-customer-1", name: "Night marker strobe", modelId: "mdl-ridge-06", unitId: "unit-r06-0012", mountId: "mnt-slider-lite", railFraction: 0.55, siteName: "Harrow Down club field", altitudeM: 120, temperatureC: 9, windMS: 2, gustMS: 4, purity: 0.98, tetherLengthOutM: 25, status: "approved", payloads: [{ templateId: "tpl-strobe" }], daysAgo: 12 },
@@ -219,7 +225,7 @@ export const DEMO_SETUPS: readonly DemoSetup[] = [
   { id: "set-tobin-draft", ownerId: "usr-customer-2", name: "Relay, windy day plan", modelId: "mdl-ridge-11", unitId: null, mountId: "mnt-slider-14", railFraction: 0.4, siteName: "Brackwater ridge", altitudeM: 380, temperatureC: 7, windMS: 7, gustMS: 11, purity: 0.98, tetherLengthOutM: 90, status: "draft", payloads: [{ templateId: "tpl-relay-box" }], daysAgo: 1 },
   { id: "set-tobin-approved2", ownerId: "usr-customer-2", name: "Tracker only", modelId: "mdl-ridge-06", unitId: null, mountId: "mnt-slider-lite", railFraction: 0.5, siteName: "Brackwater valley", altitudeM: 210, temperatureC: 12, windMS: 3, gustMS: 5, purity: 0.99, tetherLengthOutM: 40, status: "approved", payloads: [{ templateId: "tpl-gps-tracker", adapterId: "adp-strap-14" }], daysAgo: 30 },
   // Mirela Dunstan: air-quality work.
-  { id: "set-mirela-aq", ownerId: "usr-customer-3", name: "Street-canyon air sampling", modelId: "mdl-ridge-11", unitId: null, mountId: "mnt-slider-14", railFraction: 0.5, siteName: "Fenmarsh allotments", altitudeM: 15, temperatureC: 11, windMS: 3, gustMS: 5, purity: 0.98, tetherLengthOutM: 35, status: "submitted", payloads: [{ templateId: "tpl-aq-pod", adapterId: "adp-strap-14" }], daysAgo: 1 },
+  { id: "set-mirela-aq", ownerId: "usr-customer-3", name: "Street-canyon air sampling", modelId: "mdl-ridge-11", unitId: null, mountId: "mnt-slider-14", railFraction: 0.5, siteName: "Fenmarsh allotments", altitudeM: 15, temperatureC: 11, windMS: 3, gustMS: 5, purity: 0.98, tetherLengthOutM: 35, relativeHumidity: 0.85, status: "submitted", payloads: [{ templateId: "tpl-aq-pod", adapterId: "adp-strap-14" }], daysAgo: 1 },
   { id: "set-mirela-th", ownerId: "usr-customer-3", name: "Profile logger", modelId: "mdl-ridge-06", unitId: "unit-r06-0019", mountId: "mnt-slider-lite", railFraction: 0.5, siteName: "Fenmarsh allotments", altitudeM: 15, temperatureC: 13, windMS: 2, gustMS: 4, purity: 0.99, tetherLengthOutM: 50, status: "approved", payloads: [{ templateId: "tpl-th-logger" }], daysAgo: 25 },
   { id: "set-mirela-both", ownerId: "usr-customer-3", name: "Logger and tracker", modelId: "mdl-ridge-06", unitId: "unit-r06-0019", mountId: "mnt-slider-lite", railFraction: 0.6, siteName: "Fenmarsh allotments", altitudeM: 15, temperatureC: 13, windMS: 4, gustMS: 7, purity: 0.98, tetherLengthOutM: 50, status: "changes_requested", payloads: [{ templateId: "tpl-th-logger" }, { templateId: "tpl-gps-tracker", adapterId: "adp-strap-14", extraOffsetXM: 0.05 }], daysAgo: 5 },
   { id: "set-mirela-draft", ownerId: "usr-customer-3", name: "Air pod on the small envelope", modelId: "mdl-ridge-06", unitId: "unit-r06-0019", mountId: "mnt-slider-lite", railFraction: 0.5, siteName: "Fenmarsh allotments", altitudeM: 15, temperatureC: 11, windMS: 3, gustMS: 5, purity: 0.98, tetherLengthOutM: 35, status: "draft", payloads: [{ templateId: "tpl-aq-pod" }], daysAgo: 0 },

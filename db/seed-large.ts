@@ -3,7 +3,7 @@ import { sql } from "drizzle-orm";
 import { evaluateBalance, worstLevel } from "../lib/balance";
 import { toBalanceInput, type SetupCatalogue } from "../lib/setups/balance-input";
 import type { SetupDraft } from "../lib/setups/setup-draft";
-import type { SetupStatus } from "../lib/domain";
+import { DEFAULT_WIND_MEASUREMENT, type SetupStatus } from "../lib/domain";
 import type { Database } from "./index";
 import * as t from "./schema";
 import { demoModelRow } from "./seed";
@@ -77,9 +77,10 @@ export async function seedLarge(db: Database, { setups, customers, onProgress }:
         unitId: null,
         mountId: mount.id,
         mountPositionXM: model.railStartXM + rand() * (model.railEndXM - model.railStartXM),
-        site: { siteName: pick(PLACES), altitudeM: Math.round(rand() * 1500), temperatureC: Math.round(rand() * 30 - 5), pressurePa: null, windMS: Math.round(rand() * 90) / 10, gustMS: Math.round(rand() * 140) / 10 },
+        site: { siteName: pick(PLACES), altitudeM: Math.round(rand() * 1500), temperatureC: Math.round(rand() * 30 - 5), pressurePa: null, windMS: Math.round(rand() * 90) / 10, gustMS: Math.round(rand() * 140) / 10, ...DEFAULT_WIND_MEASUREMENT, relativeHumidity: null },
         gas: { purity: 0.9 + Math.round(rand() * 10) / 100, superheatK: 0, fillFraction: 1 },
-        tether: { massPerMetreKg: 0.0012, lengthOutM: 20 + Math.round(rand() * 130), breakingLoadN: 900 },
+        tether: { massPerMetreKg: 0.0012, lengthOutM: 20 + Math.round(rand() * 130), breakingLoadN: 900, diameterM: null },
+        targetHeightM: null,
         payloads: templates.map((tpl) => ({ templateId: tpl.id, name: tpl.name, category: tpl.category, massKg: tpl.massKg, shape: tpl.shape, lengthM: tpl.lengthM, widthM: tpl.widthM, heightM: tpl.heightM, attachment: tpl.attachment, adapterId: tpl.attachment === mount.thread ? null : (DEMO_ADAPTERS.find((a) => a.fromThread === tpl.attachment && a.toThread === mount.thread)?.id ?? null), dragAreaM2: tpl.dragAreaM2, offsetXM: tpl.offsetXM, offsetZM: tpl.offsetZM })),
       };
       const catalogue: SetupCatalogue = { model: model as SetupCatalogue["model"], unit: null, mount, adaptersById };

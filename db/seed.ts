@@ -1,6 +1,7 @@
 import { hashPassword } from "better-auth/crypto";
 import { eq } from "drizzle-orm";
 import { deriveEnvelopeGeometry, demoHulls, evaluateBalance, worstLevel, type DemoHullName } from "@/lib/balance";
+import { DEFAULT_WIND_MEASUREMENT } from "@/lib/domain";
 import { toBalanceInput, type SetupCatalogue } from "@/lib/setups/balance-input";
 import { latestLiftTest, unitCalibrationFactor } from "@/lib/setups/calibration";
 import type { SetupDraft } from "@/lib/setups/setup-draft";
@@ -75,9 +76,18 @@ export function demoSetupDraft(s: DemoSetup, railStartXM: number, railEndXM: num
     unitId: s.unitId,
     mountId: s.mountId,
     mountPositionXM: railStartXM + s.railFraction * (railEndXM - railStartXM),
-    site: { siteName: s.siteName, altitudeM: s.altitudeM, temperatureC: s.temperatureC, pressurePa: null, windMS: s.windMS, gustMS: s.gustMS },
+    site: {
+      siteName: s.siteName, altitudeM: s.altitudeM, temperatureC: s.temperatureC, pressurePa: null, windMS: s.windMS, gustMS: s.gustMS,
+      windMeasuredAtM: s.windMeasuredAtM ?? DEFAULT_WIND_MEASUREMENT.windMeasuredAtM,
+      windShearExponent: DEFAULT_WIND_MEASUREMENT.windShearExponent,
+      relativeHumidity: s.relativeHumidity ?? null,
+    },
     gas: { purity: s.purity, superheatK: 0, fillFraction: 1 },
-    tether: { massPerMetreKg: DEMO_TETHER.tetherMassPerMetreKg, lengthOutM: s.tetherLengthOutM, breakingLoadN: DEMO_TETHER.tetherBreakingLoadN },
+    tether: {
+      massPerMetreKg: DEMO_TETHER.tetherMassPerMetreKg, lengthOutM: s.tetherLengthOutM, breakingLoadN: DEMO_TETHER.tetherBreakingLoadN,
+      diameterM: DEMO_TETHER.tetherDiameterM,
+    },
+    targetHeightM: s.targetHeightM ?? null,
     payloads: s.payloads.map((p) => {
       const tpl = DEMO_TEMPLATES.find((x) => x.id === p.templateId);
       if (!tpl) throw new Error(`seed: unknown template ${p.templateId}`);

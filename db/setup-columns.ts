@@ -22,6 +22,9 @@ export function columnsFromDraft(draft: SetupDraft) {
     pressurePa: draft.site.pressurePa,
     windMS: draft.site.windMS,
     gustMS: draft.site.gustMS,
+    windMeasuredAtM: draft.site.windMeasuredAtM,
+    windShearExponent: draft.site.windShearExponent,
+    relativeHumidity: draft.site.relativeHumidity,
     purity: draft.gas.purity,
     superheatK: draft.gas.superheatK,
     fillFraction: draft.gas.fillFraction,
@@ -32,6 +35,8 @@ export function columnsFromDraft(draft: SetupDraft) {
     liftCheckTemperatureC: draft.liftCheck?.temperatureC ?? null,
     liftCheckWeighedWith: draft.liftCheck?.weighedWith ?? null,
     liftCheckSolveFor: draft.liftCheck?.solveFor ?? null,
+    tetherDiameterM: draft.tether?.diameterM ?? null,
+    targetHeightM: draft.targetHeightM,
   } satisfies Partial<SetupRow>;
 }
 
@@ -51,7 +56,7 @@ export function payloadRowsFromDraft(setupId: string, draft: SetupDraft, idFor: 
 export function draftFromRows(row: SetupRow, payloadRows: readonly SetupPayloadRow[]): SetupDraft {
   const tether =
     row.tetherMassPerMetreKg !== null && row.tetherLengthOutM !== null && row.tetherBreakingLoadN !== null
-      ? { massPerMetreKg: row.tetherMassPerMetreKg, lengthOutM: row.tetherLengthOutM, breakingLoadN: row.tetherBreakingLoadN }
+      ? { massPerMetreKg: row.tetherMassPerMetreKg, lengthOutM: row.tetherLengthOutM, breakingLoadN: row.tetherBreakingLoadN, diameterM: row.tetherDiameterM }
       : null;
   const liftCheck =
     row.liftCheckFreeLiftKg !== null && row.liftCheckTemperatureC !== null && row.liftCheckWeighedWith !== null && row.liftCheckSolveFor !== null
@@ -70,9 +75,13 @@ export function draftFromRows(row: SetupRow, payloadRows: readonly SetupPayloadR
       pressurePa: row.pressurePa,
       windMS: row.windMS,
       gustMS: row.gustMS,
+      windMeasuredAtM: row.windMeasuredAtM,
+      windShearExponent: row.windShearExponent,
+      relativeHumidity: row.relativeHumidity,
     },
     gas: { purity: row.purity, superheatK: row.superheatK, fillFraction: row.fillFraction },
     tether,
+    targetHeightM: row.targetHeightM,
     payloads: [...payloadRows]
       .sort((a, b) => a.sortOrder - b.sortOrder)
       .map((p) => ({

@@ -4,7 +4,8 @@
  * CLI and the UI say the same thing. Pure: safe in client components and in the engine.
  */
 import type { FlagCode, FlagLevel, UnitSystem } from "@/lib/domain";
-import type { AirCase, Figure, FlagData, PayloadRef } from "@/lib/balance/flag-shape";
+import type { AirCase, Figure, FlagData, LineEnd, PayloadRef } from "@/lib/balance/flag-shape";
+import type { LossSource } from "@/lib/balance/helium";
 import type { Attachment } from "@/lib/balance/schema";
 import { formatQuantity } from "@/lib/units";
 
@@ -71,6 +72,9 @@ type Wording<C extends FlagCode> = (flag: FlagData<C>, say: Say) => string;
 function windTrim(flag: FlagData<"trim-wind" | "trim-gust">, say: Say): string {
   const { speed, trim } = flag.figures;
   const at = inCase(flag.params.case, speed, say);
+  if (flag.params.failure === "no-free-lift") {
+    return `${capitalised(at)} it does not fly: without free lift it cannot be launched and comes down in every lull, whatever the sail lifts.`;
+  }
   if (flag.params.failure === "cannot-fly") {
     return `${capitalised(at)} it cannot fly: gas and sail together lift less than it weighs.`;
   }
@@ -80,12 +84,23 @@ function windTrim(flag: FlagData<"trim-wind" | "trim-gust">, say: Say): string {
   return `Trim ${at} is ${attitude(trim, say)}${beyond(flag.level, `±${say.limit(trim)}`)}.`;
 }
 
+const OTHER_END: Record<LineEnd, LineEnd> = { lifter: "anchor", anchor: "lifter" };
+
 function tetherAngle(flag: FlagData<"tether-angle-wind" | "tether-angle-gust">, say: Say): string {
-  const { speed, angle } = flag.figures;
-  const text = `Tether angle ${inCase(flag.params.case, speed, say)} is ${say.value(angle)} from vertical`;
+  const { speed, angle, otherEnd } = flag.figures;
+  const end = flag.params.end;
+  // With the line's shape known, the worse end is named and the other given beside it.
+  const where = end ? ` at the ${end}${otherEnd ? ` (${say.value(otherEnd)} at the ${OTHER_END[end]})` : ""}` : "";
+  const text = `Tether angle ${inCase(flag.params.case, speed, say)} is ${say.value(angle)} from vertical${where}`;
   const downwind = flag.level === "stop" ? ": it would be blown down towards the ground" : "";
   return `${text}${beyond(flag.level, say.limit(angle))}${downwind}.`;
 }
+
+const LOSS_WORDS: Record<LossSource, string> = {
+  given: "",
+  fabric: " through the fabric",
+  default: " (a rule of thumb: no fabric area is known)",
+};
 
 const MESSAGES: { readonly [C in FlagCode]: Wording<C> } = {
   "free-lift": ({ level, figures: { freeLift, ratio } }, say) => {
@@ -201,7 +216,7 @@ const MESSAGES: { readonly [C in FlagCode]: Wording<C> } = {
   },
 
   "tether-strength": ({ level, figures: { tension, breakingLoad }, params }, say) => {
-    const at = AT[params.case];
+    const at = `${AT[params.case]}${params.end === "anchor" ? " at the anchor" : ""}`;
     if (level === "stop") {
       return `The largest tether tension, ${say.value(tension)} ${at}, is at or above the tether's breaking load of ` +
         `${say.value(breakingLoad)}: it would break.`;
@@ -211,8 +226,13 @@ const MESSAGES: { readonly [C in FlagCode]: Wording<C> } = {
       `breaking load of ${say.value(breakingLoad)}.`;
   },
 
-  "helium-top-up": ({ figures: { topUpAfter, lossPerDay, freeLiftRatio } }, say) =>
-    `Top up after about ${say.value(topUpAfter)}: losing ${say.value(lossPerDay)} of the gas a day, free lift ` +
+  "tether-on-ground": ({ figures: { onGround, lineOut, speed }, params }, say) =>
+    `${capitalised(inCase(params.case, speed, say))}, ${say.value(onGround)} of the ${say.value(lineOut)} of tether out ` +
+    "lies on the ground: the lifter cannot hold its line up in that wind and flies lower, and the line can snag or be walked over.",
+
+  "helium-top-up": ({ figures: { topUpAfter, lossPerDay, freeLiftRatio }, params }, say) =>
+    // A flag stored before the loss had a source has no lossSource: it says nothing of one.
+    `Top up after about ${say.value(topUpAfter)}: losing ${say.value(lossPerDay)} of the gas a day${LOSS_WORDS[params.lossSource] ?? ""}, free lift ` +
     `falls from ${say.value(freeLiftRatio)} of gross lift to the ${say.limit(freeLiftRatio)} caution limit by then.`,
 
   "moored-balloon-rules": ({ level, figures: { gasVolume, diameter } }, say) => {
@@ -261,6 +281,7 @@ export const STOP_CAUSES: { readonly [C in FlagCode]: string } = {
   "clearance-tether": "a payload touches the tether",
   "tether-length": "the free lift cannot hold up the tether",
   "tether-strength": "the tether is too weak",
+  "tether-on-ground": "the line drags on the ground",
   "helium-top-up": "it needs a top-up at once",
   "moored-balloon-rules": "it falls under moored-balloon rules",
   "tether-height": "it flies too high",

@@ -7,6 +7,7 @@ import { Cautions } from "./cautions";
 import { FigureRow } from "./figure-row";
 import { FlagList } from "./flag-list";
 import { FreeLiftBar } from "./free-lift-bar";
+import { LineFigures } from "./line-figures";
 import { usePlanner } from "./planner-context";
 
 function ChartsLoading() {
@@ -99,6 +100,8 @@ export function BalancePanel() {
           <FigureRow label="Gust: tension">{result.gust ? formatQuantity("force", result.gust.tensionN, units) : "none"}</FigureRow>
         </dl>
       </div>
+
+      <LineFigures />
 
       <div className="panel p-4">
         <h2 className="text-lg">Tether and helium</h2>

@@ -53,7 +53,12 @@ export function MountControls() {
           data-testid="level-it"
           onClick={() => {
             const outcome = actions.levelIt();
-            setLevelMessage(outcome.ok ? `Mount moved to ${formatQuantity("length", outcome.positionXM, units, 3)} for level calm trim.` : outcome.reason);
+            if (!outcome.ok) return setLevelMessage(outcome.reason);
+            const moved = `Mount moved to ${formatQuantity("length", outcome.positionXM, units, 3)} for level calm trim`;
+            // Level is not enough if the new place brings a stop: say which, so it is not missed.
+            setLevelMessage(outcome.newStops.length === 0
+              ? `${moved}.`
+              : `${moved}, but there ${outcome.newStops.map((code) => STOP_CAUSES[code]).join(" and ")}: a stop flag. Move it back or change the payloads.`);
           }}
         >
           Level it

@@ -6,6 +6,7 @@ import { formatFixed, formatQuantity } from "@/lib/units";
 import { usePlanner, usePlannerActions } from "./planner-context";
 import { CASE_WORDS, windArrowLabel } from "./scene-labels";
 import { displayedTrimDeg, modelOf } from "./store";
+import { useSceneTether } from "./use-scene-tether";
 import type { TrimCase } from "./types";
 
 /** Maps the planner store onto the scene's props; the scene itself only draws. */
@@ -27,6 +28,7 @@ export function PlannerScene() {
     }),
   );
   const { setMountPosition, setTrimCase } = usePlannerActions();
+  const sceneTether = useSceneTether();
   const hull = model.hullJson;
 
   const payloads = useMemo<ScenePayload[]>(
@@ -63,6 +65,7 @@ export function PlannerScene() {
         onMountDrag={readOnly ? undefined : setMountPosition}
         summary={summary}
         mountSelected
+        {...sceneTether}
       />
       <div className="flex flex-wrap items-center gap-2 text-sm">
         <span className="text-muted">Show the lifter in:</span>

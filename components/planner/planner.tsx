@@ -2,6 +2,7 @@
 import { BalancePanel } from "./balance-panel";
 import { LifterSection } from "./lifter-section";
 import { MountControls } from "./mount-controls";
+import { OperatingEnvelopeSection } from "./operating-envelope-section";
 import { PayloadsSection } from "./payloads-section";
 import { PlannerProvider } from "./planner-context";
 import { PlannerScene } from "./planner-scene";
@@ -23,6 +24,7 @@ export function Planner({ data }: { data: PlannerData }) {
             <SiteSection />
             <GasSection />
             <TetherSection />
+            <OperatingEnvelopeSection />
             <PayloadsSection />
           </div>
           <BalancePanel />

@@ -1,5 +1,5 @@
 import { createStore, type StoreApi } from "zustand/vanilla";
-import type { SetupStatus, UnitSystem } from "@/lib/domain";
+import type { FlagCode, SetupStatus, UnitSystem } from "@/lib/domain";
 import { evaluateBalance, solveLevelTrimPositionX, type BalanceInput, type BalanceResult, type LevelTrimFailure } from "@/lib/balance";
 import { formatQuantity } from "@/lib/units";
 import { toBalanceInput, type SetupCatalogue } from "@/lib/setups/balance-input";
@@ -15,7 +15,8 @@ const LEVEL_FAILURES: Record<LevelTrimFailure, string> = {
 export interface PlannerActions {
   setMountPosition: (positionXM: number) => void;
   nudgeMount: (deltaM: number) => void;
-  levelIt: () => { ok: true; positionXM: number } | { ok: false; reason: string };
+  /** Levels the calm trim; `newStops` are the stop flags the new position brings (e.g. a payload on the line). */
+  levelIt: () => { ok: true; positionXM: number; newStops: FlagCode[] } | { ok: false; reason: string };
   setName: (name: string) => void;
   setModel: (modelId: string) => void;
   setUnit: (unitId: string | null) => void;
@@ -25,6 +26,7 @@ export interface PlannerActions {
   setTether: (tether: SetupDraft["tether"]) => void;
   /** The day's lift check as weighed at the field; null removes it. */
   setLiftCheck: (liftCheck: LiftCheckDraft | null) => void;
+  setTargetHeight: (heightM: number | null) => void;
   addPayload: (payload: SetupPayloadDraft) => void;
   updatePayload: (index: number, payload: SetupPayloadDraft) => void;
   removePayload: (index: number) => void;
@@ -106,8 +108,10 @@ export function createPlannerStore(data: PlannerData): PlannerStore {
             const at = (x: number) => formatQuantity("length", x, unitSystem, 3);
             return { ok: false, reason: `Level trim needs the mount at ${at(solution.positionX)} from the nose, off the rail (${at(model.railStartXM)} to ${at(model.railEndXM)}).` };
           }
+          const stopsBefore = new Set(get().result.flags.filter((f) => f.level === "stop").map((f) => f.code));
           get().actions.setMountPosition(solution.positionX);
-          return { ok: true, positionXM: solution.positionX };
+          const newStops = [...new Set(get().result.flags.filter((f) => f.level === "stop" && !stopsBefore.has(f.code)).map((f) => f.code))];
+          return { ok: true, positionXM: solution.positionX, newStops };
         },
         setName: (name) => edit((d) => ({ ...d, name })),
         setModel: (modelId) =>
@@ -131,6 +135,7 @@ export function createPlannerStore(data: PlannerData): PlannerStore {
         setGas: (patch) => edit((d) => ({ ...d, gas: { ...d.gas, ...patch } })),
         setTether: (tether) => edit((d) => ({ ...d, tether })),
         setLiftCheck: (liftCheck) => edit((d) => ({ ...d, liftCheck })),
+        setTargetHeight: (targetHeightM) => edit((d) => ({ ...d, targetHeightM })),
         addPayload: (payload) => edit((d) => ({ ...d, payloads: [...d.payloads, payload] })),
         updatePayload: (index, payload) => edit((d) => ({ ...d, payloads: d.payloads.map((p, i) => (i === index ? payload : p)) })),
         removePayload: (index) => edit((d) => ({ ...d, payloads: d.payloads.filter((_, i) => i !== index) })),

@@ -14,7 +14,7 @@ import { Markers } from "./markers";
 import { PAPER } from "./palette";
 import { MountScreenProbe, ReadySignal } from "./probes";
 import { Mount, Rail } from "./rail-mount";
-import { Bridle, Ground, Tether, WindArrow } from "./rigging";
+import { Bridle, Ground, GroundLabel, Tether, WindArrow } from "./rigging";
 import type { LifterSceneProps } from "./types";
 import { useMountDrag } from "./use-mount-drag";
 
@@ -37,9 +37,12 @@ interface LifterProps extends LifterSceneProps {
 const Lifter = memo(function Lifter(props: LifterProps) {
   const {
     glbUrl, hullLengthM, hullMaxDiameterM, rail, railTabCount, mountX, payloads,
-    buoyancyCentre, centreOfMass, tetherPoint, trimDeg, tetherAngleDeg, windMS, windLabel,
+    buoyancyCentre, centreOfMass, tetherPoint, trimDeg: flyingTrimDeg, tetherAngleDeg, windMS, windLabel,
     onMountDrag, onMountDragEnd, mountSelected = false, wrapperRef, controlsRef,
+    tetherLine = null, grounded = false, groundedLabel,
   } = props;
+  // A lifter that does not fly rests level on the ground.
+  const trimDeg = grounded ? 0 : flyingTrimDeg;
   const bodyRef = useRef<Group>(null);
   const mountRef = useRef<Mesh>(null);
   const scale = useMemo(
@@ -47,6 +50,12 @@ const Lifter = memo(function Lifter(props: LifterProps) {
     [hullLengthM, hullMaxDiameterM, tetherPoint],
   );
   const unitM = scale.lengthM;
+  // On the ground, the ground comes up to the lowest thing hung under it (drawing only).
+  const lowestZ = useMemo(
+    () => Math.min(-0.5 * hullMaxDiameterM, tetherPoint.z, ...payloads.map((p) => rail.z + p.offset.z - 0.5 * p.heightM)),
+    [hullMaxDiameterM, tetherPoint.z, payloads, rail.z],
+  );
+  const groundY = grounded ? lowestZ - 0.01 * unitM : scale.groundY;
   const { onPointerDown } = useMountDrag({
     bodyRef, controlsRef, railStartX: rail.startX, railEndX: rail.endX, railZ: rail.z, onMountDrag, onMountDragEnd,
   });
@@ -78,7 +87,7 @@ const Lifter = memo(function Lifter(props: LifterProps) {
       <hemisphereLight args={["#ffffff", "#d8d2c4", 1.4]} />
       <directionalLight position={[2 * unitM, 4 * unitM, 3 * unitM]} intensity={1.6} />
       <directionalLight position={[-2 * unitM, 1 * unitM, -3 * unitM]} intensity={0.5} />
-      <Ground y={scale.groundY} sizeM={40 * unitM} centreX={scale.target[0]} />
+      <Ground y={groundY} sizeM={40 * unitM} centreX={scale.target[0]} />
 
       {/* Pitch about the tether point: nose up (+) is a clockwise turn with the nose on the left. */}
       <group position={tetherWorld} rotation-z={-trimDeg * DEG}>
@@ -99,12 +108,15 @@ const Lifter = memo(function Lifter(props: LifterProps) {
         </group>
       </group>
 
-      <Tether top={tetherWorld} tetherAngleDeg={tetherAngleDeg} groundY={scale.groundY} />
+      <Tether top={tetherWorld} tetherAngleDeg={grounded ? 0 : tetherAngleDeg} groundY={groundY} shape={grounded ? null : tetherLine} />
+      {grounded && groundedLabel ? (
+        <GroundLabel text={groundedLabel} position={[0.5 * hullLengthM, groundY + 0.04 * unitM, 1.2 * hullMaxDiameterM]} heightM={0.07 * unitM} />
+      ) : null}
       <Markers
         buoyancy={buoyancyWorld} mass={massWorld} tether={tetherWorld} sizeM={0.07 * unitM}
         guideFromY={guideFromY} guideToY={guideToY}
       />
-      {windMS > 0 ? <WindArrow windMS={windMS} label={windLabel} tail={windTail} lengthUnitM={unitM} /> : null}
+      {windMS > 0 && !grounded ? <WindArrow windMS={windMS} label={windLabel} tail={windTail} lengthUnitM={unitM} /> : null}
 
       <OrbitControls
         ref={controlsRef}
@@ -147,6 +159,8 @@ export function LifterScene({ summary = "3D view of the lifter", className = "",
       <div
         ref={wrapperRef}
         data-testid="lifter-canvas"
+        data-tether={props.grounded ? "slack" : props.tetherLine && props.tetherLine.length >= 2 ? "curve" : "straight"}
+        data-grounded={props.grounded ? "true" : "false"}
         role="img"
         aria-label={summary}
         className="absolute inset-0 touch-none select-none"

@@ -1,7 +1,7 @@
 "use client";
 /**
- * Lines and world furniture: bridle (in the pitched lifter), tether (fixed in the world, leaning
- * downwind), ground, wind arrow.
+ * Lines and world furniture: bridle (in the pitched lifter), tether (fixed in the world, running
+ * from the tether point to its anchor upwind), ground, wind arrow.
  */
 import { Line } from "@react-three/drei";
 import { memo, useMemo } from "react";
@@ -38,16 +38,49 @@ interface TetherProps {
   top: Point3;
   tetherAngleDeg: number;
   groundY: number;
+  /** The computed line (metres from the tether point, x downwind, z up), tether point to anchor. */
+  shape?: readonly SceneVec[] | null;
 }
 
-/** The tether runs from the tether point down to its anchor, upwind (−x) of the lifter. */
-export const Tether = memo(function Tether({ top, tetherAngleDeg, groundY }: TetherProps) {
+/**
+ * The line's computed shape, scaled so its anchor lands on the drawn ground: one factor for both
+ * axes, so its angles (at the lifter and at the anchor) and its sag are drawn true.
+ */
+export function scaledTetherPoints(top: Point3, groundY: number, shape: readonly SceneVec[]): Point3[] | null {
+  const last = shape[shape.length - 1];
+  const heightM = last ? -last.z : 0;
+  const drop = top[1] - groundY;
+  if (shape.length < 2 || !(heightM > 1e-6) || !(drop > 0)) return null;
+  const scale = drop / heightM;
+  return shape.map((p) => [top[0] + scale * p.x, top[1] + scale * p.z, 0]);
+}
+
+/** The tether runs from the tether point down to its anchor, upwind (−x) of the lifter: its curve, or straight. */
+export const Tether = memo(function Tether({ top, tetherAngleDeg, groundY, shape = null }: TetherProps) {
   const points = useMemo<Point3[]>(() => {
+    const curve = shape ? scaledTetherPoints(top, groundY, shape) : null;
+    if (curve) return curve;
     const angle = Math.min(MAX_DRAWN_TETHER_DEG, Math.max(-MAX_DRAWN_TETHER_DEG, tetherAngleDeg)) * DEG;
     const drop = Math.max(0, top[1] - groundY);
     return [top, [top[0] - drop * Math.tan(angle), groundY, 0]];
-  }, [top, tetherAngleDeg, groundY]);
+  }, [top, tetherAngleDeg, groundY, shape]);
   return <Line name="tether" points={points} color={INK} lineWidth={1.6} />;
+});
+
+interface GroundLabelProps {
+  text: string;
+  position: Point3;
+  heightM: number;
+}
+
+/** A short label lying by the lifter when it is on the ground. */
+export const GroundLabel = memo(function GroundLabel({ text, position, heightM }: GroundLabelProps) {
+  const { texture, aspect } = useMemo(() => textTexture(text), [text]);
+  return (
+    <sprite position={position} scale={[aspect * heightM, heightM, 1]} name="grounded-label">
+      <spriteMaterial map={texture} transparent depthWrite={false} toneMapped={false} />
+    </sprite>
+  );
 });
 
 export const Ground = memo(function Ground({ y, sizeM, centreX }: { y: number; sizeM: number; centreX: number }) {

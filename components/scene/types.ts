@@ -28,4 +28,15 @@ export interface LifterSceneProps {
   windLabel?: string;
   /** Highlights the mount as selected (accent outline). */
   mountSelected?: boolean;
+  /**
+   * The tether line's computed shape (lib/balance's tetherLinePoints): metres from the tether point,
+   * x downwind (+x, as the wind blows), z up, not pitched with the lifter, from the tether point to
+   * the anchor. Drawn to the scale that puts its anchor on the drawn ground; absent or fewer than
+   * two points: a straight line at tetherAngleDeg.
+   */
+  tetherLine?: readonly SceneVec[] | null;
+  /** The lifter does not fly: it is drawn resting on the ground, level, with its line slack. */
+  grounded?: boolean;
+  /** Short text (22 characters at most) on the ground beside a grounded lifter, e.g. "it does not fly". */
+  groundedLabel?: string;
 }

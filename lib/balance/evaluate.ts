@@ -6,22 +6,30 @@
  */
 import { siteAir } from "./atmosphere";
 import { attachmentFlags } from "./attachment";
-import { hullClearanceM, tetherClearanceM } from "./clearance";
-import { figure, findingsByPayload, makeFlag, resolveLimits, type AirCase, type Flag, type Limits } from "./flags";
+import {
+  calmFlags, clearanceFlags, freeLiftFlag, largestTension, lineOnGroundFlag, railFlag, windFlags,
+} from "./evaluate-flags";
+import { flightLinePoints, solveFlight, type FlightSpec } from "./flight";
+import { figure, makeFlag, resolveLimits, type Flag } from "./flags";
 import { grossLiftKg as grossLift, liftGasDensityKgM3 } from "./gas";
-import { DEFAULT_CYLINDER_CONTENT_M3, DEFAULT_LOSS_PER_DAY_FRACTION, heliumBudget, type HeliumBudget } from "./helium";
+import { hullSkinAreaM2 } from "./geometry";
+import {
+  DEFAULT_CYLINDER_CONTENT_M3, DEFAULT_LOSS_PER_DAY_FRACTION, DEFAULT_PERMEABILITY_L_PER_M2_DAY_ATM,
+  heliumBudget, permeationLossPerDayFraction, type HeliumBudget, type LossSource,
+} from "./helium";
 import { payloadCentre, setupMass } from "./mass";
 import type { BalanceInput, DeepReadonly } from "./schema";
 import { rulesFlags } from "./rules";
-import { maxTetherOutM, tetherFlags } from "./tether";
-import { calmTrim, pitchStatics, type CalmTrim } from "./trim";
-import { STANDARD_GRAVITY_MS2, degreesToRadians } from "./units-si";
+import { lineSpecFor, maxTetherOutM, tetherFlags } from "./tether";
+import { calmTrim, pitchStatics } from "./trim";
+import { degreesToRadians } from "./units-si";
 import type { Vec } from "./vec";
-import { solveWindCase, type WindCase, type WindModel, type WindOutcome } from "./wind";
+import { inducedDragFactor, type WindCase, type WindModel } from "./wind";
+import { windProfile } from "./wind-profile";
 
 const SECONDS_PER_DAY = 86_400;
 
-/** The wind or gust case as the report gives it: the solver's own result. */
+/** The wind or gust case as the report gives it: the solver's own result, with its line. */
 export type WindSummary = WindCase;
 
 export interface BalanceResult {
@@ -74,163 +82,122 @@ export function buildWindModel(input: Input, statics: WindModel["statics"], cent
     liftSlopePerRad: aero?.liftSlopePerRad ?? 0,
     zeroLiftTrimRad: degreesToRadians(aero?.zeroLiftTrimDeg ?? 0),
     dragCoefficient: aero?.dragCoefficient ?? 0,
+    inducedDragFactor: inducedDragFactor(aero?.aspectRatio, aero?.spanEfficiency),
     cx: (aero?.pressureCentre.x ?? tether.x) - tether.x,
     cz: (aero?.pressureCentre.z ?? tether.z) - tether.z,
     payloadDrag,
   };
 }
 
-function calmFlags(calm: CalmTrim, limits: Limits, out: Flag[]): void {
-  // Without free lift there is no calm trim, but the free-lift flag already says it does not fly.
-  if (calm.reason === "no-free-lift") return;
-  if (calm.trimRad === null) {
-    out.push(makeFlag("trim-unstable", "stop", { figures: {}, params: {} }));
-    return;
-  }
-  const trim = figure("angle", calm.trimRad, degreesToRadians(limits.cautionTrimDeg));
-  out.push(makeFlag("trim-calm", Math.abs(calm.trimDeg) > limits.cautionTrimDeg ? "caution" : "ok", { figures: { trim }, params: {} }));
+/** Where the day's helium loss comes from: the input's fraction, the fabric's area, or the flat default. */
+function heliumLoss(input: Input, gasTemperatureK: number, fillVolumeM3: number): { fraction: number; source: LossSource } {
+  const given = input.gas?.lossPerDayFraction;
+  if (given !== undefined) return { fraction: given, source: "given" };
+  const { envelope } = input;
+  const areaM2 = envelope.surfaceAreaM2 ?? (envelope.hull ? hullSkinAreaM2(envelope.hull) : null);
+  if (areaM2 === null) return { fraction: DEFAULT_LOSS_PER_DAY_FRACTION, source: "default" };
+  const permeability = envelope.permeabilityLPerM2DayAtm ?? DEFAULT_PERMEABILITY_L_PER_M2_DAY_ATM;
+  return { fraction: permeationLossPerDayFraction(permeability, areaM2, gasTemperatureK, fillVolumeM3), source: "fabric" };
 }
 
-function windFlags(outcome: WindOutcome, speedMS: number, airCase: "wind" | "gust", limits: Limits, out: Flag[]): void {
-  const trimCode = airCase === "wind" ? "trim-wind" : "trim-gust";
-  const angleCode = airCase === "wind" ? "tether-angle-wind" : "tether-angle-gust";
-  const speed = figure("speed", speedMS);
-  const c = outcome.case;
-  if (!c) {
-    const failure = outcome.reason === "cannot-fly" ? "cannot-fly" : "no-equilibrium";
-    out.push(makeFlag(trimCode, "stop", { figures: { speed }, params: { case: airCase, failure } }));
-    return;
-  }
-  const trimSize = Math.abs(c.trimDeg);
-  const trimLevel = trimSize > limits.stopTrimDeg ? "stop" : trimSize > limits.cautionTrimDeg ? "caution" : "ok";
-  const trimLimitDeg = trimLevel === "stop" ? limits.stopTrimDeg : limits.cautionTrimDeg;
-  out.push(makeFlag(trimCode, trimLevel, {
-    figures: { speed, trim: figure("angle", degreesToRadians(c.trimDeg), degreesToRadians(trimLimitDeg)) },
-    params: { case: airCase },
-  }));
-  const angleLevel = c.tetherAngleDeg > limits.stopTetherAngleDeg ? "stop"
-    : c.tetherAngleDeg > limits.cautionTetherAngleDeg ? "caution" : "ok";
-  const angleLimitDeg = angleLevel === "stop" ? limits.stopTetherAngleDeg : limits.cautionTetherAngleDeg;
-  out.push(makeFlag(angleCode, angleLevel, {
-    figures: { speed, angle: figure("angle", degreesToRadians(c.tetherAngleDeg), degreesToRadians(angleLimitDeg)) },
-    params: { case: airCase },
-  }));
+/** What a setup's flags and cases are worked out from: its air, gas, masses and flight specs. */
+interface Prepared {
+  readonly air: ReturnType<typeof siteAir>;
+  readonly gasTemperatureK: number;
+  readonly gasDensityKgM3: number;
+  readonly grossLiftKg: number;
+  readonly mass: ReturnType<typeof setupMass>;
+  readonly freeLiftKg: number;
+  readonly calm: ReturnType<typeof calmTrim>;
+  readonly payloadCentres: Vec[];
+  /** The steady wind's flight; the gust's differs only in its reference wind. */
+  readonly wind: FlightSpec;
+  readonly gust: FlightSpec | null;
 }
 
-function freeLiftFlag(freeLiftKg: number, freeLiftRatio: number, limits: Limits): Flag {
-  const freeLift = figure("mass", freeLiftKg);
-  if (!(freeLiftKg > 0)) return makeFlag("free-lift", "stop", { figures: { freeLift }, params: {} });
-  const ratio = figure("ratio", freeLiftRatio, limits.cautionFreeLiftRatio);
-  return makeFlag("free-lift", freeLiftRatio < limits.cautionFreeLiftRatio ? "caution" : "ok", { figures: { freeLift, ratio }, params: {} });
+function prepare(input: Input): Prepared {
+  const { envelope } = input;
+  const air = siteAir(input.site);
+  const gasTemperatureK = air.temperatureK + (input.gas?.superheatK ?? 0);
+  const gasDensityKgM3 = liftGasDensityKgM3(air.pressurePa, gasTemperatureK, input.gas?.purity ?? 1);
+  const grossLiftKg = grossLift(envelope.gasVolumeM3, input.gas?.fillFraction ?? 1, air.densityKgM3, gasDensityKgM3);
+  const mass = setupMass(input);
+  const freeLiftKg = grossLiftKg - mass.totalMassKg;
+  const statics = pitchStatics(grossLiftKg, mass.totalMassKg, envelope.buoyancyCentre, mass.centreOfMass, envelope.tetherPoint);
+  const calm = calmTrim(statics, freeLiftKg);
+  const payloadCentres: Vec[] = [];
+  for (let i = 0; i < input.payloads.length; i++) payloadCentres.push(payloadCentre(input, i));
+  const model = buildWindModel(input, statics, payloadCentres);
+  const line = input.tether ? lineSpecFor(input.tether, air.densityKgM3) : null;
+  // The lifter flies in the wind at its own height, on its line (flight.ts).
+  const wind: FlightSpec = { model, airDensityKgM3: air.densityKgM3, profile: windProfile(input.site?.windMS ?? 0, input.site), calm, line };
+  const gustMS = input.site?.gustMS;
+  const gust = gustMS === undefined ? null : { ...wind, profile: windProfile(gustMS, input.site) };
+  return { air, gasTemperatureK, gasDensityKgM3, grossLiftKg, mass, freeLiftKg, calm, payloadCentres, wind, gust };
 }
 
-function railFlag(positionX: number, rail: Input["envelope"]["rail"]): Flag {
-  const railStart = figure("smallLength", rail.startX);
-  const railEnd = figure("smallLength", rail.endX);
-  const passed = positionX < rail.startX ? rail.startX : positionX > rail.endX ? rail.endX : null;
-  return passed === null
-    ? makeFlag("mount-off-rail", "ok", { figures: { position: figure("smallLength", positionX), railStart, railEnd }, params: {} })
-    : makeFlag("mount-off-rail", "stop", { figures: { position: figure("smallLength", positionX, passed), railStart, railEnd }, params: {} });
+/** The wind and gust flight specs of an input (the gust's null without a gust), as evaluateBalance solves them. */
+export function setupFlight(input: Input): { readonly wind: FlightSpec; readonly gust: FlightSpec | null } {
+  const { wind, gust } = prepare(input);
+  return { wind, gust };
 }
 
-type GapLevel = "ok" | "caution" | "stop";
-
-/** Clearance at the wind case (calm when there is no wind); the tether check only when it flies. */
-function clearanceFlags(input: Input, centres: readonly Vec[], flying: WindCase | null, limits: Limits, out: Flag[]): void {
-  const { envelope, payloads } = input;
-  const hull = envelope.hull;
-  const lineLengthM = input.tether?.lengthOutM ?? 100;
-  const windMS = input.site?.windMS ?? 0;
-  const level = (gapM: number, touching: boolean): GapLevel =>
-    touching ? "stop" : gapM < limits.clearanceCautionM ? "caution" : "ok";
-  // Identical payloads at the same place have the same gap: one flag names them all.
-  const hullGaps = findingsByPayload<{ gapM: number; level: GapLevel }>();
-  const lineGaps = findingsByPayload<{ gapM: number; level: GapLevel }>();
-  for (let i = 0; i < payloads.length; i++) {
-    const ref = { index: i, name: payloads[i].name };
-    const size = payloads[i].size;
-    if (hull) {
-      const gapM = hullClearanceM(hull, centres[i], size);
-      const gapLevel = level(gapM, gapM < 0);
-      hullGaps.add(`${gapLevel}|${gapM}`, ref, { gapM, level: gapLevel });
-    }
-    if (flying) {
-      const lineAngleRad = degreesToRadians(flying.tetherAngleDeg + flying.trimDeg);
-      const gapM = tetherClearanceM(envelope.tetherPoint, lineAngleRad, lineLengthM, centres[i], size);
-      const gapLevel = level(gapM, gapM <= 0);
-      lineGaps.add(`${gapLevel}|${gapM}`, ref, { gapM, level: gapLevel });
-    }
-  }
-  for (const { finding, payloads: refs } of hullGaps.groups()) {
-    const gap = figure("smallLength", finding.gapM, finding.level === "stop" ? undefined : limits.clearanceCautionM);
-    out.push(makeFlag("clearance-hull", finding.level, { figures: { gap }, params: {}, payloads: refs }));
-  }
-  const speed = windMS > 0 ? figure("speed", windMS) : undefined;
-  for (const { finding, payloads: refs } of lineGaps.groups()) {
-    const gap = figure("smallLength", finding.gapM, finding.level === "stop" ? undefined : limits.clearanceCautionM);
-    out.push(makeFlag("clearance-tether", finding.level, { figures: speed ? { gap, speed } : { gap }, params: {}, payloads: refs }));
-  }
-}
-
-/** The largest tether tension of the calm, wind and gust cases, and which case it is. */
-function largestTension(freeLiftKg: number, wind: WindCase | null, gust: WindCase | null): { tensionN: number; case: AirCase } {
-  let largest: { tensionN: number; case: AirCase } = { tensionN: Math.max(0, freeLiftKg) * STANDARD_GRAVITY_MS2, case: "calm" };
-  if (wind && wind.speedMS > 0 && wind.tensionN > largest.tensionN) largest = { tensionN: wind.tensionN, case: "wind" };
-  if (gust && gust.speedMS > 0 && gust.tensionN > largest.tensionN) largest = { tensionN: gust.tensionN, case: "gust" };
-  return largest;
+/**
+ * The tether line of the wind or gust case as points to draw: relative to the tether point, x
+ * downwind and z up (metres, not pitched with the lifter), from the tether point to the anchor.
+ * Empty when the case has no line (no tether, or it does not fly).
+ */
+export function tetherLinePoints(input: Input, result: BalanceResult, airCase: "wind" | "gust"): Vec[] {
+  const c = airCase === "wind" ? result.wind : result.gust;
+  const prepared = prepare(input);
+  const spec = airCase === "wind" ? prepared.wind : prepared.gust;
+  return c && spec ? flightLinePoints(spec, c) : [];
 }
 
 export function evaluateBalance(input: Input): BalanceResult {
-  const { envelope, mount, payloads } = input;
+  const { envelope, mount } = input;
   const limits = resolveLimits(envelope.limits);
   const flags: Flag[] = [];
+  const prepared = prepare(input);
 
-  const air = siteAir(input.site);
-  const gasTemperatureK = air.temperatureK + (input.gas?.superheatK ?? 0);
-  const purity = input.gas?.purity ?? 1;
+  const { air, gasTemperatureK, gasDensityKgM3, grossLiftKg, mass, freeLiftKg, calm, payloadCentres } = prepared;
   const fillFraction = input.gas?.fillFraction ?? 1;
-  const gasDensityKgM3 = liftGasDensityKgM3(air.pressurePa, gasTemperatureK, purity);
-  const grossLiftKg = grossLift(envelope.gasVolumeM3, fillFraction, air.densityKgM3, gasDensityKgM3);
-
-  const mass = setupMass(input);
-  const freeLiftKg = grossLiftKg - mass.totalMassKg;
   const rawRatio = freeLiftKg / grossLiftKg;
   const freeLiftRatio = grossLiftKg > 0 && Number.isFinite(rawRatio) ? rawRatio : -1;
   flags.push(freeLiftFlag(freeLiftKg, freeLiftRatio, limits));
   flags.push(railFlag(mount.positionX, envelope.rail));
-
-  const statics = pitchStatics(grossLiftKg, mass.totalMassKg, envelope.buoyancyCentre, mass.centreOfMass, envelope.tetherPoint);
-  const calm = calmTrim(statics, freeLiftKg);
   calmFlags(calm, limits, flags);
 
-  const payloadCentres: Vec[] = [];
-  for (let i = 0; i < payloads.length; i++) payloadCentres.push(payloadCentre(input, i));
-  const model = buildWindModel(input, statics, payloadCentres);
   const windMS = input.site?.windMS ?? 0;
-  const windOutcome = solveWindCase(model, air.densityKgM3, windMS, calm);
+  const windOutcome = solveFlight(prepared.wind);
   if (windMS > 0) windFlags(windOutcome, windMS, "wind", limits, flags);
   const gustMS = input.site?.gustMS;
-  const gustOutcome = gustMS === undefined ? null : solveWindCase(model, air.densityKgM3, gustMS, calm);
+  const gustOutcome = prepared.gust ? solveFlight(prepared.gust) : null;
   if (gustOutcome && gustMS !== undefined && gustMS > 0) windFlags(gustOutcome, gustMS, "gust", limits, flags);
+  const wind = windOutcome.case;
+  const gust = gustOutcome?.case ?? null;
 
   attachmentFlags(input, mass.hangingMassKg, limits, flags);
 
-  clearanceFlags(input, payloadCentres, windOutcome.case, limits, flags);
+  clearanceFlags(input, payloadCentres, wind, limits, flags);
 
   let maxOutM: number | null = null;
   if (input.tether) {
     maxOutM = maxTetherOutM(freeLiftKg, input.tether.massPerMetreKg);
-    const tension = largestTension(freeLiftKg, windOutcome.case, gustOutcome?.case ?? null);
-    tetherFlags(input.tether, grossLiftKg, freeLiftKg, tension, limits, flags);
+    tetherFlags(input.tether, grossLiftKg, freeLiftKg, largestTension(freeLiftKg, wind, gust), limits, flags);
+    lineOnGroundFlag(wind, gust, input.tether.lengthOutM, flags);
   }
 
+  const fillVolumeM3 = fillFraction * envelope.gasVolumeM3;
+  const loss = heliumLoss(input, gasTemperatureK, fillVolumeM3);
   const helium = heliumBudget({
     gasVolumeM3: envelope.gasVolumeM3,
     fillFraction,
     pressurePa: air.pressurePa,
     gasTemperatureK,
     cylinderContentM3: input.gas?.cylinderContentM3 ?? DEFAULT_CYLINDER_CONTENT_M3,
-    lossPerDayFraction: input.gas?.lossPerDayFraction ?? DEFAULT_LOSS_PER_DAY_FRACTION,
+    lossPerDayFraction: loss.fraction,
+    lossSource: loss.source,
     grossLiftKg,
     totalMassKg: mass.totalMassKg,
     cautionFreeLiftRatio: limits.cautionFreeLiftRatio,
@@ -242,7 +209,7 @@ export function evaluateBalance(input: Input): BalanceResult {
         lossPerDay: figure("ratio", helium.lossPerDayFraction),
         freeLiftRatio: figure("ratio", freeLiftRatio, limits.cautionFreeLiftRatio),
       },
-      params: {},
+      params: { lossSource: helium.lossSource },
     }));
   }
 
@@ -259,8 +226,8 @@ export function evaluateBalance(input: Input): BalanceResult {
     freeLiftRatio,
     centreOfMass: mass.centreOfMass,
     calmTrimDeg: calm.trimDeg,
-    wind: windOutcome.case,
-    gust: gustOutcome ? gustOutcome.case : null,
+    wind,
+    gust,
     maxTetherOutM: maxOutM,
     helium,
     payloadCentres,

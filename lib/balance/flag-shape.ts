@@ -4,6 +4,7 @@
  * the engine's builders in ./flags.ts share them without importing each other's code.
  */
 import type { FlagCode, FlagLevel } from "../domain/flags";
+import type { LossSource } from "./helium";
 import type { Attachment, Thread } from "./schema";
 
 /**
@@ -48,13 +49,24 @@ type None = Readonly<Record<string, never>>;
 
 interface WindTrimDetails {
   readonly figures: { readonly speed: Figure<"speed">; readonly trim?: Figure<"angle"> };
-  /** `failure` says why there is no trim in this case; without it, `figures.trim` is there. */
-  readonly params: { readonly case: "wind" | "gust"; readonly failure?: "cannot-fly" | "no-equilibrium" };
+  /**
+   * `failure` says why there is no trim in this case (no free lift: it does not fly at all; the
+   * sail and gas lift less than it weighs; no stable pitch); without it, `figures.trim` is there.
+   */
+  readonly params: { readonly case: "wind" | "gust"; readonly failure?: "no-free-lift" | "cannot-fly" | "no-equilibrium" };
 }
 
+/** Which end of the tether line a figure is at. */
+export type LineEnd = "lifter" | "anchor";
+
 interface TetherAngleDetails {
-  readonly figures: { readonly speed: Figure<"speed">; readonly angle: Figure<"angle"> };
-  readonly params: { readonly case: "wind" | "gust" };
+  /**
+   * `angle` is the worse of the line's two ends (its limit the caution or stop it passes), at
+   * `params.end`; `otherEnd` the angle at the other end. Without a line shape (no tether given)
+   * there is only the angle at the lifter, and neither `end` nor `otherEnd`.
+   */
+  readonly figures: { readonly speed: Figure<"speed">; readonly angle: Figure<"angle">; readonly otherEnd?: Figure<"angle"> };
+  readonly params: { readonly case: "wind" | "gust"; readonly end?: LineEnd };
 }
 
 /**
@@ -138,9 +150,17 @@ export interface FlagDetails {
     readonly params: None;
   };
   readonly "tether-strength": {
-    /** `tension` (the largest, in `params.case`) against the breaking load or breaking load / factor. */
+    /**
+     * `tension` (the largest of either end of the line, in `params.case` at `params.end`) against the
+     * breaking load or breaking load / factor.
+     */
     readonly figures: { readonly tension: Figure<"force">; readonly breakingLoad: Figure<"force"> };
-    readonly params: { readonly safetyFactor: number; readonly case: AirCase };
+    readonly params: { readonly safetyFactor: number; readonly case: AirCase; readonly end: LineEnd };
+  };
+  readonly "tether-on-ground": {
+    /** The line on the ground in `params.case` (the one with more of it there), of the line out. */
+    readonly figures: { readonly onGround: Figure<"distance">; readonly lineOut: Figure<"distance">; readonly speed: Figure<"speed"> };
+    readonly params: { readonly case: "wind" | "gust" };
   };
   readonly "helium-top-up": {
     readonly figures: {
@@ -149,7 +169,8 @@ export interface FlagDetails {
       /** Today's free-lift ratio and the caution limit it falls to. */
       readonly freeLiftRatio: Figure<"ratio">;
     };
-    readonly params: None;
+    /** Whether the loss was given, comes from the fabric's permeability, or is the flat default. */
+    readonly params: { readonly lossSource: LossSource };
   };
   readonly "moored-balloon-rules": {
     /** Against the 14 CFR 101.1(a)(1) thresholds; `diameter` when the hull's shape is known. */

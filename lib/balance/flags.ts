@@ -8,7 +8,7 @@
 import { flagMessage } from "../flag-messages";
 import type { FlagCode, FlagLevel } from "../domain/flags";
 import {
-  FIGURE_SI_UNITS, type FigureQuantity, type Figure, type Flag, type FlagBase, type FlagData, type FlagDetails, type PayloadRef,
+  FIGURE_SI_UNITS, type FigureQuantity, type Figure, type Flag, type FlagData, type FlagDetails, type PayloadRef,
 } from "./flag-shape";
 import type { LimitsInput } from "./schema";
 import { ksiToPascals } from "./units-si";
@@ -78,18 +78,44 @@ export interface FlagInput<C extends FlagCode> {
   readonly payloads?: readonly PayloadRef[];
 }
 
-/** A flag with its message worded in metric by the same words the UI uses (lib/flag-messages.ts). */
-export function makeFlag<C extends FlagCode>(code: C, level: FlagLevel, input: FlagInput<C>): Flag<C> {
-  // Built once and in this key order, so the JSON reads code, level, message, then the data.
-  const flag: { -readonly [K in keyof FlagBase<C>]: FlagBase<C>[K] } & { message: string } = {
-    code, level, message: "", figures: input.figures, params: input.params,
-  };
-  if (input.payloads && input.payloads.length > 0) {
-    flag.payloads = input.payloads;
-    flag.payloadIndex = input.payloads[0].index;
+/**
+ * A flag as the engine makes it. Its message is worded in metric by the same words the UI uses
+ * (lib/flag-messages.ts) when it is read, not when the flag is made: the Planner evaluates on
+ * every drag and words flags itself in the reader's units, while the API, the CLI and the stored
+ * result read it as they serialise (toJSON puts it in, in the order code, level, message, data).
+ * Send flags across a boundary as JSON (as Response.json and the database do), not by
+ * structured cloning, which keeps no getters.
+ */
+class EngineFlag {
+  readonly code: FlagCode;
+  readonly level: FlagLevel;
+  readonly figures: unknown;
+  readonly params: unknown;
+  readonly payloads: readonly PayloadRef[] | undefined;
+  readonly payloadIndex: number | undefined;
+
+  constructor(code: FlagCode, level: FlagLevel, figures: unknown, params: unknown, payloads: readonly PayloadRef[] | undefined) {
+    this.code = code;
+    this.level = level;
+    this.figures = figures;
+    this.params = params;
+    const some = payloads !== undefined && payloads.length > 0;
+    this.payloads = some ? payloads : undefined;
+    this.payloadIndex = some ? payloads[0].index : undefined;
   }
-  flag.message = flagMessage(flag as unknown as FlagData, "metric");
-  return flag as unknown as Flag<C>;
+
+  get message(): string {
+    return flagMessage(this as unknown as FlagData, "metric");
+  }
+
+  toJSON(): Record<string, unknown> {
+    const { code, level, message, figures, params, payloads, payloadIndex } = this;
+    return payloads ? { code, level, message, figures, params, payloads, payloadIndex } : { code, level, message, figures, params };
+  }
+}
+
+export function makeFlag<C extends FlagCode>(code: C, level: FlagLevel, input: FlagInput<C>): Flag<C> {
+  return new EngineFlag(code, level, input.figures, input.params, input.payloads) as unknown as Flag<C>;
 }
 
 /**

@@ -201,3 +201,16 @@ export function buildFinMesh(params: Readonly<HullParams>): MeshData {
   });
   return { positions, indices };
 }
+
+// Memo of each hull's skin area: the Planner passes the same hull object on every drag, and the
+// profile integral is the costly part of the helium budget.
+const skinAreaByHull = new WeakMap<object, number>();
+
+/** Area of the gas-holding hull skin (no fins), m²: what the helium permeates through. */
+export function hullSkinAreaM2(params: Readonly<HullParams>): number {
+  const known = skinAreaByHull.get(params);
+  if (known !== undefined) return known;
+  const areaM2 = integrateHullProfile(params).hullSurfaceAreaM2;
+  skinAreaByHull.set(params, areaM2);
+  return areaM2;
+}

@@ -5,8 +5,16 @@
  * Loss is modelled as a fixed fraction of the gas per day, so gross lift after d days is
  * G·(1 − f)^d and the free-lift ratio falls below the caution limit c when
  * G·(1 − f)^d·(1 − c) < M, i.e. d = ln(M / (G·(1 − c))) / ln(1 − f).
+ *
+ * The fraction comes from the fabric's permeability unless one is given: a permeability P in
+ * litres of gas at 0 °C and 1 atm per m² per day per atm of partial-pressure difference (the
+ * convention of gas-transmission tests, e.g. ASTM D1434 — from memory) lets through
+ * P·A·Δp/V_m,0 moles a day across an area A, against p_He·V/(R·T) moles in the envelope; with
+ * Δp = p_He (no helium outside) and 1 atm · V_m,0 = R · 273.15 K, the fraction per day is
+ *   f = P · A · (T_gas / 273.15 K) / V_fill,   V_fill in litres,
+ * whatever the pressure and the purity.
  */
-import { STANDARD_ATMOSPHERE_PA, cubicFeetToCubicMetres } from "./units-si";
+import { STANDARD_ATMOSPHERE_PA, ZERO_CELSIUS_K, cubicFeetToCubicMetres } from "./units-si";
 
 /** Common practice: a "40 cubic foot" balloon-gas cylinder, about 1.13 m³ of free gas. */
 export const DEFAULT_CYLINDER_CONTENT_M3 = cubicFeetToCubicMetres(40);
@@ -17,6 +25,27 @@ export const DEFAULT_CYLINDER_CONTENT_M3 = cubicFeetToCubicMetres(40);
  */
 export const DEFAULT_LOSS_PER_DAY_FRACTION = 0.03;
 const CYLINDER_REFERENCE_TEMPERATURE_K = 288.15;
+/**
+ * Helium permeability of coated envelope fabric: 0.5 L/(m²·day·atm), inside the 0.2–0.9 range
+ * published for laminates (Lv et al., Front. Mater. 2022). Seams and the valve add to it.
+ */
+export const DEFAULT_PERMEABILITY_L_PER_M2_DAY_ATM = 0.5;
+const LITRES_PER_M3 = 1000;
+
+/** Where the day's loss fraction came from: given, from the fabric, or the flat default. */
+export type LossSource = "given" | "fabric" | "default";
+
+/** f = P · A · (T_gas / 273.15 K) / V_fill (see above); capped below 1. */
+export function permeationLossPerDayFraction(
+  permeabilityLPerM2DayAtm: number,
+  surfaceAreaM2: number,
+  gasTemperatureK: number,
+  fillVolumeM3: number,
+): number {
+  const fraction = (permeabilityLPerM2DayAtm * surfaceAreaM2 * (gasTemperatureK / ZERO_CELSIUS_K)) /
+    (fillVolumeM3 * LITRES_PER_M3);
+  return Number.isFinite(fraction) ? Math.min(0.99, Math.max(0, fraction)) : DEFAULT_LOSS_PER_DAY_FRACTION;
+}
 
 export interface HeliumBudget {
   /** Gas in the envelope at the site: fill fraction × gas volume. */
@@ -27,6 +56,8 @@ export interface HeliumBudget {
   /** Whole cylinders to fill once. */
   readonly cylindersNeeded: number;
   readonly lossPerDayFraction: number;
+  /** Given in the input, from the fabric's permeability, or the flat default (no area known). */
+  readonly lossSource: LossSource;
   readonly lossPerDayM3: number;
   /** Gross lift lost on the first day, kg. */
   readonly grossLiftLossPerDayKg: number;
@@ -43,6 +74,7 @@ export interface HeliumBudgetInput {
   readonly gasTemperatureK: number;
   readonly cylinderContentM3: number;
   readonly lossPerDayFraction: number;
+  readonly lossSource: LossSource;
   readonly grossLiftKg: number;
   readonly totalMassKg: number;
   readonly cautionFreeLiftRatio: number;
@@ -68,6 +100,7 @@ export function heliumBudget(input: HeliumBudgetInput): HeliumBudget {
     cylinderContentM3: input.cylinderContentM3,
     cylindersNeeded: Math.ceil(fillVolumeM3 / cylinderContentAtSiteM3 - 1e-9),
     lossPerDayFraction: f,
+    lossSource: input.lossSource,
     lossPerDayM3: fillVolumeM3 * f,
     grossLiftLossPerDayKg: g * f,
     daysToTopUp,

@@ -58,6 +58,10 @@ export const aeroSchema = z.object({
   zeroLiftTrimDeg: quantity("zero-lift trim (deg)", -45, 45),
   dragCoefficient: quantity("drag coefficient", 0, 5),
   pressureCentre: vecSchema,
+  /** Span²/area of the sail; when given, the sail's induced drag CL²/(π·e·AR) is added. */
+  aspectRatio: positive("aspect ratio", 100).optional(),
+  /** e of the induced drag; absent = DEFAULT_SPAN_EFFICIENCY (wind.ts). */
+  spanEfficiency: positive("span efficiency", 1).optional(),
 });
 
 export const envelopeSchema = z.object({
@@ -78,6 +82,13 @@ export const envelopeSchema = z.object({
   limits: limitsSchema.optional(),
   /** The hull's shape, for the clearance check against the hull. */
   hull: hullParamsSchema.optional(),
+  /**
+   * Helium the fabric lets through, litres (0 °C, 1 atm) per m² per day per atm of helium; absent =
+   * DEFAULT_PERMEABILITY_L_PER_M2_DAY_ATM (helium.ts). Used unless gas.lossPerDayFraction is given.
+   */
+  permeabilityLPerM2DayAtm: quantity("fabric permeability (L/(m²·day·atm))", 0, 1000).optional(),
+  /** The gas-holding skin's area; absent = the hull's own (geometry.ts) when the hull is given. */
+  surfaceAreaM2: positive("envelope surface area (m²)", 1e6).optional(),
 }, section("envelope"));
 
 export const gasSchema = z.object({
@@ -100,6 +111,12 @@ export const siteSchema = z.object({
   pressurePa: quantity("pressure (Pa)", 10_000, 120_000).optional(),
   windMS: quantity("wind (m/s)", 0, 60).optional(),
   gustMS: quantity("gust (m/s)", 0, 80).optional(),
+  /** Height above the ground the wind and gust were measured at; absent = 10 m (WMO-No. 8). */
+  windMeasuredAtM: positive("wind measured at (m)", 1000).optional(),
+  /** α of the power law V(z) = V_ref·(z/z_ref)^α; absent = 1/7; 0 = the same wind at every height. */
+  windShearExponent: quantity("wind shear exponent", 0, 1).optional(),
+  /** 0–1; absent = dry air, as in ISA. */
+  relativeHumidity: quantity("relative humidity (fraction)", 0, 1).optional(),
 });
 
 export const mountSchema = z.object({
@@ -134,6 +151,12 @@ export const tetherSchema = z.object({
   massPerMetreKg: positive("tether mass per metre (kg/m)", 100),
   lengthOutM: quantity("tether out (m)", 0, 100_000),
   breakingLoadN: positive("tether breaking load (N)", 1e9),
+  /** Line diameter for its drag in the wind; absent = no line drag. */
+  diameterM: positive("tether diameter (m)", 0.1).optional(),
+  /** C_n of the line in cross-flow; absent = 1.2 (circular cylinder, Hoerner). */
+  normalDragCoefficient: quantity("tether normal drag coefficient", 0, 5).optional(),
+  /** C_f of the air running along the line; absent = 0.01 (common practice). */
+  skinFrictionCoefficient: quantity("tether skin friction coefficient", 0, 1).optional(),
 });
 
 export const balanceInputSchema = z.object({
@@ -155,3 +178,24 @@ export type Attachment = z.infer<typeof attachmentSchema>;
 export type DeepReadonly<T> = T extends (infer E)[]
   ? readonly DeepReadonly<E>[]
   : T extends object ? { readonly [K in keyof T]: DeepReadonly<T[K]> } : T;
+
+/** What an operating envelope is asked for: the grid's extent and, optionally, a height to reach. */
+export const envelopeOptionsSchema = z.object({
+  maxWindMS: positive("largest wind of the grid (m/s)", 40).optional(),
+  windCount: z.number("wind count must be a number").int("wind count must be a whole number")
+    .min(2, "wind count must be at least 2").max(41, "wind count must be at most 41").optional(),
+  lineCount: z.number("line-out count must be a number").int("line-out count must be a whole number")
+    .min(2, "line-out count must be at least 2").max(40, "line-out count must be at most 40").optional(),
+  /** The payload height wanted, for the line out that reaches it at targetWindMS. */
+  targetHeightM: positive("target height (m)", 10_000).optional(),
+  /** The wind to reach the target height in; absent = the setup's own wind. */
+  targetWindMS: quantity("target wind (m/s)", 0, 60).optional(),
+});
+
+export const operatingEnvelopeRequestSchema = z.object({
+  setup: balanceInputSchema,
+  options: envelopeOptionsSchema.optional(),
+}, section("envelope request"));
+
+export type EnvelopeOptions = z.infer<typeof envelopeOptionsSchema>;
+export type OperatingEnvelopeRequest = z.infer<typeof operatingEnvelopeRequestSchema>;

@@ -2,7 +2,9 @@
  * Wind and gust (design.md item 6). Same frame and moment signs as trim.ts: wind blows along +X
  * (from the nose towards the tail), lift acts up, drag acts downwind.
  *   α = θ − θ₀ (θ₀: the sail's zero-lift trim), q = ½ρV²,
- *   sail lift L = q·S·CLα·α and sail drag D_s = q·S·CD at the pressure centre c,
+ *   sail lift L = q·S·CLα·α and sail drag D_s = q·S·(CD + CL²/(π·e·AR)) at the pressure centre c
+ *   (the second term is the induced drag of lifting-line theory, e.g. Anderson, Fundamentals of
+ *   Aerodynamics; only when the model gives its aspect ratio AR; CL = CLα·α),
  *   payload drag D_i = q·A_i at each payload's centre of mass,
  *   M(θ) = −B·X_b + W·X_g − L·X_c + D_s·Z_c + Σ D_i·Z_i = 0 (nose-up positive, about the tether).
  * The stable equilibrium is a root where M falls through zero as θ rises; we scan θ over
@@ -10,9 +12,25 @@
  * bracket like bisection, converges superlinearly), without allocating.
  * The tether then pulls along the resultant: angle from vertical = atan(D / (B − W + L)),
  * tension = √(D² + (B − W + L)²). At zero wind the calm formula is returned unchanged.
+ * Without free lift it does not fly: it cannot be launched, and it falls in every lull whatever
+ * the sail would lift in a steady wind (design.md item 5), so there is no wind case.
  */
+import type { LineSummary } from "./tether-line";
 import type { CalmTrim, PitchStatics } from "./trim";
 import { degreesToRadians, radiansToDegrees } from "./units-si";
+
+/**
+ * Span efficiency e of the sail's induced drag when the model gives no figure: 0.7, common practice
+ * for a low-aspect-ratio lifting surface on a hull (no published figure for kite-balloons);
+ * lifting-line theory's elliptic ideal is e = 1 (Anderson, Fundamentals of Aerodynamics).
+ */
+export const DEFAULT_SPAN_EFFICIENCY = 0.7;
+
+/** 1/(π·e·AR), the induced drag coefficient per CL²; 0 without an aspect ratio. */
+export function inducedDragFactor(aspectRatio: number | undefined, spanEfficiency: number | undefined): number {
+  if (!(aspectRatio !== undefined && aspectRatio > 0)) return 0;
+  return 1 / (Math.PI * (spanEfficiency ?? DEFAULT_SPAN_EFFICIENCY) * aspectRatio);
+}
 
 export interface WindModel {
   readonly statics: PitchStatics;
@@ -20,6 +38,8 @@ export interface WindModel {
   readonly liftSlopePerRad: number;
   readonly zeroLiftTrimRad: number;
   readonly dragCoefficient: number;
+  /** 1/(π·e·AR): induced drag coefficient per CL²; 0 when the model gives no aspect ratio. */
+  readonly inducedDragFactor: number;
   /** Pressure centre relative to the tether point, m. */
   readonly cx: number;
   readonly cz: number;
@@ -28,18 +48,32 @@ export interface WindModel {
 }
 
 export interface WindCase {
+  /** The wind as given (measured at the site's reference height), m/s. */
   readonly speedMS: number;
+  /**
+   * The wind at the lifter's own height, which it flies in, m/s (the measured wind when the height
+   * is not known: no tether given). Absent from results stored before it existed.
+   */
+  readonly windAtLifterMS: number;
   readonly trimDeg: number;
   readonly tetherAngleDeg: number;
   readonly tensionN: number;
   readonly dynamicPressurePa: number;
   readonly liftN: number;
   readonly dragN: number;
+  /**
+   * The tether line's shape from the lifter's pull down to the anchor (tether-line.ts); null without
+   * a tether. tetherAngleDeg and tensionN above stay the values at the lifter.
+   */
+  readonly line: LineSummary | null;
 }
+
+/** Why a case has no equilibrium: no stable pitch, too little lift, no calm trim, or no free lift. */
+export type WindFailure = "no-equilibrium" | "cannot-fly" | "no-calm-trim" | "no-free-lift";
 
 export type WindOutcome =
   | { readonly case: WindCase; readonly reason: null }
-  | { readonly case: null; readonly reason: "no-equilibrium" | "cannot-fly" | "no-calm-trim" };
+  | { readonly case: null; readonly reason: WindFailure };
 
 /** q = ½ρV² (Pa). */
 export function dynamicPressurePa(airDensityKgM3: number, speedMS: number): number {
@@ -54,8 +88,9 @@ export function pitchMomentNm(model: WindModel, dynamicPressure: number, thetaRa
   let moment = -s.buoyancyN * (s.bx * cos + s.bz * sin) + s.weightN * (s.gx * cos + s.gz * sin);
   if (dynamicPressure > 0) {
     const qS = dynamicPressure * model.sailAreaM2;
-    const liftN = qS * model.liftSlopePerRad * (thetaRad - model.zeroLiftTrimRad);
-    const sailDragN = qS * model.dragCoefficient;
+    const liftCoefficient = model.liftSlopePerRad * (thetaRad - model.zeroLiftTrimRad);
+    const liftN = qS * liftCoefficient;
+    const sailDragN = qS * (model.dragCoefficient + model.inducedDragFactor * liftCoefficient * liftCoefficient);
     moment += -liftN * (model.cx * cos + model.cz * sin) +
       sailDragN * (-model.cx * sin + model.cz * cos);
     const drag = model.payloadDrag;
@@ -117,43 +152,73 @@ export function solvePitchTrimRad(model: WindModel, q: number, preferRad: number
   return best;
 }
 
+/**
+ * The stable trim near a trim already found at a nearby dynamic pressure (the same branch as it
+ * moves with q): a widening bracket around it, then the full scan if none is found.
+ */
+export function solvePitchTrimNearRad(model: WindModel, q: number, nearRad: number): number | null {
+  for (let half = 0.01; half <= 0.2; half *= 4) {
+    const a = Math.max(SCAN_LOW_RAD, nearRad - half);
+    const b = Math.min(SCAN_HIGH_RAD, nearRad + half);
+    const fa = pitchMomentNm(model, q, a);
+    const fb = pitchMomentNm(model, q, b);
+    if (fa > 0 && fb <= 0) return fb === 0 ? b : refineRoot(model, q, a, b, fa, fb);
+  }
+  return solvePitchTrimRad(model, q, nearRad);
+}
+
+/** The sail's drag area at a trim: S·(CD + CL²/(π·e·AR)) plus every payload's drag area, m². */
+export function dragAreaAtTrimM2(model: WindModel, thetaRad: number): number {
+  const liftCoefficient = model.liftSlopePerRad * (thetaRad - model.zeroLiftTrimRad);
+  let dragAreaM2 = model.sailAreaM2 * (model.dragCoefficient + model.inducedDragFactor * liftCoefficient * liftCoefficient);
+  for (let i = 0; i < model.payloadDrag.length; i += 3) dragAreaM2 += model.payloadDrag[i];
+  return dragAreaM2;
+}
+
+/**
+ * The lifter alone in a wind of `speedMS` at its height (no line): its trim and its pull on the
+ * tether. `nearRad`, when given, is a trim found at a nearby wind to continue from.
+ */
 export function solveWindCase(
   model: WindModel,
   airDensityKgM3: number,
   speedMS: number,
   calm: CalmTrim,
+  nearRad: number | null = null,
 ): WindOutcome {
   const freeLiftN = model.statics.buoyancyN - model.statics.weightN;
+  if (!(freeLiftN > 0)) return { case: null, reason: "no-free-lift" };
   if (speedMS === 0) {
     // Zero wind is the calm case, by the same formula.
     if (calm.trimDeg === null) return { case: null, reason: "no-calm-trim" };
     return {
       case: {
-        speedMS: 0, trimDeg: calm.trimDeg, tetherAngleDeg: 0, tensionN: freeLiftN,
-        dynamicPressurePa: 0, liftN: 0, dragN: 0,
+        speedMS: 0, windAtLifterMS: 0, trimDeg: calm.trimDeg, tetherAngleDeg: 0, tensionN: freeLiftN,
+        dynamicPressurePa: 0, liftN: 0, dragN: 0, line: null,
       },
       reason: null,
     };
   }
   const q = dynamicPressurePa(airDensityKgM3, speedMS);
-  const thetaRad = solvePitchTrimRad(model, q, calm.trimRad ?? 0);
+  const thetaRad = nearRad === null
+    ? solvePitchTrimRad(model, q, calm.trimRad ?? 0)
+    : solvePitchTrimNearRad(model, q, nearRad);
   if (thetaRad === null) return { case: null, reason: "no-equilibrium" };
-  const qS = q * model.sailAreaM2;
-  const liftN = qS * model.liftSlopePerRad * (thetaRad - model.zeroLiftTrimRad);
-  let dragAreaM2 = model.sailAreaM2 * model.dragCoefficient;
-  for (let i = 0; i < model.payloadDrag.length; i += 3) dragAreaM2 += model.payloadDrag[i];
-  const dragN = q * dragAreaM2;
+  const liftN = q * model.sailAreaM2 * model.liftSlopePerRad * (thetaRad - model.zeroLiftTrimRad);
+  const dragN = q * dragAreaAtTrimM2(model, thetaRad);
   const verticalN = freeLiftN + liftN;
   if (!(verticalN > 0)) return { case: null, reason: "cannot-fly" };
   return {
     case: {
       speedMS,
+      windAtLifterMS: speedMS,
       trimDeg: radiansToDegrees(thetaRad),
       tetherAngleDeg: radiansToDegrees(Math.atan2(dragN, verticalN)),
       tensionN: Math.hypot(dragN, verticalN),
       dynamicPressurePa: q,
       liftN,
       dragN,
+      line: null,
     },
     reason: null,
   };

@@ -24,6 +24,7 @@ export const FLAG_CODES = [
   "clearance-tether",
   "tether-length",
   "tether-strength",
+  "tether-on-ground",
   "helium-top-up",
   "moored-balloon-rules",
   "tether-height",

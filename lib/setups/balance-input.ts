@@ -42,6 +42,11 @@ export interface SetupCatalogue {
   adaptersById: Readonly<Record<string, AdapterSpec>>;
 }
 
+function tetherInput(tether: NonNullable<SetupDraft["tether"]>): NonNullable<BalanceInput["tether"]> {
+  const { diameterM, ...line } = tether;
+  return diameterM === null ? line : { ...line, diameterM };
+}
+
 /**
  * Turns a setup and the catalogue rows it names into the engine's input. The same function runs in
  * the Planner (live) and on the server (stored result), so both always agree.
@@ -103,6 +108,9 @@ export function plannedBalanceInput(draft: SetupDraft, catalogue: SetupCatalogue
       ...(site.pressurePa === null ? {} : { pressurePa: site.pressurePa }),
       windMS: site.windMS,
       ...(site.gustMS === null ? {} : { gustMS: site.gustMS }),
+      windMeasuredAtM: site.windMeasuredAtM,
+      windShearExponent: site.windShearExponent,
+      ...(site.relativeHumidity === null ? {} : { relativeHumidity: site.relativeHumidity }),
     },
     mount: {
       positionX: draft.mountPositionXM,
@@ -123,6 +131,6 @@ export function plannedBalanceInput(draft: SetupDraft, catalogue: SetupCatalogue
         dragAreaM2: p.dragAreaM2,
       };
     }),
-    ...(draft.tether ? { tether: { ...draft.tether } } : {}),
+    ...(draft.tether ? { tether: tetherInput(draft.tether) } : {}),
   };
 }

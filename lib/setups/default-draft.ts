@@ -1,4 +1,4 @@
-import { DEFAULT_TETHER } from "@/lib/domain";
+import { DEFAULT_TETHER, DEFAULT_WIND_MEASUREMENT } from "@/lib/domain";
 import type { SetupDraft } from "./setup-draft";
 
 interface ModelForDefaults {
@@ -17,9 +17,10 @@ export function defaultDraft(model: ModelForDefaults, mountId: string, name?: st
     unitId: null,
     mountId,
     mountPositionXM: (model.railStartXM + model.railEndXM) / 2,
-    site: { siteName: "", altitudeM: 0, temperatureC: null, pressurePa: null, windMS: 3, gustMS: 6 },
+    site: { siteName: "", altitudeM: 0, temperatureC: null, pressurePa: null, windMS: 3, gustMS: 6, ...DEFAULT_WIND_MEASUREMENT, relativeHumidity: null },
     gas: { purity: 0.98, superheatK: 0, fillFraction: 1 },
     tether: { ...DEFAULT_TETHER },
+    targetHeightM: null,
     payloads: [],
   };
 }

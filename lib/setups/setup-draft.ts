@@ -1,5 +1,16 @@
 import { z } from "zod";
-import { ATTACHMENTS, INPUT_LIMITS, LIFT_CHECK_LOADS, LIFT_CHECK_UNKNOWNS, MAX_NAME_LENGTH, MAX_PAYLOADS_PER_SETUP, PAYLOAD_CATEGORIES, PAYLOAD_SHAPES, type InputLimitKey } from "@/lib/domain";
+import {
+  ATTACHMENTS,
+  DEFAULT_WIND_MEASUREMENT,
+  INPUT_LIMITS,
+  LIFT_CHECK_LOADS,
+  LIFT_CHECK_UNKNOWNS,
+  MAX_NAME_LENGTH,
+  MAX_PAYLOADS_PER_SETUP,
+  PAYLOAD_CATEGORIES,
+  PAYLOAD_SHAPES,
+  type InputLimitKey,
+} from "@/lib/domain";
 
 // What a person edits in the Planner and what the server stores: the inputs of a setup, never its
 // computed balance (the server recomputes that from these and the catalogue).
@@ -50,6 +61,10 @@ export const setupDraftSchema = z.object({
     pressurePa: bounded("pressurePa").nullable(),
     windMS: bounded("windMS"),
     gustMS: bounded("gustMS").nullable(),
+    // Drafts saved before these existed lack them: the defaults are the engine's own.
+    windMeasuredAtM: bounded("windMeasuredAtM").default(DEFAULT_WIND_MEASUREMENT.windMeasuredAtM),
+    windShearExponent: bounded("windShearExponent").default(DEFAULT_WIND_MEASUREMENT.windShearExponent),
+    relativeHumidity: bounded("relativeHumidity").nullable().default(null),
   }),
   gas: z.object({
     purity: bounded("purity"),
@@ -61,8 +76,11 @@ export const setupDraftSchema = z.object({
       massPerMetreKg: bounded("tetherMassPerMetreKg"),
       lengthOutM: bounded("tetherLengthOutM"),
       breakingLoadN: bounded("tetherBreakingLoadN"),
+      diameterM: bounded("tetherDiameterM").nullable().default(null),
     })
     .nullable(),
+  /** The payload height wanted, for the operating envelope's line out; null = none asked. */
+  targetHeightM: bounded("targetHeightM").nullable().default(null),
   payloads: z.array(setupPayloadDraftSchema).max(MAX_PAYLOADS_PER_SETUP, `At most ${MAX_PAYLOADS_PER_SETUP} payloads on one mount.`),
   /** Absent or null: no lift check today; the gas is as entered. */
   liftCheck: liftCheckDraftSchema.nullable().optional(),

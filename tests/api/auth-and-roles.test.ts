@@ -73,6 +73,7 @@ describe("role checks on the server", () => {
     expect((await support.signIn("support@trimrail.test")).status).toBe(200);
     const response = await support.get("/api/review/queue");
     expect(response.status).toBe(200);
+    // The queue answers a page of rows (the review desk's list), submitted setups by default.
     const { rows: setups } = (await response.json()) as { rows: Array<{ status: string; ownerName: string }> };
     expect(setups.length).toBeGreaterThan(0);
     expect(setups.every((s) => s.status === "submitted")).toBe(true);

@@ -1,6 +1,6 @@
 import { readFileSync } from "node:fs";
 import { beforeAll, describe, expect, inject, it } from "vitest";
-import { balanceInputSchema, evaluateBalance, type BalanceInput, type BalanceResult } from "@/lib/balance";
+import { balanceInputSchema, evaluateBalance, operatingEnvelope, type BalanceInput, type BalanceResult, type OperatingEnvelope } from "@/lib/balance";
 import { ApiClient } from "../support/http";
 
 const baseURL = inject("baseURL");
@@ -154,6 +154,51 @@ describe("POST /api/balance refuses bad input", () => {
     const onRail = await customer.request("POST", "/api/balance", fixtureText);
     const onRailBody = (await onRail.json()) as BalanceResult;
     expect(onRailBody.flags.find((f) => f.code === "mount-off-rail")?.level).toBe("ok");
+  });
+});
+
+describe("POST /api/balance/envelope", () => {
+  it("returns the engine's operating envelope of the setup when given { setup, options }", async () => {
+    const options = { targetHeightM: 30, windCount: 6, lineCount: 5 };
+    const response = await customer.request("POST", "/api/balance/envelope", { setup: fixture(), options });
+    expect(response.status).toBe(200);
+    const body = (await response.json()) as OperatingEnvelope;
+    expect(body).toEqual(asJson(operatingEnvelope(fixture(), options)));
+    expect(body.reason).toBeNull();
+    expect(body.points).toHaveLength(6);
+    expect(body.points[0]).toHaveLength(5);
+    expect(body.target?.lineOutM).toBeGreaterThan(30);
+    for (const column of body.points) {
+      for (const point of column) expect(["ok", "caution", "stop"]).toContain(point.worstLevel);
+    }
+    // Without options: the full 16 × 20 grid.
+    const full = await customer.request("POST", "/api/balance/envelope", { setup: fixture() });
+    expect(full.status).toBe(200);
+    const grid = (await full.json()) as OperatingEnvelope;
+    expect(grid.windsMS).toHaveLength(16);
+    expect(grid.linesOutM).toHaveLength(20);
+  });
+
+  it("returns 400 with the paths at fault, and 401 for a stranger, when the body is bad", async () => {
+    const post = (body: unknown) => customer.request("POST", "/api/balance/envelope", body);
+    const negative = fixture();
+    negative.payloads[0].massKg = -1;
+    const bad = await post({ setup: negative, options: { windCount: 1, targetHeightM: -5 } });
+    expect(bad.status).toBe(400);
+    const error = ((await bad.json()) as ErrorBody).error;
+    expect(error.code).toBe("bad_request");
+    const paths = (error.issues ?? []).map((i) => i.path);
+    expect(paths).toContain("setup.payloads[0].massKg");
+    expect(paths).toContain("options.windCount");
+    expect(paths).toContain("options.targetHeightM");
+
+    const bare = await post(fixture()); // a setup without the { setup } wrapper
+    expect(bare.status).toBe(400);
+    expect(((await bare.json()) as ErrorBody).error.issues?.map((i) => i.path)).toContain("setup");
+    expect((await post("[]")).status).toBe(400);
+
+    const stranger = await new ApiClient(baseURL).request("POST", "/api/balance/envelope", { setup: fixture() });
+    expect(stranger.status).toBe(401);
   });
 });
 

@@ -1,11 +1,15 @@
+import { randomInt } from "node:crypto";
 import { DEMO_PASSWORD } from "../../db/seed-data";
 
-let addressCounter = 0;
+// Each test file loads this module afresh, so a counter from zero would give the same addresses in
+// every file: a file that exhausts one address's sign-in limit would lock out the next file's person
+// with that address. A random start per file keeps them apart.
+let addressCounter = randomInt(0, 60_000);
 
 /** A fake client address per simulated person, so per-address sign-in limits count them apart. */
 export function nextClientAddress(): string {
   addressCounter += 1;
-  return `10.88.${Math.floor(addressCounter / 250)}.${(addressCounter % 250) + 1}`;
+  return `10.88.${Math.floor(addressCounter / 250) % 250}.${(addressCounter % 250) + 1}`;
 }
 
 /** A minimal cookie-keeping client for the real route handlers of the running server. */

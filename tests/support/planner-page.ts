@@ -71,6 +71,28 @@ export class PlannerPage {
     await form.getByRole("button", { name: "Add payload" }).click();
   }
 
+  /** Waits until the operating envelope's chart has drawn its marks (it loads after the page). */
+  async waitForEnvelopeChart(): Promise<void> {
+    const chart = this.page.getByTestId("envelope-chart");
+    await chart.locator("svg [data-level]").first().waitFor({ timeout: 30_000 });
+  }
+
+  /** The worst-flag levels the envelope's table shows, one per point. */
+  async envelopeTableLevels(): Promise<string[]> {
+    const table = this.page.getByTestId("envelope-table");
+    await table.locator("summary").click();
+    return table.locator("td[data-level]").evaluateAll((cells) => cells.map((c) => c.getAttribute("data-level") ?? ""));
+  }
+
+  async text(testId: string): Promise<string> {
+    return (await this.page.getByTestId(testId).innerText()).trim();
+  }
+
+  /** How the 3D view draws the tether: "curve" (its computed shape), "straight", or "slack" (on the ground). */
+  async tetherDrawing(): Promise<string | null> {
+    return this.page.getByTestId("lifter-canvas").getAttribute("data-tether");
+  }
+
   async version(): Promise<number> {
     return Number(await this.page.getByTestId("setup-version").innerText());
   }

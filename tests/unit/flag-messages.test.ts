@@ -38,6 +38,15 @@ const bigLoad = (massKg: number): BalanceInput => demoWith((s) => {
   s.payloads = [{ ...s.payloads[0], massKg }];
 });
 
+/** 60 m of a heavy line in 3 m/s: half of it lies on the ground. */
+const heavyLine: BalanceInput = demoWith((s) => {
+  s.tether = { ...s.tether!, massPerMetreKg: 0.02, lengthOutM: 60 };
+  s.site = { ...s.site, windMS: 3 };
+});
+
+/** The demo with its whip hung behind the tether point: the line leaves forward, clear of it. */
+const whipAft = (offsetXM: number): BalanceInput => demoWith((s) => { s.payloads[0].offset.x = offsetXM; });
+
 const CASES: { readonly [C in FlagCode]: readonly Case[] } = {
   "free-lift": [
     { level: "ok", what: "the demo", input: demoSetup() },
@@ -67,9 +76,14 @@ const CASES: { readonly [C in FlagCode]: readonly Case[] } = {
     { level: "stop", what: "a sail without lift at 10 m/s", input: dragOnly(5, 10) },
   ],
   "tether-angle-wind": [
-    { level: "ok", what: "the demo", input: demoSetup() },
-    { level: "caution", what: "a sail without lift at 5 m/s", input: dragOnly(5) },
+    { level: "ok", what: "the demo (worse at the anchor)", input: demoSetup() },
+    { level: "caution", what: "a sail without lift at 3 m/s, the line flatter at the anchor", input: dragOnly(3) },
     { level: "stop", what: "a sail without lift at 8 m/s", input: dragOnly(8) },
+    { level: "caution", what: "a sail without lift at 4 m/s and no tether given (the lifter's end only)", input: demoWith((s) => {
+      Object.assign(s, dragOnly(4));
+      delete s.tether;
+    }) },
+    { level: "stop", what: "a heavy line lying on the ground (90° at the anchor)", input: heavyLine },
   ],
   "tether-angle-gust": [
     { level: "ok", what: "the demo", input: demoSetup() },
@@ -113,9 +127,10 @@ const CASES: { readonly [C in FlagCode]: readonly Case[] } = {
     { level: "stop", what: "the logger inside the hull", input: demoWith((s) => { s.payloads = [{ ...s.payloads[1], offset: { x: 0, z: 0.02 } }]; }) },
   ],
   "clearance-tether": [
-    { level: "ok", what: "the demo", input: demoSetup() },
+    { level: "stop", what: "the demo: its whip hangs ahead of the tether point, across the line to the anchor", input: demoSetup() },
+    { level: "ok", what: "the whip under the mount, aft of the tether point", input: whipAft(0) },
     { level: "ok", what: "calm air", input: demoWith((s) => { s.site = { ...s.site, windMS: 0 }; }) },
-    { level: "caution", what: "the whip 5 cm further aft", input: demoWith((s) => { s.payloads[0].offset.x = -0.1; }) },
+    { level: "caution", what: "the whip 2 cm further forward", input: whipAft(-0.17) },
     { level: "stop", what: "the whip hanging across the line", input: demoWith((s) => {
       const t = s.envelope.tetherPoint;
       s.site = { windMS: 0 };
@@ -133,9 +148,18 @@ const CASES: { readonly [C in FlagCode]: readonly Case[] } = {
     { level: "caution", what: "a 50 N tether", input: demoWith((s) => { s.tether!.breakingLoadN = 50; }) },
     { level: "stop", what: "a 5 N tether", input: demoWith((s) => { s.tether!.breakingLoadN = 5; }) },
     { level: "ok", what: "calm air", input: demoWith((s) => { s.site = { altitudeM: 240 }; }) },
+    { level: "ok", what: "a light, thick line in 12 m/s (largest at the anchor)", input: demoWith((s) => {
+      s.tether = { ...s.tether!, massPerMetreKg: 0.0005, diameterM: 0.004, lengthOutM: 200 };
+      s.site = { ...s.site, windMS: 12, gustMS: undefined };
+    }) },
+  ],
+  "tether-on-ground": [
+    { level: "caution", what: "a heavy line in 3 m/s", input: heavyLine },
   ],
   "helium-top-up": [
-    { level: "ok", what: "the demo", input: demoSetup() },
+    { level: "ok", what: "the demo (loss through the fabric)", input: demoSetup() },
+    { level: "ok", what: "a given loss", input: demoWith((s) => { s.gas = { ...s.gas, lossPerDayFraction: 0.01 }; }) },
+    { level: "ok", what: "no hull shape (the flat rule of thumb)", input: demoWith((s) => { delete s.envelope.hull; }) },
   ],
   "moored-balloon-rules": [
     { level: "ok", what: "the demo", input: demoSetup() },
@@ -269,6 +293,26 @@ describe("flagMessage", () => {
     expect(trim.message).toBe("Calm trim is level (0.0°), within ±10.0°.");
     const up = makeFlag("trim-calm", "caution", { figures: { trim: figure("angle", (12.34 * Math.PI) / 180, Math.PI / 18) }, params: {} });
     expect(up.message).toBe("Calm trim is 12.3° nose up; caution beyond ±10.0°. Slide the mount forward.");
+  });
+
+  it("returns the message in every flag's JSON, after code and level, as the API, the CLI and the stored result carry it", () => {
+    for (const flag of evaluateBalance(demoSetup()).flags) {
+      const json = JSON.parse(JSON.stringify(flag)) as Record<string, unknown>;
+      expect(Object.keys(json).slice(0, 5)).toEqual(["code", "level", "message", "figures", "params"]);
+      expect(json.message).toBe(flagMessage(flag, "metric"));
+    }
+  });
+
+  it("returns words without a gap for flags stored before their newer parameters existed", () => {
+    const stored = JSON.parse(JSON.stringify(evaluateBalance(demoSetup()).flags)) as Array<{ code: string; params: Record<string, unknown> }>;
+    for (const flag of stored) {
+      // What a result saved before the tether line had: no line end, no loss source.
+      delete flag.params.end;
+      delete flag.params.lossSource;
+      for (const system of ["metric", "imperial"] as const) {
+        expect(flagMessage(flag as unknown as Flag, system)).not.toMatch(/undefined|NaN/);
+      }
+    }
   });
 
   it("returns the gust's own words for a gust flag", () => {

@@ -4,7 +4,7 @@ import os from "node:os";
 import path from "node:path";
 import { fileURLToPath } from "node:url";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import { evaluateBalance, type BalanceInput } from "@/lib/balance";
+import { evaluateBalance, operatingEnvelope, type BalanceInput } from "@/lib/balance";
 
 const root = fileURLToPath(new URL("../../../", import.meta.url));
 const tsx = `${root}node_modules/.bin/tsx`;
@@ -87,5 +87,29 @@ describe("scripts/balance.ts", () => {
     const missing = runCli([path.join(dir, "nowhere.json")]);
     expect(missing.status).toBe(2);
     expect(missing.stderr).toMatch(/cannot read/);
+  }, 30_000);
+
+  it("returns the engine's operating envelope with --envelope, its options from flags", () => {
+    const run = runCli(["--envelope", FIXTURE_PATH, "--target-height", "30", "--winds", "4", "--lines", "3"]);
+    expect(run.status, run.stderr).toBe(0);
+    const printed = JSON.parse(run.stdout) as { windsMS: number[]; linesOutM: number[]; target: { lineOutM: number | null } };
+    expect(printed).toEqual(asJson(operatingEnvelope(fixture(), { targetHeightM: 30, windCount: 4, lineCount: 3 })));
+    expect(printed.windsMS).toEqual([0, 5, 10, 15]);
+    expect(printed.linesOutM).toHaveLength(3);
+    expect(printed.target.lineOutM).toBeGreaterThan(30);
+
+    const fromStdin = runCli(["--envelope", "-"], fixtureText);
+    expect(fromStdin.status, fromStdin.stderr).toBe(0);
+    expect(JSON.parse(fromStdin.stdout)).toEqual(asJson(operatingEnvelope(fixture())));
+  }, 60_000);
+
+  it("returns exit status 2 with the option's path when an --envelope option is out of range or unknown", () => {
+    const bad = runCli(["--envelope", FIXTURE_PATH, "--winds", "1"]);
+    expect(bad.status).toBe(2);
+    expect(bad.stdout).toBe("");
+    expect(bad.stderr).toContain("windCount: wind count must be at least 2");
+    const unknown = runCli(["--envelope", FIXTURE_PATH, "--colour", "red"]);
+    expect(unknown.status).toBe(2);
+    expect(unknown.stderr).toContain("unknown argument --colour");
   }, 30_000);
 });

@@ -1,6 +1,6 @@
 import fc from "fast-check";
 import { describe, expect, it } from "vitest";
-import { THREADS, balanceInputSchema, demoHulls, evaluateBalance, type BalanceInput } from "@/lib/balance";
+import { THREADS, balanceInputSchema, demoHulls, evaluateBalance, tetherLinePoints, type BalanceInput } from "@/lib/balance";
 import { flagMessage } from "@/lib/flag-messages";
 import { allNumbers } from "./setups";
 
@@ -41,6 +41,7 @@ const validInput: fc.Arbitrary<BalanceInput> = fc.record({
     aero: opt(fc.record({
       sailAreaM2: num(0, 10_000), liftSlopePerRad: num(0, 10), zeroLiftTrimDeg: num(-45, 45),
       dragCoefficient: num(0, 5), pressureCentre: anyPoint,
+      aspectRatio: opt(num(1e-6, 100)), spanEfficiency: opt(num(1e-6, 1)),
     })),
     limits: opt(fc.record({
       cautionFreeLiftRatio: opt(num(0, 1)), cautionTrimDeg: opt(num(0, 90)), stopTrimDeg: opt(num(0, 90)),
@@ -50,6 +51,8 @@ const validInput: fc.Arbitrary<BalanceInput> = fc.record({
       screwProofStrengthPa: opt(num(1e-6, 5e9)),
     })),
     hull: opt(fc.oneof(fc.constantFrom(...Object.values(demoHulls)), randomHull)),
+    permeabilityLPerM2DayAtm: opt(num(0, 1000)),
+    surfaceAreaM2: opt(num(1e-6, 1e6)),
   }),
   gas: opt(fc.record({
     purity: opt(num(0, 1)), superheatK: opt(num(-30, 80)), fillFraction: opt(num(1e-9, 1)),
@@ -58,6 +61,7 @@ const validInput: fc.Arbitrary<BalanceInput> = fc.record({
   site: opt(fc.record({
     altitudeM: opt(num(-500, 11_000)), temperatureC: opt(num(-80, 60)), pressurePa: opt(num(10_000, 120_000)),
     windMS: opt(num(0, 60)), gustMS: opt(num(0, 80)),
+    windMeasuredAtM: opt(num(1e-6, 1000)), windShearExponent: opt(num(0, 1)), relativeHumidity: opt(num(0, 1)),
   })),
   mount: fc.record({
     positionX: num(-1000, 1000), massKg: num(0, 10_000), thread,
@@ -72,7 +76,10 @@ const validInput: fc.Arbitrary<BalanceInput> = fc.record({
     size: opt(fc.record({ lengthM: num(0, 100), widthM: num(0, 100), heightM: num(0, 100) })),
     dragAreaM2: opt(num(0, 1000)),
   }), { maxLength: 5 }),
-  tether: opt(fc.record({ massPerMetreKg: num(1e-9, 100), lengthOutM: num(0, 100_000), breakingLoadN: num(1e-6, 1e9) })),
+  tether: opt(fc.record({
+    massPerMetreKg: fc.oneof(num(0.0005, 0.05), num(1e-9, 100)), lengthOutM: fc.oneof(num(0, 300), num(0, 100_000)), breakingLoadN: num(1e-6, 1e9),
+    diameterM: opt(num(1e-9, 0.1)), normalDragCoefficient: opt(num(0, 5)), skinFrictionCoefficient: opt(num(0, 1)),
+  })),
 });
 
 describe("evaluateBalance on random valid input", () => {
@@ -84,6 +91,8 @@ describe("evaluateBalance on random valid input", () => {
       const bad = allNumbers(result).filter(([, value]) => !Number.isFinite(value));
       expect(bad).toEqual([]);
       expect(input).toEqual(frozen); // inputs are never mutated
+      const points = tetherLinePoints(input, result, "wind");
+      expect(points.filter((p) => !Number.isFinite(p.x) || !Number.isFinite(p.z))).toEqual([]);
       for (const flag of result.flags) {
         expect(flag.message).not.toMatch(/NaN|Infinity/);
         expect(flagMessage(flag, "imperial")).not.toMatch(/NaN|Infinity/);

@@ -136,22 +136,50 @@ describe("evaluateBalance in wind", () => {
     expect(Math.tan((wind.tetherAngleDeg * Math.PI) / 180)).toBeCloseTo(wind.dragN / verticalN, 9);
   });
 
-  it("flies as a kite without free lift when the sail lifts enough, and flags a stop when it cannot", () => {
+  it("returns no wind case and stop flags that say it does not fly when it has no free lift, whatever the sail would lift", () => {
     const setup = demoSetup();
     const heavy: BalanceInput = { ...setup, payloads: [{ ...setup.payloads[0], massKg: 0.65 }] };
     const calm = evaluateBalance({ ...heavy, site: { ...heavy.site, windMS: 0 } });
     expect(calm.freeLiftKg).toBeLessThan(0);
     expect(calm.wind).toBeNull();
-    const breezy = evaluateBalance({ ...heavy, site: { ...heavy.site, windMS: 9 } });
-    expect(breezy.wind?.liftN ?? 0).toBeGreaterThan(0);
-    const still = evaluateBalance({ ...heavy, site: { ...heavy.site, windMS: 0.5 } });
-    expect(still.wind).toBeNull();
-    expect(flagLevels(still, "trim-wind")).toEqual(["stop"]);
+    // In 9 m/s the sail alone would hold it up as a kite, but it cannot be launched and falls in a lull.
+    const breezy = evaluateBalance({ ...heavy, site: { ...heavy.site, windMS: 9, gustMS: 12 } });
+    expect(breezy.wind).toBeNull();
+    expect(breezy.gust).toBeNull();
+    for (const code of ["trim-wind", "trim-gust"] as const) {
+      const flag = breezy.flags.find((f) => f.code === code);
+      expect(flag?.level).toBe("stop");
+      expect(flag?.params).toMatchObject({ failure: "no-free-lift" });
+      expect(flag?.message).toMatch(/it does not fly/);
+    }
+    // No ok flag speaks of the wind: neither trim nor tether angle.
+    expect(breezy.flags.filter((f) => /wind|gust/.test(f.code) && f.level === "ok")).toEqual([]);
   });
 
   it("reports the gust case at gustMS and none without it", () => {
     const setup = demoSetup();
     expect(evaluateBalance(setup).gust?.speedMS).toBe(setup.site?.gustMS);
     expect(evaluateBalance({ ...setup, site: { windMS: 4 } }).gust).toBeNull();
+  });
+});
+
+describe("evaluateBalance with induced drag", () => {
+  it("returns the old drag without an aspect ratio, and C_D = C_D0 + C_L²/(π·e·AR) with one (lifting-line theory; e = 0.7, common practice)", () => {
+    const demo = demoSetup();
+    // Uniform wind and no tether, so the wind at the lifter is the wind given.
+    const setup: BalanceInput = { ...demo, site: { windMS: 6, windShearExponent: 0 }, tether: undefined };
+    const aero = setup.envelope.aero!;
+    const plain = evaluateBalance(setup).wind!;
+    const withAr = evaluateBalance({ ...setup, envelope: { ...setup.envelope, aero: { ...aero, aspectRatio: 1.5 } } }).wind!;
+    const q = withAr.dynamicPressurePa;
+    const cl = aero.liftSlopePerRad * ((withAr.trimDeg - aero.zeroLiftTrimDeg) * Math.PI) / 180;
+    const payloadAreaM2 = (setup.payloads[0].dragAreaM2 ?? 0) + 1.05 * setup.payloads[1].size!.widthM * setup.payloads[1].size!.heightM;
+    const expectedN = q * (aero.sailAreaM2 * (aero.dragCoefficient + (cl * cl) / (Math.PI * 0.7 * 1.5)) + payloadAreaM2);
+    expect(withAr.dragN).toBeCloseTo(expectedN, 9);
+    expect(withAr.dragN).toBeGreaterThan(plain.dragN);
+    expect(withAr.tetherAngleDeg).toBeGreaterThan(plain.tetherAngleDeg);
+    // A stated span efficiency replaces the default: e = 1 (elliptic loading) drags least.
+    const elliptic = evaluateBalance({ ...setup, envelope: { ...setup.envelope, aero: { ...aero, aspectRatio: 1.5, spanEfficiency: 1 } } }).wind!;
+    expect(elliptic.dragN).toBeLessThan(withAr.dragN);
   });
 });

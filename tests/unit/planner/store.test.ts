@@ -64,6 +64,33 @@ describe("levelIt", () => {
   });
 });
 
+describe("levelIt and the stops a level position brings", () => {
+  it("returns the stop flags that the levelled position brings: a whip hung ahead of the mount meets the line", () => {
+    const data = plannerDataFor("set-wren-whip");
+    const model = data.catalogue.models.find((m) => m.id === data.draft.modelId)!;
+    // The whip 12 cm ahead of a mount far aft: clear there, on the line once levelling moves it forward.
+    const draft = {
+      ...data.draft,
+      mountPositionXM: model.railStartXM + 0.8 * (model.railEndXM - model.railStartXM),
+      payloads: data.draft.payloads.map((p, i) => (i === 0 ? { ...p, offsetXM: -0.12 } : p)),
+    };
+    const store = createPlannerStore({ ...data, draft });
+    const stopsBefore = store.getState().result.flags.filter((f) => f.level === "stop");
+    expect(stopsBefore).toEqual([]);
+    const outcome = store.getState().actions.levelIt();
+    expect(outcome.ok).toBe(true);
+    if (!outcome.ok) return;
+    expect(outcome.positionXM).toBeLessThan(draft.mountPositionXM);
+    expect(outcome.newStops).toEqual(["clearance-tether"]);
+    expect(store.getState().result.flags.find((f) => f.code === "clearance-tether")?.level).toBe("stop");
+  });
+
+  it("returns no new stops when the level position is clear", () => {
+    const outcome = createPlannerStore(plannerDataFor(SETUP)).getState().actions.levelIt();
+    expect(outcome).toMatchObject({ ok: true, newStops: [] });
+  });
+});
+
 describe("payload actions", () => {
   it("adds, updates and removes payloads and the total mass follows", () => {
     const store = createPlannerStore(plannerDataFor(SETUP));
