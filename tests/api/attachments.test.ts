@@ -18,10 +18,11 @@ const s3 = createS3Client(s3Config);
 const MB = 1024 * 1024;
 
 let database: ReturnType<typeof openDatabase>;
-const wren = new ApiClient(baseURL); // customer: owns set-wren-whip (a draft)
-const mirela = new ApiClient(baseURL); // another customer
-const support = new ApiClient(baseURL);
-const stranger = new ApiClient(baseURL); // not signed in
+// Client addresses of this file's own (sign-in limits count per address and per minute, across files).
+const wren = new ApiClient(baseURL, "10.89.0.1"); // customer: owns set-wren-whip (a draft)
+const mirela = new ApiClient(baseURL, "10.89.0.2"); // another customer
+const support = new ApiClient(baseURL, "10.89.0.3");
+const stranger = new ApiClient(baseURL, "10.89.0.4"); // not signed in
 
 /** A fresh draft of Wren's, so each group of tests counts its own files. */
 async function newDraft(name: string): Promise<string> {
