@@ -78,8 +78,9 @@ function streamToFile<H>(source: Readable, contentType: string, filePath: string
       if (settled) return;
       settled = true;
       if (!result.ok) {
-        // Stop reading: nothing more is pulled from the socket, parsed or stored. The server answers
-        // with `Connection: close` and hangs up, as HTTP/1.1 asks when a body is left unread.
+        // Stop reading: nothing more is pulled from the socket, parsed or stored. The answer goes out
+        // at once; the connection, its body left unread, is never reused, and Node drops it when
+        // its keep-alive timeout passes (at once if the client asked for `Connection: close`).
         source.unpipe(parser);
         source.pause();
       }

@@ -4,7 +4,7 @@ import { openDatabase } from "../../db/index";
 import { DEMO_PASSWORD } from "../../db/seed-data";
 import { datasheetPdf, htmlPage, payloadPhoto } from "../support/attachment-files";
 import { AttachmentsSection } from "../support/attachments-page";
-import { SignInPage, launchBrowser, newPersonContext, screenshot } from "../support/browser";
+import { SignInPage, launchBrowser, screenshot } from "../support/browser";
 import { ApiClient } from "../support/http";
 import { submittedSetup } from "../support/setup-fixtures";
 
@@ -19,8 +19,12 @@ let browser: Browser;
 let database: ReturnType<typeof openDatabase>;
 let setupId: string;
 
+let personCount = 0;
+
 async function signedIn(email: string, next: string): Promise<Page> {
-  const context = await newPersonContext(browser, baseURL);
+  // Client addresses of this file's own: sign-in limits count per address and per minute, across files.
+  personCount += 1;
+  const context = await browser.newContext({ baseURL, viewport: { width: 1360, height: 900 }, extraHTTPHeaders: { "x-forwarded-for": `10.79.0.${personCount}` } });
   const page = await context.newPage();
   const signIn = new SignInPage(page);
   await signIn.open(next);
@@ -40,7 +44,7 @@ beforeAll(async () => {
   browser = await launchBrowser();
   database = openDatabase(inject("databaseUrl"));
   // Staff see a setup once it has been submitted: Wren's orchard camera, all flags ok, submitted over the API.
-  const wren = new ApiClient(baseURL);
+  const wren = new ApiClient(baseURL, "10.79.1.1");
   expect((await wren.signIn("customer@trimrail.test")).status).toBe(200);
   setupId = (await submittedSetup(database.db, wren, { from: "set-wren-cam", name: SETUP_NAME })).id;
 });

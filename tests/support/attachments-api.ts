@@ -47,8 +47,10 @@ export function streamUpload(
   { fileBytes, start, fileName = "big.jpg", keepSending = false }: { fileBytes: number; start: Buffer; fileName?: string; keepSending?: boolean },
 ): Promise<StreamedUploadOutcome> {
   const boundary = "----trimrail-stream-boundary";
-  // A connection of its own: a refused upload's connection is never handed to the next request.
-  const agent = new http.Agent({ keepAlive: false });
+  // A keep-alive connection, as browsers use (a client asking for "Connection: close" has the
+  // server hang up right after its answer, which a sender still writing may meet as a reset before
+  // reading the answer), but a pool of its own: a refused upload's connection is never reused.
+  const agent = new http.Agent({ keepAlive: true, maxSockets: 1 });
   return new Promise((resolve) => {
     let sentBytes = 0;
     let sentAtAnswerBytes: number | null = null;

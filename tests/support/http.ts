@@ -15,9 +15,12 @@ export function nextClientAddress(): string {
 /** A minimal cookie-keeping client for the real route handlers of the running server. */
 export class ApiClient {
   private cookies = new Map<string, string>();
-  readonly address = nextClientAddress();
 
-  constructor(private readonly baseURL: string) {}
+  /** `address`: the client address it claims; a test file may keep its own range apart from the others'. */
+  constructor(
+    private readonly baseURL: string,
+    readonly address = nextClientAddress(),
+  ) {}
 
   async request(method: string, pathname: string, body?: unknown, headers: Record<string, string> = {}): Promise<Response> {
     const response = await fetch(new URL(pathname, this.baseURL), {
