@@ -9,7 +9,9 @@ export default function Forbidden() {
       <p className="figure text-sm text-muted">403</p>
       <h1 className="mt-1 text-2xl">This page is not open to your role</h1>
       <p className="mt-2 text-muted">Ask the workshop if you think your account should have access.</p>
-      <Link href="/setups" className="mt-6 inline-block text-accent underline">Back to your setups</Link>
+      <Link href="/setups" className="mt-6 inline-block text-accent underline">
+        Back to your setups
+      </Link>
     </div>
   );
 }

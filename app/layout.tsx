@@ -14,7 +14,10 @@ export default function RootLayout({ children }: { children: ReactNode }) {
     <html lang="en">
       <body className="min-h-screen bg-paper font-sans text-ink antialiased">
         {/* Every page marks where its own content starts with id="main" (past the header and navigation). */}
-        <a href="#main" className="sr-only rounded bg-ink px-3 py-2 text-white focus:not-sr-only focus:absolute focus:top-2 focus:left-2 focus:z-50">
+        <a
+          href="#main"
+          className="sr-only rounded bg-ink px-3 py-2 text-white focus:not-sr-only focus:absolute focus:top-2 focus:left-2 focus:z-50"
+        >
           Skip to main content
         </a>
         {children}

@@ -33,7 +33,8 @@ export async function restoreDatabase({ url, from }: { url: string; from: string
   const source = path.resolve(from);
   if (!existsSync(source)) throw new Error(`No backup at ${source}.`);
   const health = await checkDatabaseHealth(`file:${source}`);
-  if (health.state === "unreachable" || health.state === "not-migrated") throw new Error(`${source} is not a Trimrail database: ${health.message}`);
+  if (health.state === "unreachable" || health.state === "not-migrated")
+    throw new Error(`${source} is not a Trimrail database: ${health.message}`);
   const target = localPath(url);
   const staging = `${target}.restoring`;
   copyFileSync(source, staging);

@@ -39,13 +39,21 @@ function localWriteProblem(url: string): string | null {
  */
 export async function checkDatabaseHealth(url: string = process.env.DATABASE_URL ?? DEFAULT_DATABASE_URL): Promise<DatabaseHealth> {
   const expectedMigrations = journal.entries.length;
-  const at = (state: DatabaseState, message: string, appliedMigrations: number | null = null): DatabaseHealth => ({ state, message, appliedMigrations, expectedMigrations });
+  const at = (state: DatabaseState, message: string, appliedMigrations: number | null = null): DatabaseHealth => ({
+    state,
+    message,
+    appliedMigrations,
+    expectedMigrations,
+  });
   let client;
   try {
     client = createClient({ url });
     await client.execute("select 1");
   } catch (error) {
-    return at("unreachable", `The database at ${url} cannot be opened (${describe(error)}). Check DATABASE_URL and that its folder exists.`);
+    return at(
+      "unreachable",
+      `The database at ${url} cannot be opened (${describe(error)}). Check DATABASE_URL and that its folder exists.`,
+    );
   }
   try {
     let applied: number;
@@ -56,16 +64,29 @@ export async function checkDatabaseHealth(url: string = process.env.DATABASE_URL
       return at("not-migrated", `The database at ${url} has no migrations applied: run \`npm run db:migrate\`.`, 0);
     }
     if (applied < expectedMigrations) {
-      return at("migrations-behind", `The database at ${url} has ${applied} of ${expectedMigrations} migrations: run \`npm run db:migrate\`.`, applied);
+      return at(
+        "migrations-behind",
+        `The database at ${url} has ${applied} of ${expectedMigrations} migrations: run \`npm run db:migrate\`.`,
+        applied,
+      );
     }
     const fileProblem = localWriteProblem(url);
-    if (fileProblem) return at("read-only", `The database at ${url} cannot be written (${fileProblem}). Give the server write access to the file and its folder.`, applied);
+    if (fileProblem)
+      return at(
+        "read-only",
+        `The database at ${url} cannot be written (${fileProblem}). Give the server write access to the file and its folder.`,
+        applied,
+      );
     try {
       // Takes the write lock and lets it go: fails on a read-only connection or server.
       const tx = await client.transaction("write");
       await tx.rollback();
     } catch (error) {
-      return at("read-only", `The database at ${url} cannot be written (${describe(error)}). Give the server write access to the file and its folder.`, applied);
+      return at(
+        "read-only",
+        `The database at ${url} cannot be written (${describe(error)}). Give the server write access to the file and its folder.`,
+        applied,
+      );
     }
     return at("ready", "The database is open, writable and migrated.", applied);
   } finally {

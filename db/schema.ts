@@ -26,9 +26,13 @@ const inList = (column: string, values: readonly string[]) =>
   sql.raw(`${column} in (${values.map((v) => `'${v.replace(/'/g, "''")}'`).join(", ")})`);
 
 const createdAt = () =>
-  integer("created_at", { mode: "timestamp_ms" }).notNull().default(sql`(cast(unixepoch('subsec') * 1000 as integer))`);
+  integer("created_at", { mode: "timestamp_ms" })
+    .notNull()
+    .default(sql`(cast(unixepoch('subsec') * 1000 as integer))`);
 const updatedAt = () =>
-  integer("updated_at", { mode: "timestamp_ms" }).notNull().default(sql`(cast(unixepoch('subsec') * 1000 as integer))`);
+  integer("updated_at", { mode: "timestamp_ms" })
+    .notNull()
+    .default(sql`(cast(unixepoch('subsec') * 1000 as integer))`);
 
 // ---------------------------------------------------------------- better-auth (core tables + our role and units)
 
@@ -115,34 +119,41 @@ export const rateLimit = sqliteTable("rate_limit", {
 
 // ---------------------------------------------------------------- catalogue (the maker's Workshop)
 
-export const envelopeModels = sqliteTable("envelope_models", {
-  id: text("id").primaryKey(),
-  slug: text("slug").notNull().unique(),
-  name: text("name").notNull(),
-  description: text("description").notNull().default(""),
-  // Parametric hull (lib/balance geometry's HullParams), kept as JSON so the GLB can be rebuilt.
-  hullJson: text("hull_json", { mode: "json" }).$type<HullParams>().notNull(),
-  gasVolumeM3: real("gas_volume_m3").notNull(),
-  nominalMassKg: real("nominal_mass_kg").notNull(),
-  buoyancyCentreXM: real("buoyancy_centre_x_m").notNull(),
-  buoyancyCentreZM: real("buoyancy_centre_z_m").notNull(),
-  massCentreXM: real("mass_centre_x_m").notNull(),
-  massCentreZM: real("mass_centre_z_m").notNull(),
-  tetherPointXM: real("tether_point_x_m").notNull(),
-  tetherPointZM: real("tether_point_z_m").notNull(),
-  railStartXM: real("rail_start_x_m").notNull(),
-  railEndXM: real("rail_end_x_m").notNull(),
-  railZM: real("rail_z_m").notNull(),
-  railTabCount: integer("rail_tab_count").notNull(),
-  // { sailAreaM2, liftSlopePerRad, zeroLiftTrimDeg, dragCoefficient, pressureCentre: { x, z } }
-  aeroJson: text("aero_json", { mode: "json" }).$type<AeroInput>(),
-  // Flag limits for this model; missing keys fall back to the engine's defaults.
-  limitsJson: text("limits_json", { mode: "json" }).$type<LimitsInput>().notNull().default(sql`'{}'`),
-  glbPath: text("glb_path").notNull(),
-  active: integer("active", { mode: "boolean" }).notNull().default(true),
-  createdAt: createdAt(),
-  updatedAt: updatedAt(),
-}, (t) => [index("envelope_models_name_idx").on(t.name, t.id)]);
+export const envelopeModels = sqliteTable(
+  "envelope_models",
+  {
+    id: text("id").primaryKey(),
+    slug: text("slug").notNull().unique(),
+    name: text("name").notNull(),
+    description: text("description").notNull().default(""),
+    // Parametric hull (lib/balance geometry's HullParams), kept as JSON so the GLB can be rebuilt.
+    hullJson: text("hull_json", { mode: "json" }).$type<HullParams>().notNull(),
+    gasVolumeM3: real("gas_volume_m3").notNull(),
+    nominalMassKg: real("nominal_mass_kg").notNull(),
+    buoyancyCentreXM: real("buoyancy_centre_x_m").notNull(),
+    buoyancyCentreZM: real("buoyancy_centre_z_m").notNull(),
+    massCentreXM: real("mass_centre_x_m").notNull(),
+    massCentreZM: real("mass_centre_z_m").notNull(),
+    tetherPointXM: real("tether_point_x_m").notNull(),
+    tetherPointZM: real("tether_point_z_m").notNull(),
+    railStartXM: real("rail_start_x_m").notNull(),
+    railEndXM: real("rail_end_x_m").notNull(),
+    railZM: real("rail_z_m").notNull(),
+    railTabCount: integer("rail_tab_count").notNull(),
+    // { sailAreaM2, liftSlopePerRad, zeroLiftTrimDeg, dragCoefficient, pressureCentre: { x, z } }
+    aeroJson: text("aero_json", { mode: "json" }).$type<AeroInput>(),
+    // Flag limits for this model; missing keys fall back to the engine's defaults.
+    limitsJson: text("limits_json", { mode: "json" })
+      .$type<LimitsInput>()
+      .notNull()
+      .default(sql`'{}'`),
+    glbPath: text("glb_path").notNull(),
+    active: integer("active", { mode: "boolean" }).notNull().default(true),
+    createdAt: createdAt(),
+    updatedAt: updatedAt(),
+  },
+  (t) => [index("envelope_models_name_idx").on(t.name, t.id)],
+);
 
 export const envelopeUnits = sqliteTable(
   "envelope_units",
@@ -218,10 +229,7 @@ export const adapters = sqliteTable(
     ratedLoadKg: real("rated_load_kg").notNull(),
     active: integer("active", { mode: "boolean" }).notNull().default(true),
   },
-  () => [
-    check("adapters_from_check", inList("from_thread", ATTACHMENTS)),
-    check("adapters_to_check", inList("to_thread", THREADS)),
-  ],
+  () => [check("adapters_from_check", inList("from_thread", ATTACHMENTS)), check("adapters_to_check", inList("to_thread", THREADS))],
 );
 
 /** What a payload is, the same in the catalogue's templates and on a setup's mount. */
@@ -282,7 +290,9 @@ export const setups = sqliteTable(
     // Where the wind was measured and how it grows with height (the power law); defaults: a 10 m
     // mast (WMO-No. 8) and α = 1/7 (common practice), as the engine assumes for older rows.
     windMeasuredAtM: real("wind_measured_at_m").notNull().default(10),
-    windShearExponent: real("wind_shear_exponent").notNull().default(1 / 7),
+    windShearExponent: real("wind_shear_exponent")
+      .notNull()
+      .default(1 / 7),
     relativeHumidity: real("relative_humidity"), // null: dry air, as ISA
     purity: real("purity").notNull().default(1),
     superheatK: real("superheat_k").notNull().default(0),
@@ -413,14 +423,14 @@ export const decisions = sqliteTable(
     outcome: text("outcome", { enum: DECISION_OUTCOMES }).notNull(),
     setupVersion: integer("setup_version").notNull(),
     // Reason codes (e.g. "trim", "free-lift", "attachment") so Insight can count why setups fail.
-    reasonsJson: text("reasons_json", { mode: "json" }).$type<string[]>().notNull().default(sql`'[]'`),
+    reasonsJson: text("reasons_json", { mode: "json" })
+      .$type<string[]>()
+      .notNull()
+      .default(sql`'[]'`),
     note: text("note").notNull().default(""),
     createdAt: createdAt(),
   },
-  (t) => [
-    index("decisions_setup_idx").on(t.setupId, t.createdAt),
-    check("decisions_outcome_check", inList("outcome", DECISION_OUTCOMES)),
-  ],
+  (t) => [index("decisions_setup_idx").on(t.setupId, t.createdAt), check("decisions_outcome_check", inList("outcome", DECISION_OUTCOMES))],
 );
 
 export const attachments = sqliteTable(
@@ -490,7 +500,10 @@ export const auditLog = sqliteTable(
     action: text("action").notNull(), // e.g. "setup.save", "user.role"
     entityType: text("entity_type").notNull(),
     entityId: text("entity_id").notNull(),
-    detailJson: text("detail_json", { mode: "json" }).$type<Record<string, unknown>>().notNull().default(sql`'{}'`),
+    detailJson: text("detail_json", { mode: "json" })
+      .$type<Record<string, unknown>>()
+      .notNull()
+      .default(sql`'{}'`),
     createdAt: createdAt(),
   },
   (t) => [index("audit_log_entity_idx").on(t.entityType, t.entityId, t.createdAt)],

@@ -14,11 +14,58 @@ import { columnsFromDraft, payloadRowsFromDraft, resultRows, summaryColumns } fr
 // each with the server's own evaluation stored, written through the app's own column mapping.
 // Deterministic (a seeded generator), so two runs build the same rows.
 
-const FIRST = ["Alder", "Brisk", "Corrin", "Dace", "Elm", "Fenn", "Garth", "Hale", "Ivo", "Juno", "Kell", "Lark", "Mabry", "Nell", "Orla", "Pike", "Quill", "Rook", "Sable", "Tamsin"];
-const LAST = ["Ashdown", "Brackley", "Cairnholt", "Dunmere", "Eskwith", "Farrowby", "Gillan", "Hollins", "Ingleby", "Jessop", "Kettering", "Lowther", "Marrick", "Norland", "Ormsby", "Pellow", "Quarrie", "Rathbone", "Sowerby", "Thwaite"];
+const FIRST = [
+  "Alder",
+  "Brisk",
+  "Corrin",
+  "Dace",
+  "Elm",
+  "Fenn",
+  "Garth",
+  "Hale",
+  "Ivo",
+  "Juno",
+  "Kell",
+  "Lark",
+  "Mabry",
+  "Nell",
+  "Orla",
+  "Pike",
+  "Quill",
+  "Rook",
+  "Sable",
+  "Tamsin",
+];
+const LAST = [
+  "Ashdown",
+  "Brackley",
+  "Cairnholt",
+  "Dunmere",
+  "Eskwith",
+  "Farrowby",
+  "Gillan",
+  "Hollins",
+  "Ingleby",
+  "Jessop",
+  "Kettering",
+  "Lowther",
+  "Marrick",
+  "Norland",
+  "Ormsby",
+  "Pellow",
+  "Quarrie",
+  "Rathbone",
+  "Sowerby",
+  "Thwaite",
+];
 const PLACES = ["north field", "ridge top", "river meadow", "harbour wall", "quarry edge", "old airstrip", "dune slack", "moor gate"];
 const PLANS = ["survey", "relay", "profile", "test lift", "night marker", "beacon", "sampling", "mapping"];
-const STATUSES: readonly [SetupStatus, number][] = [["draft", 0.4], ["submitted", 0.25], ["changes_requested", 0.1], ["approved", 0.25]];
+const STATUSES: readonly [SetupStatus, number][] = [
+  ["draft", 0.4],
+  ["submitted", 0.25],
+  ["changes_requested", 0.1],
+  ["approved", 0.25],
+];
 const DAY_MS = 86_400_000;
 
 /** mulberry32: a small, well-mixed 32-bit generator (public-domain algorithm), seeded for repeatable data. */
@@ -42,7 +89,10 @@ export interface LargeSeedOptions {
 /** The invented customer whose account can sign in: `large-0@customers.trimrail.test`. */
 export const LARGE_SIGN_IN_EMAIL = "large-0@customers.trimrail.test";
 
-export async function seedLarge(db: Database, { setups, customers, onProgress }: LargeSeedOptions): Promise<{ customers: number; setups: number }> {
+export async function seedLarge(
+  db: Database,
+  { setups, customers, onProgress }: LargeSeedOptions,
+): Promise<{ customers: number; setups: number }> {
   const rand = random(20261202);
   const pick = <T>(items: readonly T[]): T => items[Math.floor(rand() * items.length)];
   const models = DEMO_MODELS.map(demoModelRow);
@@ -55,7 +105,13 @@ export async function seedLarge(db: Database, { setups, customers, onProgress }:
       const n = start + i;
       const id = `usr-large-${String(n).padStart(5, "0")}`;
       customerIds.push(id);
-      return { id, name: `${FIRST[n % FIRST.length]} ${LAST[Math.floor(n / FIRST.length) % LAST.length]} ${Math.floor(n / 400) + 1}`, email: `large-${n}@customers.trimrail.test`, emailVerified: true, role: "customer" as const };
+      return {
+        id,
+        name: `${FIRST[n % FIRST.length]} ${LAST[Math.floor(n / FIRST.length) % LAST.length]} ${Math.floor(n / 400) + 1}`,
+        email: `large-${n}@customers.trimrail.test`,
+        emailVerified: true,
+        role: "customer" as const,
+      };
     });
     await db.insert(t.user).values(batch).onConflictDoNothing();
   }
@@ -77,11 +133,37 @@ export async function seedLarge(db: Database, { setups, customers, onProgress }:
         unitId: null,
         mountId: mount.id,
         mountPositionXM: model.railStartXM + rand() * (model.railEndXM - model.railStartXM),
-        site: { siteName: pick(PLACES), altitudeM: Math.round(rand() * 1500), temperatureC: Math.round(rand() * 30 - 5), pressurePa: null, windMS: Math.round(rand() * 90) / 10, gustMS: Math.round(rand() * 140) / 10, ...DEFAULT_WIND_MEASUREMENT, relativeHumidity: null },
+        site: {
+          siteName: pick(PLACES),
+          altitudeM: Math.round(rand() * 1500),
+          temperatureC: Math.round(rand() * 30 - 5),
+          pressurePa: null,
+          windMS: Math.round(rand() * 90) / 10,
+          gustMS: Math.round(rand() * 140) / 10,
+          ...DEFAULT_WIND_MEASUREMENT,
+          relativeHumidity: null,
+        },
         gas: { purity: 0.9 + Math.round(rand() * 10) / 100, superheatK: 0, fillFraction: 1 },
         tether: { massPerMetreKg: 0.0012, lengthOutM: 20 + Math.round(rand() * 130), breakingLoadN: 900, diameterM: null },
         targetHeightM: null,
-        payloads: templates.map((tpl) => ({ templateId: tpl.id, name: tpl.name, category: tpl.category, massKg: tpl.massKg, shape: tpl.shape, lengthM: tpl.lengthM, widthM: tpl.widthM, heightM: tpl.heightM, attachment: tpl.attachment, adapterId: tpl.attachment === mount.thread ? null : (DEMO_ADAPTERS.find((a) => a.fromThread === tpl.attachment && a.toThread === mount.thread)?.id ?? null), dragAreaM2: tpl.dragAreaM2, offsetXM: tpl.offsetXM, offsetZM: tpl.offsetZM })),
+        payloads: templates.map((tpl) => ({
+          templateId: tpl.id,
+          name: tpl.name,
+          category: tpl.category,
+          massKg: tpl.massKg,
+          shape: tpl.shape,
+          lengthM: tpl.lengthM,
+          widthM: tpl.widthM,
+          heightM: tpl.heightM,
+          attachment: tpl.attachment,
+          adapterId:
+            tpl.attachment === mount.thread
+              ? null
+              : (DEMO_ADAPTERS.find((a) => a.fromThread === tpl.attachment && a.toThread === mount.thread)?.id ?? null),
+          dragAreaM2: tpl.dragAreaM2,
+          offsetXM: tpl.offsetXM,
+          offsetZM: tpl.offsetZM,
+        })),
       };
       const catalogue: SetupCatalogue = { model: model as SetupCatalogue["model"], unit: null, mount, adaptersById };
       const result = evaluateBalance(toBalanceInput(draft, catalogue));
@@ -111,7 +193,11 @@ export async function seedLarge(db: Database, { setups, customers, onProgress }:
       await tx.insert(t.setups).values(setupRows).onConflictDoNothing();
       if (payloadRows.length) await tx.insert(t.setupPayloads).values(payloadRows).onConflictDoNothing();
       await tx.insert(t.setupResults).values(storedResults).onConflictDoNothing();
-      for (let k = 0; k < flagRows.length; k += 2000) await tx.insert(t.setupFlags).values(flagRows.slice(k, k + 2000)).onConflictDoNothing();
+      for (let k = 0; k < flagRows.length; k += 2000)
+        await tx
+          .insert(t.setupFlags)
+          .values(flagRows.slice(k, k + 2000))
+          .onConflictDoNothing();
     });
     onProgress?.(start + size);
   }
@@ -120,7 +206,13 @@ export async function seedLarge(db: Database, { setups, customers, onProgress }:
   if (first) {
     await db
       .insert(t.account)
-      .values({ id: `acc-${first}`, accountId: first, providerId: "credential", userId: first, password: await hashPassword(DEMO_PASSWORD) })
+      .values({
+        id: `acc-${first}`,
+        accountId: first,
+        providerId: "credential",
+        userId: first,
+        password: await hashPassword(DEMO_PASSWORD),
+      })
       .onConflictDoNothing();
   }
   await db.run(sql`analyze`);

@@ -77,14 +77,21 @@ export function demoSetupDraft(s: DemoSetup, railStartXM: number, railEndXM: num
     mountId: s.mountId,
     mountPositionXM: railStartXM + s.railFraction * (railEndXM - railStartXM),
     site: {
-      siteName: s.siteName, altitudeM: s.altitudeM, temperatureC: s.temperatureC, pressurePa: null, windMS: s.windMS, gustMS: s.gustMS,
+      siteName: s.siteName,
+      altitudeM: s.altitudeM,
+      temperatureC: s.temperatureC,
+      pressurePa: null,
+      windMS: s.windMS,
+      gustMS: s.gustMS,
       windMeasuredAtM: s.windMeasuredAtM ?? DEFAULT_WIND_MEASUREMENT.windMeasuredAtM,
       windShearExponent: DEFAULT_WIND_MEASUREMENT.windShearExponent,
       relativeHumidity: s.relativeHumidity ?? null,
     },
     gas: { purity: s.purity, superheatK: 0, fillFraction: 1 },
     tether: {
-      massPerMetreKg: DEMO_TETHER.tetherMassPerMetreKg, lengthOutM: s.tetherLengthOutM, breakingLoadN: DEMO_TETHER.tetherBreakingLoadN,
+      massPerMetreKg: DEMO_TETHER.tetherMassPerMetreKg,
+      lengthOutM: s.tetherLengthOutM,
+      breakingLoadN: DEMO_TETHER.tetherBreakingLoadN,
       diameterM: DEMO_TETHER.tetherDiameterM,
     },
     targetHeightM: s.targetHeightM ?? null,
@@ -120,7 +127,9 @@ export async function seedDemo(db: Database): Promise<SeedCounts> {
     if (existing) continue;
     const at = new Date(SEED_EPOCH_MS - 365 * DAY_MS);
     await db.transaction(async (tx) => {
-      await tx.insert(t.user).values({ id: u.id, name: u.name, email: u.email, emailVerified: true, role: u.role, createdAt: at, updatedAt: at });
+      await tx
+        .insert(t.user)
+        .values({ id: u.id, name: u.name, email: u.email, emailVerified: true, role: u.role, createdAt: at, updatedAt: at });
       await tx.insert(t.account).values({
         id: `acc-${u.id}`,
         accountId: u.id,
@@ -135,11 +144,26 @@ export async function seedDemo(db: Database): Promise<SeedCounts> {
 
   const models = DEMO_MODELS.map(demoModelRow);
   await db.insert(t.envelopeModels).values(models).onConflictDoNothing();
-  await db.insert(t.envelopeUnits).values(DEMO_UNITS.map((u) => ({ ...u, createdAt: new Date(SEED_EPOCH_MS - 100 * DAY_MS) }))).onConflictDoNothing();
-  await db.insert(t.unitLiftTests).values(DEMO_LIFT_TESTS.map((lt) => ({ ...lt, createdAt: LIFT_TESTS_AT }))).onConflictDoNothing();
-  await db.insert(t.mounts).values([...DEMO_MOUNTS]).onConflictDoNothing();
-  await db.insert(t.adapters).values([...DEMO_ADAPTERS]).onConflictDoNothing();
-  await db.insert(t.payloadTemplates).values([...DEMO_TEMPLATES]).onConflictDoNothing();
+  await db
+    .insert(t.envelopeUnits)
+    .values(DEMO_UNITS.map((u) => ({ ...u, createdAt: new Date(SEED_EPOCH_MS - 100 * DAY_MS) })))
+    .onConflictDoNothing();
+  await db
+    .insert(t.unitLiftTests)
+    .values(DEMO_LIFT_TESTS.map((lt) => ({ ...lt, createdAt: LIFT_TESTS_AT })))
+    .onConflictDoNothing();
+  await db
+    .insert(t.mounts)
+    .values([...DEMO_MOUNTS])
+    .onConflictDoNothing();
+  await db
+    .insert(t.adapters)
+    .values([...DEMO_ADAPTERS])
+    .onConflictDoNothing();
+  await db
+    .insert(t.payloadTemplates)
+    .values([...DEMO_TEMPLATES])
+    .onConflictDoNothing();
 
   const adaptersById = Object.fromEntries(DEMO_ADAPTERS.map((a) => [a.id, a]));
   for (const s of DEMO_SETUPS) {

@@ -56,11 +56,24 @@ export function payloadRowsFromDraft(setupId: string, draft: SetupDraft, idFor: 
 export function draftFromRows(row: SetupRow, payloadRows: readonly SetupPayloadRow[]): SetupDraft {
   const tether =
     row.tetherMassPerMetreKg !== null && row.tetherLengthOutM !== null && row.tetherBreakingLoadN !== null
-      ? { massPerMetreKg: row.tetherMassPerMetreKg, lengthOutM: row.tetherLengthOutM, breakingLoadN: row.tetherBreakingLoadN, diameterM: row.tetherDiameterM }
+      ? {
+          massPerMetreKg: row.tetherMassPerMetreKg,
+          lengthOutM: row.tetherLengthOutM,
+          breakingLoadN: row.tetherBreakingLoadN,
+          diameterM: row.tetherDiameterM,
+        }
       : null;
   const liftCheck =
-    row.liftCheckFreeLiftKg !== null && row.liftCheckTemperatureC !== null && row.liftCheckWeighedWith !== null && row.liftCheckSolveFor !== null
-      ? { freeLiftKg: row.liftCheckFreeLiftKg, temperatureC: row.liftCheckTemperatureC, weighedWith: row.liftCheckWeighedWith, solveFor: row.liftCheckSolveFor }
+    row.liftCheckFreeLiftKg !== null &&
+    row.liftCheckTemperatureC !== null &&
+    row.liftCheckWeighedWith !== null &&
+    row.liftCheckSolveFor !== null
+      ? {
+          freeLiftKg: row.liftCheckFreeLiftKg,
+          temperatureC: row.liftCheckTemperatureC,
+          weighedWith: row.liftCheckWeighedWith,
+          solveFor: row.liftCheckSolveFor,
+        }
       : null;
   return {
     name: row.name,

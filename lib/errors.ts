@@ -44,9 +44,7 @@ export const fail = (code: ErrorCode, message: string, issues?: FieldIssue[]): {
 /** Flattens zod issues into "a.b[0].c: message" pairs a form or an API client can point at. */
 export function issuesFromZod(error: z.ZodError): FieldIssue[] {
   return error.issues.map((issue) => ({
-    path: issue.path
-      .map((part, i) => (typeof part === "number" ? `[${part}]` : `${i === 0 ? "" : "."}${String(part)}`))
-      .join(""),
+    path: issue.path.map((part, i) => (typeof part === "number" ? `[${part}]` : `${i === 0 ? "" : "."}${String(part)}`)).join(""),
     message: issue.message,
   }));
 }

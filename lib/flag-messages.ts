@@ -59,9 +59,7 @@ function payloadNames(payloads: readonly PayloadRef[] | undefined, opening = fal
   const counts = new Map<string, number>();
   for (const p of payloads ?? []) counts.set(p.name, (counts.get(p.name) ?? 0) + 1);
   const names = [...counts].map(([name, n]) => (n > 1 ? `${name} (×${n})` : name));
-  const text = names.length <= 1
-    ? names[0] ?? "the payload"
-    : `${names.slice(0, -1).join(", ")} and ${names[names.length - 1]}`;
+  const text = names.length <= 1 ? (names[0] ?? "the payload") : `${names.slice(0, -1).join(", ")} and ${names[names.length - 1]}`;
   return { text: opening ? capitalised(text) : text, plural: (payloads?.length ?? 0) > 1 };
 }
 
@@ -140,15 +138,19 @@ const MESSAGES: { readonly [C in FlagCode]: Wording<C> } = {
       const via = params.viaAdapter ? ` through an adapter from ${params.payloadThread}` : "";
       return `${text} ${plural ? "fit" : "fits"} the mount's ${params.mountThread} screw${via}.`;
     }
-    return `${text} ${plural ? "have" : "has"} a ${params.payloadThread} thread and the mount a ` +
-      `${params.mountThread} screw: fit ${plural ? "each" : "it"} with an adapter.`;
+    return (
+      `${text} ${plural ? "have" : "has"} a ${params.payloadThread} thread and the mount a ` +
+      `${params.mountThread} screw: fit ${plural ? "each" : "it"} with an adapter.`
+    );
   },
 
   "adapter-mismatch": ({ params, payloads }) => {
     const { text, plural } = payloadNames(payloads);
-    return `The adapter on the ${text} joins ${attachmentWords(params.adapterFrom)} to ${params.adapterTo}, ` +
+    return (
+      `The adapter on the ${text} joins ${attachmentWords(params.adapterFrom)} to ${params.adapterTo}, ` +
       `but ${plural ? "the payloads have" : "the payload has"} a ${params.payloadThread} thread and the mount a ` +
-      `${params.mountThread} screw: use one from ${params.payloadThread} to ${params.mountThread}.`;
+      `${params.mountThread} screw: use one from ${params.payloadThread} to ${params.mountThread}.`
+    );
   },
 
   "mount-rated-load": ({ level, figures: { load, share }, params }, say) => {
@@ -162,13 +164,20 @@ const MESSAGES: { readonly [C in FlagCode]: Wording<C> } = {
 
   "thread-capacity": ({ level, figures: { load }, params, payloads }, say) => {
     const name = payloadNames(payloads).text;
-    const screw = params.screw === "mount"
-      ? `the mount's ${params.thread} screw`
-      : params.screw === "adapter" ? `the ${params.thread} thread of the adapter on the ${name}` : `the ${params.thread} thread of the ${name}`;
-    const text = `The most loaded screw, ${screw}, takes ${say.value(load)} in gusts ` +
+    const screw =
+      params.screw === "mount"
+        ? `the mount's ${params.thread} screw`
+        : params.screw === "adapter"
+          ? `the ${params.thread} thread of the adapter on the ${name}`
+          : `the ${params.thread} thread of the ${name}`;
+    const text =
+      `The most loaded screw, ${screw}, takes ${say.value(load)} in gusts ` +
       `(${factor(params.loadFactor)} × the weight it carries) against its proof load of ${say.limit(load)}`;
-    return level === "stop" ? `${text}: more than it can take.`
-      : level === "caution" ? `${text}: more than half of it.` : `${text}, under half of it.`;
+    return level === "stop"
+      ? `${text}: more than it can take.`
+      : level === "caution"
+        ? `${text}: more than half of it.`
+        : `${text}, under half of it.`;
   },
 
   "safety-line": ({ level, figures: { breakingLoad, needed }, params }, say) => {
@@ -178,7 +187,8 @@ const MESSAGES: { readonly [C in FlagCode]: Wording<C> } = {
       return `No safety line is given: fly the payloads on one${strength} (${times(params.safetyLineFactor)}).`;
     }
     const text = `The safety line breaks at ${say.value(breakingLoad)}`;
-    if (level === "stop") return `${text}, below the payloads' gust load of ${say.limit(breakingLoad)} (${factor(params.loadFactor)} × their weight).`;
+    if (level === "stop")
+      return `${text}, below the payloads' gust load of ${say.limit(breakingLoad)} (${factor(params.loadFactor)} × their weight).`;
     if (level === "caution") return `${text}; at least ${say.limit(breakingLoad)} (${times(params.safetyLineFactor)}) is advised.`;
     return `${text}, at least the ${say.limit(breakingLoad)} advised (${times(params.safetyLineFactor)}).`;
   },
@@ -205,12 +215,16 @@ const MESSAGES: { readonly [C in FlagCode]: Wording<C> } = {
   "tether-length": ({ level, figures: { lineOut, lineMass, freeLift, freeLiftLeft } }, say) => {
     const most = `it can hold up at most ${say.limit(lineOut)} in calm air`;
     if (level === "stop" && lineMass && freeLift) {
-      return `The ${say.value(lineOut)} of tether out weighs ${say.value(lineMass)}, more than the free lift of ` +
-        `${say.value(freeLift)}: ${most}.`;
+      return (
+        `The ${say.value(lineOut)} of tether out weighs ${say.value(lineMass)}, more than the free lift of ` +
+        `${say.value(freeLift)}: ${most}.`
+      );
     }
     if (level === "caution" && freeLiftLeft) {
-      return `With ${say.value(lineOut)} of tether out, the free lift left is ${say.value(freeLiftLeft)} of ` +
-        `gross lift; caution below ${say.limit(freeLiftLeft)}. ${capitalised(most)}.`;
+      return (
+        `With ${say.value(lineOut)} of tether out, the free lift left is ${say.value(freeLiftLeft)} of ` +
+        `gross lift; caution below ${say.limit(freeLiftLeft)}. ${capitalised(most)}.`
+      );
     }
     return `The ${say.value(lineOut)} of tether out is within the ${say.limit(lineOut)} it can hold up in calm air.`;
   },
@@ -218,12 +232,16 @@ const MESSAGES: { readonly [C in FlagCode]: Wording<C> } = {
   "tether-strength": ({ level, figures: { tension, breakingLoad }, params }, say) => {
     const at = `${AT[params.case]}${params.end === "anchor" ? " at the anchor" : ""}`;
     if (level === "stop") {
-      return `The largest tether tension, ${say.value(tension)} ${at}, is at or above the tether's breaking load of ` +
-        `${say.value(breakingLoad)}: it would break.`;
+      return (
+        `The largest tether tension, ${say.value(tension)} ${at}, is at or above the tether's breaking load of ` +
+        `${say.value(breakingLoad)}: it would break.`
+      );
     }
-    return `The largest tether tension is ${say.value(tension)} ${at}, ${level === "ok" ? "within" : "more than"} ` +
+    return (
+      `The largest tether tension is ${say.value(tension)} ${at}, ${level === "ok" ? "within" : "more than"} ` +
       `the ${say.limit(tension)} that keeps a safety factor of ${factor(params.safetyFactor)} on the tether's ` +
-      `breaking load of ${say.value(breakingLoad)}.`;
+      `breaking load of ${say.value(breakingLoad)}.`
+    );
   },
 
   "tether-on-ground": ({ figures: { onGround, lineOut, speed }, params }, say) =>
@@ -236,14 +254,15 @@ const MESSAGES: { readonly [C in FlagCode]: Wording<C> } = {
     `falls from ${say.value(freeLiftRatio)} of gross lift to the ${say.limit(freeLiftRatio)} caution limit by then.`,
 
   "moored-balloon-rules": ({ level, figures: { gasVolume, diameter } }, say) => {
-    const part = (label: string, f: Figure) => `${label} ${say.value(f)} (${f.value > (f.limit ?? Infinity) ? "over" : "under"} ${say.limit(f)})`;
+    const part = (label: string, f: Figure) =>
+      `${label} ${say.value(f)} (${f.value > (f.limit ?? Infinity) ? "over" : "under"} ${say.limit(f)})`;
     const parts = [part("Gas volume", gasVolume), ...(diameter ? [part("largest diameter", diameter)] : [])];
     const subject = parts.join(" and ");
     const plural = parts.length > 1;
     return level === "ok"
       ? `${subject} ${plural ? "keep" : "keeps"} it under the US size thresholds (14 CFR 101.1); local rules still apply.`
       : `${subject} ${plural ? "put" : "puts"} it over a US size threshold (14 CFR 101.1): Part 101 applies ` +
-        "(distance from airports, clearance from cloud, a height ceiling). Check your local rules too.";
+          "(distance from airports, clearance from cloud, a height ceiling). Check your local rules too.";
   },
 
   "tether-height": ({ figures: { usNotice, ukPermission } }, say) =>

@@ -12,10 +12,25 @@ const celsiusToFahrenheit = (c: number): number => (c * 9) / 5 + 32;
 const fahrenheitToCelsius = (f: number): number => ((f - 32) * 5) / 9;
 
 export type Quantity =
-  | "mass" | "itemMass" | "length" | "smallLength" | "distance" | "volume" | "speed" | "temperature"
-  | "temperatureDifference" | "force" | "massPerLength" | "area" | "angle" | "ratio" | "duration"
+  | "mass"
+  | "itemMass"
+  | "length"
+  | "smallLength"
+  | "distance"
+  | "volume"
+  | "speed"
+  | "temperature"
+  | "temperatureDifference"
+  | "force"
+  | "massPerLength"
+  | "area"
+  | "angle"
+  | "ratio"
+  | "duration"
   // A hull's surface or a sail (m², ft²) and a station pressure (hPa, inHg), for the Workshop.
-  | "surfaceArea" | "pressure" | "stress";
+  | "surfaceArea"
+  | "pressure"
+  | "stress";
 
 interface UnitDef {
   unit: string;

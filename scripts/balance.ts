@@ -10,7 +10,8 @@ import { readFileSync } from "node:fs";
 import type { z } from "zod";
 import { balanceInputSchema, envelopeOptionsSchema, evaluateBalance, operatingEnvelope } from "../lib/balance";
 
-const USAGE = "usage: npm run balance -- [--envelope [--target-height M] [--target-wind M/S] [--max-wind M/S] [--winds N] [--lines N]] <setup.json | ->";
+const USAGE =
+  "usage: npm run balance -- [--envelope [--target-height M] [--target-wind M/S] [--max-wind M/S] [--winds N] [--lines N]] <setup.json | ->";
 
 function fail(lines: readonly string[]): never {
   for (const line of lines) process.stderr.write(`${line}\n`);

@@ -33,7 +33,12 @@ async function targetsFor(app: AppServer, customer: ApiClient): Promise<Target[]
   return [
     { label: `GET /api/setups (page 1 of ${own.total})`, who: "customer", path: "/api/setups?pageSize=25", list: true },
     { label: "GET /api/review/queue (default)", who: "support", path: "/api/review/queue?pageSize=50&sort=waiting&dir=desc", list: true },
-    { label: "GET /api/review/queue (thinnest lift)", who: "support", path: "/api/review/queue?pageSize=50&sort=freeLiftRatio&dir=asc", list: true },
+    {
+      label: "GET /api/review/queue (thinnest lift)",
+      who: "support",
+      path: "/api/review/queue?pageSize=50&sort=freeLiftRatio&dir=asc",
+      list: true,
+    },
     { label: "GET /api/review/queue (search)", who: "support", path: "/api/review/queue?pageSize=50&q=Lark", list: true },
     { label: "GET /api/setups/:id/comments", who: "customer", path: `/api/setups/${someId}/comments`, list: true },
     { label: "GET /api/setups/:id/history", who: "customer", path: `/api/setups/${someId}/history`, list: true },
@@ -85,12 +90,18 @@ async function run(label: string, databaseUrl: string | undefined, customerEmail
   const app = await startAppServer({ build: process.env.TRIMRAIL_REUSE_BUILD !== "1", databaseUrl });
   try {
     const clients = { customer: new ApiClient(app.baseURL), support: new ApiClient(app.baseURL), maker: new ApiClient(app.baseURL) };
-    for (const [who, email] of [["customer", customerEmail], ["support", "support@trimrail.test"], ["maker", "maker@trimrail.test"]] as const) {
+    for (const [who, email] of [
+      ["customer", customerEmail],
+      ["support", "support@trimrail.test"],
+      ["maker", "maker@trimrail.test"],
+    ] as const) {
       const response = await clients[who].signIn(email);
       if (response.status !== 200) throw new Error(`${email} could not sign in (${response.status})`);
     }
     console.log(`\n## ${label}\n`);
-    console.log(`${"request".padEnd(40)} ${"median".padStart(9)} ${"p95".padStart(9)} ${"req/s @50".padStart(10)} ${"errors".padStart(7)} ${"RSS MB".padStart(7)}`);
+    console.log(
+      `${"request".padEnd(40)} ${"median".padStart(9)} ${"p95".padStart(9)} ${"req/s @50".padStart(10)} ${"errors".padStart(7)} ${"RSS MB".padStart(7)}`,
+    );
     for (const target of await targetsFor(app, clients.customer)) {
       const quiet = await unloaded(clients[target.who], target.path);
       const load = target.list ? await loaded(clients[target.who], target.path, app.serverPid) : null;

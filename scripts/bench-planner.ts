@@ -43,7 +43,11 @@ try {
       .getEntriesByType("resource")
       .filter((e) => e.name.endsWith(".js"))
       .reduce(
-        (sum, e) => ({ encoded: sum.encoded + (e as PerformanceResourceTiming).encodedBodySize, decoded: sum.decoded + (e as PerformanceResourceTiming).decodedBodySize, files: sum.files + 1 }),
+        (sum, e) => ({
+          encoded: sum.encoded + (e as PerformanceResourceTiming).encodedBodySize,
+          decoded: sum.decoded + (e as PerformanceResourceTiming).decodedBodySize,
+          files: sum.files + 1,
+        }),
         { encoded: 0, decoded: 0, files: 0 },
       ),
   );
@@ -68,8 +72,12 @@ try {
 
   console.log(`planner drag: ${toPanel.length} edits measured`);
   console.log(`  edit → panel commit   median ${percentile(toPanel, 0.5).toFixed(1)} ms, p95 ${percentile(toPanel, 0.95).toFixed(1)} ms`);
-  console.log(`  edit → next frame     median ${percentile(toFrame, 0.5).toFixed(1)} ms, p95 ${percentile(toFrame, 0.95).toFixed(1)} ms   (target ≤ 16 ms median)`);
-  console.log(`planner first load: ${js.files} JS files, ${(js.encoded / 1024).toFixed(0)} KiB as served (compressed), ${(js.decoded / 1024).toFixed(0)} KiB uncompressed`);
+  console.log(
+    `  edit → next frame     median ${percentile(toFrame, 0.5).toFixed(1)} ms, p95 ${percentile(toFrame, 0.95).toFixed(1)} ms   (target ≤ 16 ms median)`,
+  );
+  console.log(
+    `planner first load: ${js.files} JS files, ${(js.encoded / 1024).toFixed(0)} KiB as served (compressed), ${(js.decoded / 1024).toFixed(0)} KiB uncompressed`,
+  );
 } finally {
   await browser.close();
   await app.stop();

@@ -60,7 +60,9 @@ try {
       summary = `${body.rows.length}/${body.total}`;
     }
     times.sort((a, b) => a - b);
-    console.log(`${label.padEnd(44)} ${percentile(times, 0.5).toFixed(1).padStart(6)} ms ${percentile(times, 0.95).toFixed(1).padStart(6)} ms  ${summary}`);
+    console.log(
+      `${label.padEnd(44)} ${percentile(times, 0.5).toFixed(1).padStart(6)} ms ${percentile(times, 0.95).toFixed(1).padStart(6)} ms  ${summary}`,
+    );
   }
 } finally {
   await app.stop();

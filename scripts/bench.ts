@@ -20,9 +20,7 @@ import {
   type BalanceInput,
 } from "../lib/balance";
 
-const setup = JSON.parse(
-  readFileSync(new URL("../tests/fixtures/demo-setup.json", import.meta.url), "utf8"),
-) as BalanceInput;
+const setup = JSON.parse(readFileSync(new URL("../tests/fixtures/demo-setup.json", import.meta.url), "utf8")) as BalanceInput;
 
 function median(values: number[]): number {
   const sorted = [...values].sort((a, b) => a - b);
@@ -42,29 +40,56 @@ function time(run: () => void, rounds: number, repeat: number): number {
 }
 
 let sink = 0;
-const evaluateMs = time(() => { sink += evaluateBalance(setup).freeLiftKg; }, 200, 100);
+const evaluateMs = time(
+  () => {
+    sink += evaluateBalance(setup).freeLiftKg;
+  },
+  200,
+  100,
+);
 
 // The demo with a 2 mm line: its weight and drag, in the 1/7 power-law wind from a 10 m reading.
 const withLine: BalanceInput = { ...setup, tether: { ...setup.tether!, diameterM: 0.002 } };
-const lineMs = time(() => { sink += evaluateBalance(withLine).freeLiftKg; }, 200, 50);
-const envelopeMs = time(() => { sink += operatingEnvelope(withLine, { targetHeightM: 30 }).points.length; }, 15, 1);
+const lineMs = time(
+  () => {
+    sink += evaluateBalance(withLine).freeLiftKg;
+  },
+  200,
+  50,
+);
+const envelopeMs = time(
+  () => {
+    sink += operatingEnvelope(withLine, { targetHeightM: 30 }).points.length;
+  },
+  15,
+  1,
+);
 
 const sweepInputs = Array.from({ length: 150 }, (_, i) => ({
-  ...setup, site: { ...setup.site, windMS: (15 * i) / 149 },
+  ...setup,
+  site: { ...setup.site, windMS: (15 * i) / 149 },
 }));
-const sweepMs = time(() => {
-  for (const input of sweepInputs) sink += evaluateBalance(input).wind?.tetherAngleDeg ?? 0;
-}, 50, 1);
+const sweepMs = time(
+  () => {
+    for (const input of sweepInputs) sink += evaluateBalance(input).wind?.tetherAngleDeg ?? 0;
+  },
+  50,
+  1,
+);
 
 const hull = demoHulls["ridge-11"];
 const resolution = { segments: 128, rings: 390 };
 const triangles = buildHullMesh(hull, resolution).indices.length / 3;
-const geometryMs = time(() => {
-  sink += integrateHullProfile(hull).gasVolumeM3;
-  const mesh = buildHullMesh(hull, resolution);
-  sink += meshVolumeAndCentroid(mesh.positions, mesh.indices).volumeM3;
-  sink += meshSurfaceArea(mesh.positions, mesh.indices).areaM2;
-}, 30, 1);
+const geometryMs = time(
+  () => {
+    sink += integrateHullProfile(hull).gasVolumeM3;
+    const mesh = buildHullMesh(hull, resolution);
+    sink += meshVolumeAndCentroid(mesh.positions, mesh.indices).volumeM3;
+    sink += meshSurfaceArea(mesh.positions, mesh.indices).areaM2;
+  },
+  30,
+  1,
+);
 
 const row = (label: string, value: string, target: string, ok: boolean): string =>
   `${label.padEnd(48)} ${value.padStart(10)}   target ${target.padEnd(8)} ${ok ? "ok" : "OVER"}`;

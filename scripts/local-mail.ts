@@ -16,6 +16,8 @@ export async function startLocalMail(): Promise<SmtpFake | null> {
   });
   process.env.TRIMRAIL_SMTP_FAKE_PORT = String(fake.port);
   process.env.TRIMRAIL_MAIL_DIR = fake.dir;
-  console.log(`[trimrail] mail is kept by the local SMTP fake on ${fake.host}:${fake.port} in ${fake.dir} (read it on /dev/mail as the maker)`);
+  console.log(
+    `[trimrail] mail is kept by the local SMTP fake on ${fake.host}:${fake.port} in ${fake.dir} (read it on /dev/mail as the maker)`,
+  );
   return fake;
 }

@@ -61,8 +61,15 @@ function argument(name: string): string | undefined {
 
 // CLI: `npx tsx scripts/s3-fake.ts [--port 4569] [--dir data/s3]`
 if (process.argv[1] && import.meta.url === pathToFileURL(path.resolve(process.argv[1])).href) {
-  const fake = await startS3Fake({ port: Number(argument("port") ?? process.env.TRIMRAIL_S3_FAKE_PORT ?? 0), dir: argument("dir") ?? process.env.TRIMRAIL_S3_DIR ?? path.join("data", "s3") });
+  const fake = await startS3Fake({
+    port: Number(argument("port") ?? process.env.TRIMRAIL_S3_FAKE_PORT ?? 0),
+    dir: argument("dir") ?? process.env.TRIMRAIL_S3_DIR ?? path.join("data", "s3"),
+  });
   console.log(`[s3-fake] listening on ${fake.endpoint}, keeping objects in ${fake.dir}`);
-  console.log(`[s3-fake] point the app at it with ${Object.entries(fake.env).map(([k, v]) => `${k}=${v}`).join(" ")}`);
+  console.log(
+    `[s3-fake] point the app at it with ${Object.entries(fake.env)
+      .map(([k, v]) => `${k}=${v}`)
+      .join(" ")}`,
+  );
   for (const signal of ["SIGINT", "SIGTERM"] as const) process.on(signal, () => void fake.stop().then(() => process.exit(0)));
 }

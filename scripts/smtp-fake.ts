@@ -44,7 +44,10 @@ export async function startSmtpFake({ port = 0, dir }: SmtpFakeOptions): Promise
         const temporary = path.join(folder, `.${name}.tmp`);
         writeFile(temporary, Buffer.concat(chunks))
           .then(() => rename(temporary, path.join(folder, name)))
-          .then(() => callback(null, `kept as ${name}`), (error: Error) => callback(error));
+          .then(
+            () => callback(null, `kept as ${name}`),
+            (error: Error) => callback(error),
+          );
       });
     },
   });
@@ -76,7 +79,10 @@ function argument(name: string): string | undefined {
 
 // CLI: `npx tsx scripts/smtp-fake.ts [--port 2525] [--dir data/mail]`
 if (process.argv[1] && import.meta.url === pathToFileURL(path.resolve(process.argv[1])).href) {
-  const fake = await startSmtpFake({ port: Number(argument("port") ?? process.env.TRIMRAIL_SMTP_FAKE_PORT ?? 0), dir: argument("dir") ?? process.env.TRIMRAIL_MAIL_DIR ?? path.join("data", "mail") });
+  const fake = await startSmtpFake({
+    port: Number(argument("port") ?? process.env.TRIMRAIL_SMTP_FAKE_PORT ?? 0),
+    dir: argument("dir") ?? process.env.TRIMRAIL_MAIL_DIR ?? path.join("data", "mail"),
+  });
   console.log(`[smtp-fake] listening on ${fake.host}:${fake.port}, keeping messages in ${fake.dir}`);
   console.log(`[smtp-fake] point the app at it with TRIMRAIL_SMTP_FAKE_PORT=${fake.port} TRIMRAIL_MAIL_DIR=${fake.dir}`);
   for (const signal of ["SIGINT", "SIGTERM"] as const) process.on(signal, () => void fake.stop().then(() => process.exit(0)));

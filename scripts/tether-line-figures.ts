@@ -17,11 +17,20 @@ if (!wind?.line || !input.tether) {
 }
 const lineOutM = input.tether.lengthOutM;
 const angleRad = degreesToRadians(wind.tetherAngleDeg);
-const row = (label: string, straight: string, curved: string): string => `${label.padEnd(34)}${straight.padStart(12)}${curved.padStart(12)}`;
+const row = (label: string, straight: string, curved: string): string =>
+  `${label.padEnd(34)}${straight.padStart(12)}${curved.padStart(12)}`;
 console.log(`wind ${input.site?.windMS ?? 0} m/s (at the lifter ${wind.windAtLifterMS.toFixed(2)} m/s), ${lineOutM} m of line out`);
 console.log(row("", "straight", "curved"));
-console.log(row("tether point height above ground", `${(lineOutM * Math.cos(angleRad)).toFixed(1)} m`, `${wind.line.heightAboveGroundM.toFixed(1)} m`));
-console.log(row("blowdown (downwind of the anchor)", `${(lineOutM * Math.sin(angleRad)).toFixed(1)} m`, `${wind.line.blowdownM.toFixed(1)} m`));
+console.log(
+  row(
+    "tether point height above ground",
+    `${(lineOutM * Math.cos(angleRad)).toFixed(1)} m`,
+    `${wind.line.heightAboveGroundM.toFixed(1)} m`,
+  ),
+);
+console.log(
+  row("blowdown (downwind of the anchor)", `${(lineOutM * Math.sin(angleRad)).toFixed(1)} m`, `${wind.line.blowdownM.toFixed(1)} m`),
+);
 console.log(row("line angle from vertical at anchor", `${wind.tetherAngleDeg.toFixed(1)}°`, `${wind.line.anchorAngleDeg.toFixed(1)}°`));
 console.log(row("line angle from vertical at lifter", `${wind.tetherAngleDeg.toFixed(1)}°`, `${wind.tetherAngleDeg.toFixed(1)}°`));
 console.log(row("tension at the anchor", `${wind.tensionN.toFixed(2)} N`, `${wind.line.anchorTensionN.toFixed(2)} N`));

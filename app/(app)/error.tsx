@@ -13,7 +13,9 @@ export default function AppError({ error, reset }: { error: Error & { digest?: s
         Your saved setups are safe. Try again; if it keeps happening, tell the workshop
         {error.digest ? ` and quote ${error.digest}` : ""}.
       </p>
-      <button type="button" onClick={reset} className="mt-4 rounded bg-accent px-3 py-1.5 text-sm text-white">Try again</button>
+      <button type="button" onClick={reset} className="mt-4 rounded bg-accent px-3 py-1.5 text-sm text-white">
+        Try again
+      </button>
     </div>
   );
 }

@@ -13,11 +13,16 @@ export default async function AppLayout({ children }: { children: ReactNode }) {
     <div className="min-h-screen">
       <header className="border-b border-hairline bg-paper print:hidden">
         <div className="mx-auto flex max-w-7xl flex-wrap items-center gap-4 px-4 py-3">
-          <Link href="/setups"><Logo size={24} /></Link>
+          <Link href="/setups">
+            <Logo size={24} />
+          </Link>
           <AppNav items={navItemsFor(viewer.role)} />
           <div className="ml-auto flex items-center gap-3 text-sm">
             <span data-testid="viewer">
-              {viewer.name} <span className="rounded bg-white px-1.5 py-0.5 text-xs text-muted" data-testid="viewer-role">{viewer.role}</span>
+              {viewer.name}{" "}
+              <span className="rounded bg-white px-1.5 py-0.5 text-xs text-muted" data-testid="viewer-role">
+                {viewer.role}
+              </span>
             </span>
             <SignOutButton />
           </div>

@@ -10,11 +10,17 @@ export default async function LandingPage() {
         <Logo />
         <nav className="flex gap-4 text-sm">
           {viewer ? (
-            <Link href="/setups" className="rounded bg-accent px-3 py-1.5 text-white">Open your setups</Link>
+            <Link href="/setups" className="rounded bg-accent px-3 py-1.5 text-white">
+              Open your setups
+            </Link>
           ) : (
             <>
-              <Link href="/sign-in" className="px-3 py-1.5">Sign in</Link>
-              <Link href="/sign-up" className="rounded bg-accent px-3 py-1.5 text-white">Create an account</Link>
+              <Link href="/sign-in" className="px-3 py-1.5">
+                Sign in
+              </Link>
+              <Link href="/sign-up" className="rounded bg-accent px-3 py-1.5 text-white">
+                Create an account
+              </Link>
             </>
           )}
         </nav>
@@ -22,10 +28,10 @@ export default async function LandingPage() {
       <section id="main" tabIndex={-1} className="mt-16 focus:outline-none">
         <h1 className="text-4xl">Know where the mount goes before the first flight.</h1>
         <p className="mt-4 max-w-2xl text-lg text-muted">
-          Trimrail plans a payload under a helium kite-balloon: an antenna, a camera or a sensor package on the sliding
-          mount of the belly rail. It works out gross and free lift at your site, the centre of mass against the centre of
-          buoyancy, the trim in calm air and in wind, tether angle and tension, the attachment loads and the helium you
-          need, and flags each as ok, caution or stop before the setup is saved.
+          Trimrail plans a payload under a helium kite-balloon: an antenna, a camera or a sensor package on the sliding mount of the belly
+          rail. It works out gross and free lift at your site, the centre of mass against the centre of buoyancy, the trim in calm air and
+          in wind, tether angle and tension, the attachment loads and the helium you need, and flags each as ok, caution or stop before the
+          setup is saved.
         </p>
       </section>
       <section className="mt-12 grid gap-4 sm:grid-cols-3">
@@ -39,16 +45,17 @@ export default async function LandingPage() {
         </div>
         <div className="panel p-4">
           <h2 className="text-lg">The workshop</h2>
-          <p className="mt-1 text-sm text-muted">Keep the catalogue of envelopes, units, mounts and payloads, and see what customers fly.</p>
+          <p className="mt-1 text-sm text-muted">
+            Keep the catalogue of envelopes, units, mounts and payloads, and see what customers fly.
+          </p>
         </div>
       </section>
       <aside className="mt-12 border-l-4 border-flag-caution bg-white p-4 text-sm" aria-label="Cautions">
         <p className="font-medium">Planning estimates, not permission to fly.</p>
         <p className="mt-1 text-muted">
-          Helium cylinders are high-pressure vessels. Never fly near power lines, roads or airports, or in thunderstorms;
-          conductive tethers and antennas carry extra danger. Moored balloons and kites fall under aviation rules (for
-          example 14 CFR Part 101 in the US) and their local equivalents: follow them. A test flight with a safety line is
-          still required.
+          Helium cylinders are high-pressure vessels. Never fly near power lines, roads or airports, or in thunderstorms; conductive tethers
+          and antennas carry extra danger. Moored balloons and kites fall under aviation rules (for example 14 CFR Part 101 in the US) and
+          their local equivalents: follow them. A test flight with a safety line is still required.
         </p>
       </aside>
     </main>

@@ -16,7 +16,9 @@ function DocumentGlyph() {
     <svg viewBox="0 0 48 60" className="h-16 w-14" aria-hidden="true">
       <path d="M4 2h28l12 12v44H4z" fill="white" stroke="#5f6670" strokeWidth="2" />
       <path d="M32 2v12h12" fill="none" stroke="#5f6670" strokeWidth="2" />
-      <text x="24" y="42" textAnchor="middle" fontSize="12" fontWeight="700" fill="#14202e" fontFamily="ui-sans-serif, system-ui">PDF</text>
+      <text x="24" y="42" textAnchor="middle" fontSize="12" fontWeight="700" fill="#14202e" fontFamily="ui-sans-serif, system-ui">
+        PDF
+      </text>
     </svg>
   );
 }
@@ -38,28 +40,56 @@ export function AttachmentTile({ attachment, canDelete = false, onDeleted }: Att
         {attachment.thumbnailUrl ? (
           // Thumbnails come from our own route at a fixed size; next/image would only re-encode them.
           // eslint-disable-next-line @next/next/no-img-element
-          <img src={attachment.thumbnailUrl} alt={attachment.fileName} className="max-h-full max-w-full object-contain" loading="lazy" data-testid="attachment-thumbnail" />
+          <img
+            src={attachment.thumbnailUrl}
+            alt={attachment.fileName}
+            className="max-h-full max-w-full object-contain"
+            loading="lazy"
+            data-testid="attachment-thumbnail"
+          />
         ) : (
           <DocumentGlyph />
         )}
       </a>
       <div className="flex flex-1 flex-col gap-1 p-2 text-sm">
-        <span className="truncate font-medium" title={attachment.fileName} data-testid="attachment-name">{attachment.fileName}</span>
-        <span className="figure text-muted">{isPdf ? "PDF" : "Photo"} · {formatFileSize(attachment.sizeBytes)}</span>
+        <span className="truncate font-medium" title={attachment.fileName} data-testid="attachment-name">
+          {attachment.fileName}
+        </span>
+        <span className="figure text-muted">
+          {isPdf ? "PDF" : "Photo"} · {formatFileSize(attachment.sizeBytes)}
+        </span>
         {canDelete &&
           (confirming ? (
             <span className="flex flex-wrap items-center gap-1" role="group" aria-label={`Confirm deleting ${attachment.fileName}`}>
-              <button type="button" disabled={remove.isPending} className="rounded bg-flag-stop px-2 py-0.5 text-white" onClick={() => remove.mutate()} data-testid="attachment-confirm-delete">
+              <button
+                type="button"
+                disabled={remove.isPending}
+                className="rounded bg-flag-stop px-2 py-0.5 text-white"
+                onClick={() => remove.mutate()}
+                data-testid="attachment-confirm-delete"
+              >
                 Delete
               </button>
-              <button type="button" className="underline" onClick={() => setConfirming(false)}>Keep</button>
+              <button type="button" className="underline" onClick={() => setConfirming(false)}>
+                Keep
+              </button>
             </span>
           ) : (
-            <button type="button" className="self-start text-flag-stop underline" onClick={() => setConfirming(true)} aria-label={`Delete ${attachment.fileName}`} data-testid="attachment-delete">
+            <button
+              type="button"
+              className="self-start text-flag-stop underline"
+              onClick={() => setConfirming(true)}
+              aria-label={`Delete ${attachment.fileName}`}
+              data-testid="attachment-delete"
+            >
               Delete
             </button>
           ))}
-        {remove.error && <span role="alert" className="text-flag-stop">{remove.error.message}</span>}
+        {remove.error && (
+          <span role="alert" className="text-flag-stop">
+            {remove.error.message}
+          </span>
+        )}
       </div>
     </li>
   );

@@ -29,8 +29,12 @@ export function AttachmentsPanel({ setupId, initialAttachments, canEdit = false,
   return (
     <section className="panel space-y-3 p-4" aria-labelledby={titleId} data-testid="attachments">
       <div className="flex items-baseline justify-between gap-2">
-        <h2 id={titleId} className="text-lg">{title}</h2>
-        <span className="figure text-sm text-muted" data-testid="attachment-count">{attachments.length} of {ATTACHMENTS_PER_SETUP_MAX}</span>
+        <h2 id={titleId} className="text-lg">
+          {title}
+        </h2>
+        <span className="figure text-sm text-muted" data-testid="attachment-count">
+          {attachments.length} of {ATTACHMENTS_PER_SETUP_MAX}
+        </span>
       </div>
       {canEdit && <FileDrop onFiles={uploads.add} disabled={full} />}
       {uploads.items.length > 0 && (
@@ -41,7 +45,11 @@ export function AttachmentsPanel({ setupId, initialAttachments, canEdit = false,
         </ul>
       )}
       {attachments.length === 0 ? (
-        <p className="text-sm text-muted">{canEdit ? "No files yet. A photo of the payload on its mount and its datasheet help support review the setup." : "The customer has attached no files."}</p>
+        <p className="text-sm text-muted">
+          {canEdit
+            ? "No files yet. A photo of the payload on its mount and its datasheet help support review the setup."
+            : "The customer has attached no files."}
+        </p>
       ) : (
         <ul className="grid grid-cols-2 gap-3 sm:grid-cols-3 xl:grid-cols-4">
           {attachments.map((a) => (

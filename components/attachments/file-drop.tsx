@@ -33,11 +33,19 @@ export function FileDrop({ onFiles, disabled = false }: FileDropProps) {
     >
       <p>
         Drop photos or datasheets here, or{" "}
-        <button type="button" className="font-medium text-accent underline disabled:text-muted" disabled={disabled} onClick={() => input.current?.click()} aria-describedby={hintId}>
+        <button
+          type="button"
+          className="font-medium text-accent underline disabled:text-muted"
+          disabled={disabled}
+          onClick={() => input.current?.click()}
+          aria-describedby={hintId}
+        >
           choose files
         </button>
       </p>
-      <p id={hintId} className="mt-1 text-muted">{ATTACHMENT_RULES_TEXT}</p>
+      <p id={hintId} className="mt-1 text-muted">
+        {ATTACHMENT_RULES_TEXT}
+      </p>
       <input
         ref={input}
         type="file"

@@ -13,13 +13,22 @@ export function UploadRow({ item, onDismiss }: UploadRowProps) {
   return (
     <li className="rounded border border-hairline bg-white p-2 text-sm" data-testid="upload-row" data-state={item.state}>
       <div className="flex items-baseline justify-between gap-2">
-        <span className="min-w-0 truncate font-medium" title={name}>{name}</span>
+        <span className="min-w-0 truncate font-medium" title={name}>
+          {name}
+        </span>
         <span className="figure shrink-0 text-muted">{formatFileSize(item.file.size)}</span>
       </div>
       {item.state === "failed" ? (
         <div className="mt-1 flex items-start justify-between gap-2">
-          <p role="alert" className="text-flag-stop" data-testid="upload-error">Not added: {item.error}</p>
-          <button type="button" className="shrink-0 underline" onClick={() => onDismiss(item.key)} aria-label={`Dismiss the message about ${name}`}>
+          <p role="alert" className="text-flag-stop" data-testid="upload-error">
+            Not added: {item.error}
+          </p>
+          <button
+            type="button"
+            className="shrink-0 underline"
+            onClick={() => onDismiss(item.key)}
+            aria-label={`Dismiss the message about ${name}`}
+          >
             Dismiss
           </button>
         </div>
@@ -31,7 +40,11 @@ export function UploadRow({ item, onDismiss }: UploadRowProps) {
             aria-valuemin={0}
             aria-valuemax={100}
             aria-valuenow={percent}
-            aria-valuetext={item.state === "waiting" ? "waiting" : `${percent} %, ${formatFileSize(item.loadedBytes)} of ${formatFileSize(item.totalBytes)}`}
+            aria-valuetext={
+              item.state === "waiting"
+                ? "waiting"
+                : `${percent} %, ${formatFileSize(item.loadedBytes)} of ${formatFileSize(item.totalBytes)}`
+            }
             className="h-2 flex-1 overflow-hidden rounded-full bg-hairline"
             data-testid="upload-progress"
           >

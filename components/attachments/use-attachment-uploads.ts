@@ -27,9 +27,15 @@ export function useAttachmentUploads(setupId: string, storedCount: number) {
   const client = useQueryClient();
   const [items, setItems] = useState<UploadItem[]>([]);
   const nextKey = useRef(1);
-  const update = useCallback((key: number, change: Partial<UploadItem>) => setItems((all) => all.map((i) => (i.key === key ? { ...i, ...change } : i))), []);
+  const update = useCallback(
+    (key: number, change: Partial<UploadItem>) => setItems((all) => all.map((i) => (i.key === key ? { ...i, ...change } : i))),
+    [],
+  );
   const upload = useMutation({
-    mutationFn: (item: UploadItem) => uploadAttachmentRequest(setupId, item.file, { onProgress: (p) => update(item.key, { loadedBytes: p.loadedBytes, totalBytes: p.totalBytes }) }),
+    mutationFn: (item: UploadItem) =>
+      uploadAttachmentRequest(setupId, item.file, {
+        onProgress: (p) => update(item.key, { loadedBytes: p.loadedBytes, totalBytes: p.totalBytes }),
+      }),
     onSuccess: (_view, item) => {
       setItems((all) => all.filter((i) => i.key !== item.key));
       return client.invalidateQueries({ queryKey: attachmentsQueryKey(setupId) });
@@ -55,8 +61,18 @@ export function useAttachmentUploads(setupId: string, storedCount: number) {
         let room = ATTACHMENTS_PER_SETUP_MAX - storedCount - all.filter((i) => i.state !== "failed").length;
         const added = files.map((file): UploadItem => {
           const base = { key: nextKey.current++, file, loadedBytes: 0, totalBytes: file.size };
-          if (file.size > ATTACHMENT_MAX_BYTES) return { ...base, state: "failed", error: `This file is ${formatFileSize(file.size)}; a file may be at most ${formatFileSize(ATTACHMENT_MAX_BYTES)}.` };
-          if (room <= 0) return { ...base, state: "failed", error: `A setup holds at most ${ATTACHMENTS_PER_SETUP_MAX} files; delete one before adding another.` };
+          if (file.size > ATTACHMENT_MAX_BYTES)
+            return {
+              ...base,
+              state: "failed",
+              error: `This file is ${formatFileSize(file.size)}; a file may be at most ${formatFileSize(ATTACHMENT_MAX_BYTES)}.`,
+            };
+          if (room <= 0)
+            return {
+              ...base,
+              state: "failed",
+              error: `A setup holds at most ${ATTACHMENTS_PER_SETUP_MAX} files; delete one before adding another.`,
+            };
           room -= 1;
           return { ...base, state: "waiting", error: null };
         });

@@ -51,7 +51,9 @@ export function AuthForm({ mode, next }: AuthFormProps) {
 
     setSubmitting(true);
     const failure =
-      mode === "sign-up" ? await signUpWithEmail({ ...values, callbackURL: "/setups" }) : await signInWithEmail({ email: values.email, password: values.password });
+      mode === "sign-up"
+        ? await signUpWithEmail({ ...values, callbackURL: "/setups" })
+        : await signInWithEmail({ email: values.email, password: values.password });
     if (failure) {
       setSubmitting(false);
       setServerError(failure.status === 429 ? "Too many attempts. Wait a minute and try again." : failure.message);

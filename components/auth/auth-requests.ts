@@ -32,7 +32,8 @@ async function postToAuth(path: string, body: Record<string, string>): Promise<A
 export const signInWithEmail = (input: { email: string; password: string }) => postToAuth("sign-in/email", input);
 
 /** `callbackURL`: where the address-verification link lands once followed. */
-export const signUpWithEmail = (input: { name: string; email: string; password: string; callbackURL: string }) => postToAuth("sign-up/email", input);
+export const signUpWithEmail = (input: { name: string; email: string; password: string; callbackURL: string }) =>
+  postToAuth("sign-up/email", input);
 
 export const signOutSession = () => postToAuth("sign-out", {});
 

@@ -22,7 +22,9 @@ export function ForgotPasswordForm() {
     // The server answers the same whether or not the address has an account; so do we.
     const error = await requestPasswordReset({ email, redirectTo: "/reset-password" });
     if (error) {
-      setServerError(error.status === 429 ? "Too many requests. Wait a minute and try again." : "That did not work. Try again in a moment.");
+      setServerError(
+        error.status === 429 ? "Too many requests. Wait a minute and try again." : "That did not work. Try again in a moment.",
+      );
       return;
     }
     setSentTo(email);
@@ -31,8 +33,8 @@ export function ForgotPasswordForm() {
   if (sentTo) {
     return (
       <p className="text-sm" role="status" data-testid="forgot-password-sent">
-        If an account uses <strong>{sentTo}</strong>, a link to choose a new password is on its way there. It works for one
-        hour. Nothing arrived? Check the address and ask again.
+        If an account uses <strong>{sentTo}</strong>, a link to choose a new password is on its way there. It works for one hour. Nothing
+        arrived? Check the address and ask again.
       </p>
     );
   }
@@ -43,9 +45,17 @@ export function ForgotPasswordForm() {
       <label className="block text-sm">
         E-mail
         <input {...register("email")} type="email" autoComplete="email" className={field} />
-        {errors.email && <span className="text-flag-stop" role="alert">{errors.email.message}</span>}
+        {errors.email && (
+          <span className="text-flag-stop" role="alert">
+            {errors.email.message}
+          </span>
+        )}
       </label>
-      {serverError && <p className="text-sm text-flag-stop" role="alert" data-testid="auth-error">{serverError}</p>}
+      {serverError && (
+        <p className="text-sm text-flag-stop" role="alert" data-testid="auth-error">
+          {serverError}
+        </p>
+      )}
       <button
         type="submit"
         disabled={isSubmitting}

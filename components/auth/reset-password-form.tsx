@@ -42,7 +42,11 @@ export function ResetPasswordForm({ token }: ResetPasswordFormProps) {
   if (outcome === "changed") {
     return (
       <p className="text-sm" role="status" data-testid="reset-password-done">
-        Your password is changed. <Link href="/sign-in" className="text-accent underline">Sign in with it</Link>.
+        Your password is changed.{" "}
+        <Link href="/sign-in" className="text-accent underline">
+          Sign in with it
+        </Link>
+        .
       </p>
     );
   }
@@ -54,14 +58,26 @@ export function ResetPasswordForm({ token }: ResetPasswordFormProps) {
       <label className="block text-sm">
         New password
         <input {...register("password")} type="password" autoComplete="new-password" className={field} />
-        {errors.password && <span className="text-flag-stop" role="alert">{errors.password.message}</span>}
+        {errors.password && (
+          <span className="text-flag-stop" role="alert">
+            {errors.password.message}
+          </span>
+        )}
       </label>
       <label className="block text-sm">
         The same again
         <input {...register("confirm")} type="password" autoComplete="new-password" className={field} />
-        {errors.confirm && <span className="text-flag-stop" role="alert">{errors.confirm.message}</span>}
+        {errors.confirm && (
+          <span className="text-flag-stop" role="alert">
+            {errors.confirm.message}
+          </span>
+        )}
       </label>
-      {serverError && <p className="text-sm text-flag-stop" role="alert" data-testid="auth-error">{serverError}</p>}
+      {serverError && (
+        <p className="text-sm text-flag-stop" role="alert" data-testid="auth-error">
+          {serverError}
+        </p>
+      )}
       <button
         type="submit"
         disabled={isSubmitting}
@@ -76,7 +92,11 @@ export function ResetPasswordForm({ token }: ResetPasswordFormProps) {
 export function ExpiredLink() {
   return (
     <p className="text-sm" role="alert" data-testid="reset-password-expired">
-      This link has expired or was already used. <Link href="/forgot-password" className="text-accent underline">Ask for a new one</Link>.
+      This link has expired or was already used.{" "}
+      <Link href="/forgot-password" className="text-accent underline">
+        Ask for a new one
+      </Link>
+      .
     </p>
   );
 }

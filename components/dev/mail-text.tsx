@@ -12,7 +12,9 @@ export function MailText({ text }: MailTextProps) {
     <pre className="panel overflow-x-auto whitespace-pre-wrap p-4 font-sans text-sm" data-testid="captured-mail-text">
       {parts.map((part, i) =>
         i % 2 === 1 ? (
-          <a key={i} href={part} className="break-all text-accent underline">{part}</a>
+          <a key={i} href={part} className="break-all text-accent underline">
+            {part}
+          </a>
         ) : (
           part
         ),

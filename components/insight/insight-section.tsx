@@ -27,17 +27,37 @@ function download(name: string, text: string): void {
 }
 
 /** One Insight figure: its chart, the same numbers as a table on request, and a CSV of them. */
-export function InsightSection<Row extends Record<string, unknown>>({ title, description, rows, columns, csvName, testId, children }: InsightSectionProps<Row>) {
+export function InsightSection<Row extends Record<string, unknown>>({
+  title,
+  description,
+  rows,
+  columns,
+  csvName,
+  testId,
+  children,
+}: InsightSectionProps<Row>) {
   const [asTable, setAsTable] = useState(false);
   const id = useId();
   return (
     <section className="panel space-y-2 p-4" aria-labelledby={id} data-testid={testId}>
       <div className="flex flex-wrap items-baseline gap-3">
-        <h2 id={id} className="text-lg">{title}</h2>
-        <button type="button" className="text-sm text-accent underline" aria-pressed={asTable} onClick={() => setAsTable(!asTable)} data-testid={`${testId}-toggle`}>
+        <h2 id={id} className="text-lg">
+          {title}
+        </h2>
+        <button
+          type="button"
+          className="text-sm text-accent underline"
+          aria-pressed={asTable}
+          onClick={() => setAsTable(!asTable)}
+          data-testid={`${testId}-toggle`}
+        >
           {asTable ? "Show the chart" : "Show as a table"}
         </button>
-        <button type="button" className="text-sm text-accent underline" onClick={() => download(csvName, Papa.unparse(rows.map((r) => Object.fromEntries(columns.map((c) => [c.key, r[c.key]])))))}>
+        <button
+          type="button"
+          className="text-sm text-accent underline"
+          onClick={() => download(csvName, Papa.unparse(rows.map((r) => Object.fromEntries(columns.map((c) => [c.key, r[c.key]])))))}
+        >
           Download CSV
         </button>
       </div>
@@ -48,19 +68,31 @@ export function InsightSection<Row extends Record<string, unknown>>({ title, des
         <div className="max-h-80 overflow-auto">
           <table className="w-full text-sm" data-testid={`${testId}-table`}>
             <thead className="sticky top-0 bg-white text-left text-muted">
-              <tr>{columns.map((c) => <th key={c.key} scope="col" className="py-1 pr-3 font-medium">{c.label}</th>)}</tr>
+              <tr>
+                {columns.map((c) => (
+                  <th key={c.key} scope="col" className="py-1 pr-3 font-medium">
+                    {c.label}
+                  </th>
+                ))}
+              </tr>
             </thead>
             <tbody>
               {rows.map((row, i) => (
                 <tr key={i} className="border-t border-hairline">
-                  {columns.map((c) => <td key={c.key} className="figure py-1 pr-3">{c.format ? c.format(row) : String(row[c.key])}</td>)}
+                  {columns.map((c) => (
+                    <td key={c.key} className="figure py-1 pr-3">
+                      {c.format ? c.format(row) : String(row[c.key])}
+                    </td>
+                  ))}
                 </tr>
               ))}
             </tbody>
           </table>
         </div>
       ) : (
-        <div className="h-64" data-testid={`${testId}-chart`}>{children}</div>
+        <div className="h-64" data-testid={`${testId}-chart`}>
+          {children}
+        </div>
       )}
     </section>
   );

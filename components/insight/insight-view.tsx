@@ -9,7 +9,11 @@ import type { InsightModel } from "./insight-charts";
 // Recharts loads after the page's first paint, with the filters already usable.
 const InsightCharts = dynamic(() => import("./insight-charts").then((m) => m.InsightCharts), {
   ssr: false,
-  loading: () => <p role="status" className="text-sm text-muted">Loading the charts…</p>,
+  loading: () => (
+    <p role="status" className="text-sm text-muted">
+      Loading the charts…
+    </p>
+  ),
 });
 
 const field = "mt-0.5 block rounded border border-hairline bg-white px-2 py-1 text-ink";
@@ -39,20 +43,46 @@ export function InsightView({ models, unitSystem }: { models: InsightModel[]; un
           Envelope model
           <select className={field} value={model} onChange={(e) => set("model", e.target.value)} data-testid="insight-model">
             <option value="">every model</option>
-            {models.map((m) => <option key={m.id} value={m.id}>{m.name}</option>)}
+            {models.map((m) => (
+              <option key={m.id} value={m.id}>
+                {m.name}
+              </option>
+            ))}
           </select>
         </label>
         <label>
           Started from
-          <input type="date" className={field} value={from} max={to || undefined} onChange={(e) => set("from", e.target.value)} data-testid="insight-from" />
+          <input
+            type="date"
+            className={field}
+            value={from}
+            max={to || undefined}
+            onChange={(e) => set("from", e.target.value)}
+            data-testid="insight-from"
+          />
         </label>
         <label>
           to
-          <input type="date" className={field} value={to} min={from || undefined} onChange={(e) => set("to", e.target.value)} data-testid="insight-to" />
+          <input
+            type="date"
+            className={field}
+            value={to}
+            min={from || undefined}
+            onChange={(e) => set("to", e.target.value)}
+            data-testid="insight-to"
+          />
         </label>
       </form>
-      {insight.isError && <p role="alert" className="text-sm text-flag-stop">Insight could not be loaded: {insight.error.message}</p>}
-      {insight.isPending && <p role="status" className="text-sm text-muted">Counting the setups…</p>}
+      {insight.isError && (
+        <p role="alert" className="text-sm text-flag-stop">
+          Insight could not be loaded: {insight.error.message}
+        </p>
+      )}
+      {insight.isPending && (
+        <p role="status" className="text-sm text-muted">
+          Counting the setups…
+        </p>
+      )}
       {insight.data && <InsightCharts data={insight.data} models={models} unitSystem={unitSystem} />}
     </div>
   );

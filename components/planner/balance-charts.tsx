@@ -16,7 +16,10 @@ function windSweep(input: BalanceInput, units: UnitSystem) {
   for (let i = 0; i < WIND_POINTS; i++) {
     const windMS = (WIND_MAX_MS * i) / (WIND_POINTS - 1);
     const r = evaluateBalance({ ...input, site: { ...input.site, windMS, gustMS: undefined } });
-    rows.push({ speed: Number(toDisplay("speed", windMS, units).toFixed(1)), angle: r.wind ? Number(r.wind.tetherAngleDeg.toFixed(1)) : null });
+    rows.push({
+      speed: Number(toDisplay("speed", windMS, units).toFixed(1)),
+      angle: r.wind ? Number(r.wind.tetherAngleDeg.toFixed(1)) : null,
+    });
   }
   return rows;
 }
@@ -27,7 +30,10 @@ function altitudeSweep(input: BalanceInput, units: UnitSystem) {
     const altitudeM = (ALTITUDE_MAX_M * i) / (ALTITUDE_POINTS - 1);
     // Standard atmosphere at each altitude: the site's own temperature and pressure belong to one place.
     const r = evaluateBalance({ ...input, site: { altitudeM, windMS: 0 } });
-    rows.push({ altitude: Math.round(toDisplay("length", altitudeM, units)), freeLift: Number(toDisplay("mass", r.freeLiftKg, units).toFixed(units === "metric" ? 0 : 2)) });
+    rows.push({
+      altitude: Math.round(toDisplay("length", altitudeM, units)),
+      freeLift: Number(toDisplay("mass", r.freeLiftKg, units).toFixed(units === "metric" ? 0 : 2)),
+    });
   }
   return rows;
 }
@@ -60,7 +66,9 @@ export function BalanceCharts() {
         </div>
       </figure>
       <figure>
-        <figcaption className="text-sm font-medium">Free lift ({unitOf("mass", units)}) vs site altitude ({unitOf("length", units)}), standard atmosphere</figcaption>
+        <figcaption className="text-sm font-medium">
+          Free lift ({unitOf("mass", units)}) vs site altitude ({unitOf("length", units)}), standard atmosphere
+        </figcaption>
         <div className="h-40">
           <ResponsiveContainer width="100%" height="100%">
             <LineChart data={altitude} margin={{ top: 8, right: 8, bottom: 0, left: -8 }}>
@@ -68,7 +76,10 @@ export function BalanceCharts() {
               <XAxis dataKey="altitude" type="number" domain={[0, "dataMax"]} tick={{ fontSize: 11 }} />
               <YAxis tick={{ fontSize: 11 }} />
               <ReferenceLine y={0} stroke="#b83232" />
-              <Tooltip formatter={(v) => [`${v} ${unitOf("mass", units)}`, "free lift"]} labelFormatter={(l) => `${l} ${unitOf("length", units)}`} />
+              <Tooltip
+                formatter={(v) => [`${v} ${unitOf("mass", units)}`, "free lift"]}
+                labelFormatter={(l) => `${l} ${unitOf("length", units)}`}
+              />
               <Line type="monotone" dataKey="freeLift" stroke="#1d7f7a" dot={false} isAnimationActive={false} />
             </LineChart>
           </ResponsiveContainer>

@@ -13,7 +13,11 @@ import { usePlanner } from "./planner-context";
 function ChartsLoading() {
   // The charts' own height, so nothing below moves when they arrive.
   return (
-    <div className="panel flex h-[26.875rem] items-center justify-center p-4 text-sm text-muted" role="status" data-testid="balance-charts-loading">
+    <div
+      className="panel flex h-[26.875rem] items-center justify-center p-4 text-sm text-muted"
+      role="status"
+      data-testid="balance-charts-loading"
+    >
       Loading the charts…
     </div>
   );
@@ -32,9 +36,12 @@ function ChartsWhenNear() {
   useEffect(() => {
     const element = placeholder.current;
     if (near || !element) return;
-    const observer = new IntersectionObserver((entries) => {
-      if (entries.some((entry) => entry.isIntersecting)) setNear(true);
-    }, { rootMargin: "400px 0px" });
+    const observer = new IntersectionObserver(
+      (entries) => {
+        if (entries.some((entry) => entry.isIntersecting)) setNear(true);
+      },
+      { rootMargin: "400px 0px" },
+    );
     observer.observe(element);
     return () => observer.disconnect();
   }, [near]);
@@ -78,10 +85,18 @@ export function BalancePanel() {
       <div className="panel p-4">
         <h2 className="text-lg">Lift</h2>
         <dl className="mt-2">
-          <FigureRow label="Gross lift" testId="gross-lift">{formatQuantity("mass", result.grossLiftKg, units)}</FigureRow>
-          <FigureRow label="Total mass" testId="total-mass">{formatQuantity("mass", result.totalMassKg, units)}</FigureRow>
-          <FigureRow label="Free lift" testId="free-lift">{formatQuantity("mass", result.freeLiftKg, units)}</FigureRow>
-          <FigureRow label="Free-lift ratio" testId="free-lift-ratio">{formatQuantity("ratio", result.freeLiftRatio, units)}</FigureRow>
+          <FigureRow label="Gross lift" testId="gross-lift">
+            {formatQuantity("mass", result.grossLiftKg, units)}
+          </FigureRow>
+          <FigureRow label="Total mass" testId="total-mass">
+            {formatQuantity("mass", result.totalMassKg, units)}
+          </FigureRow>
+          <FigureRow label="Free lift" testId="free-lift">
+            {formatQuantity("mass", result.freeLiftKg, units)}
+          </FigureRow>
+          <FigureRow label="Free-lift ratio" testId="free-lift-ratio">
+            {formatQuantity("ratio", result.freeLiftRatio, units)}
+          </FigureRow>
         </dl>
         <FreeLiftBar ratio={result.freeLiftRatio} cautionRatio={limits.cautionFreeLiftRatio} />
       </div>
@@ -92,11 +107,25 @@ export function BalancePanel() {
           <FigureRow label="Centre of mass" testId="com-vs-cob">
             {formatQuantity("smallLength", Math.abs(dxM), units)} {direction} the centre of buoyancy
           </FigureRow>
-          <FigureRow label="Calm trim (nose up +)" testId="calm-trim">{deg(result.calmTrimDeg)}</FigureRow>
-          <FigureRow label={`Wind ${formatQuantity("speed", result.wind?.speedMS ?? input.site?.windMS ?? 0, units)}: trim`} testId="wind-trim">{deg(result.wind?.trimDeg)}</FigureRow>
-          <FigureRow label="Wind: tether angle" testId="wind-tether-angle">{deg(result.wind?.tetherAngleDeg)}</FigureRow>
+          <FigureRow label="Calm trim (nose up +)" testId="calm-trim">
+            {deg(result.calmTrimDeg)}
+          </FigureRow>
+          <FigureRow
+            label={`Wind ${formatQuantity("speed", result.wind?.speedMS ?? input.site?.windMS ?? 0, units)}: trim`}
+            testId="wind-trim"
+          >
+            {deg(result.wind?.trimDeg)}
+          </FigureRow>
+          <FigureRow label="Wind: tether angle" testId="wind-tether-angle">
+            {deg(result.wind?.tetherAngleDeg)}
+          </FigureRow>
           <FigureRow label="Wind: tension">{result.wind ? formatQuantity("force", result.wind.tensionN, units) : "none"}</FigureRow>
-          <FigureRow label={`Gust ${formatQuantity("speed", result.gust?.speedMS ?? input.site?.gustMS ?? 0, units)}: tether angle`} testId="gust-tether-angle">{deg(result.gust?.tetherAngleDeg)}</FigureRow>
+          <FigureRow
+            label={`Gust ${formatQuantity("speed", result.gust?.speedMS ?? input.site?.gustMS ?? 0, units)}: tether angle`}
+            testId="gust-tether-angle"
+          >
+            {deg(result.gust?.tetherAngleDeg)}
+          </FigureRow>
           <FigureRow label="Gust: tension">{result.gust ? formatQuantity("force", result.gust.tensionN, units) : "none"}</FigureRow>
         </dl>
       </div>
@@ -106,16 +135,30 @@ export function BalancePanel() {
       <div className="panel p-4">
         <h2 className="text-lg">Tether and helium</h2>
         <dl className="mt-2">
-          <FigureRow label="Most line it lifts in calm" testId="max-tether">{result.maxTetherOutM === null ? "none" : formatQuantity("length", result.maxTetherOutM, units, 0)}</FigureRow>
-          <FigureRow label="Helium to fill" testId="helium-fill">{formatQuantity("volume", result.helium.fillVolumeM3, units)}</FigureRow>
-          <FigureRow label="Cylinders" testId="cylinders">{result.helium.cylindersNeeded} × {formatQuantity("volume", result.helium.cylinderContentM3, units, 2)}</FigureRow>
-          <FigureRow label="Days to a top-up" testId="days-to-top-up">{result.helium.daysToTopUp !== null ? `${formatFixed(result.helium.daysToTopUp, 1)} days` : result.freeLiftRatio < limits.cautionFreeLiftRatio ? "due now" : "none needed"}</FigureRow>
+          <FigureRow label="Most line it lifts in calm" testId="max-tether">
+            {result.maxTetherOutM === null ? "none" : formatQuantity("length", result.maxTetherOutM, units, 0)}
+          </FigureRow>
+          <FigureRow label="Helium to fill" testId="helium-fill">
+            {formatQuantity("volume", result.helium.fillVolumeM3, units)}
+          </FigureRow>
+          <FigureRow label="Cylinders" testId="cylinders">
+            {result.helium.cylindersNeeded} × {formatQuantity("volume", result.helium.cylinderContentM3, units, 2)}
+          </FigureRow>
+          <FigureRow label="Days to a top-up" testId="days-to-top-up">
+            {result.helium.daysToTopUp !== null
+              ? `${formatFixed(result.helium.daysToTopUp, 1)} days`
+              : result.freeLiftRatio < limits.cautionFreeLiftRatio
+                ? "due now"
+                : "none needed"}
+          </FigureRow>
         </dl>
       </div>
 
       <div className="panel p-4">
         <h2 className="text-lg">Flags</h2>
-        <div className="mt-2"><FlagList flags={result.flags} unitSystem={units} /></div>
+        <div className="mt-2">
+          <FlagList flags={result.flags} unitSystem={units} />
+        </div>
       </div>
 
       <ChartsWhenNear />

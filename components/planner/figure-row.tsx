@@ -10,7 +10,9 @@ export function FigureRow({ label, children, testId }: FigureRowProps) {
   return (
     <div className="flex items-baseline justify-between gap-3 py-0.5 text-sm">
       <dt className="text-muted">{label}</dt>
-      <dd className="figure text-right" data-testid={testId}>{children}</dd>
+      <dd className="figure text-right" data-testid={testId}>
+        {children}
+      </dd>
     </div>
   );
 }

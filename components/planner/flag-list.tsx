@@ -12,8 +12,15 @@ export function FlagList({ flags, unitSystem = "metric" }: { flags: readonly Fla
   return (
     <ul className="space-y-1.5" data-testid="flag-list">
       {sorted.map((flag, i) => (
-        <li key={`${flag.code}-${flag.payloads?.map((p) => p.index).join(".") ?? ""}-${i}`} className="flex gap-2 text-sm" data-flag-code={flag.code} data-flag-level={flag.level}>
-          <span className="mt-0.5 shrink-0"><FlagIcon level={flag.level} /></span>
+        <li
+          key={`${flag.code}-${flag.payloads?.map((p) => p.index).join(".") ?? ""}-${i}`}
+          className="flex gap-2 text-sm"
+          data-flag-code={flag.code}
+          data-flag-level={flag.level}
+        >
+          <span className="mt-0.5 shrink-0">
+            <FlagIcon level={flag.level} />
+          </span>
           <span>
             <span className="font-medium">{flag.level}</span> · {flagMessage(flag, unitSystem)}
           </span>

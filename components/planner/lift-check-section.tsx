@@ -1,6 +1,13 @@
 "use client";
 import { useMemo, useState } from "react";
-import { INPUT_LIMITS, LIFT_CHECK_LOAD_WORDS, LIFT_CHECK_LOADS, type LiftCheckLoad, type LiftCheckUnknown, type UnitSystem } from "@/lib/domain";
+import {
+  INPUT_LIMITS,
+  LIFT_CHECK_LOAD_WORDS,
+  LIFT_CHECK_LOADS,
+  type LiftCheckLoad,
+  type LiftCheckUnknown,
+  type UnitSystem,
+} from "@/lib/domain";
 import { liftCheckOf, plannedBalanceInput } from "@/lib/setups/balance-input";
 import type { LiftCheckDraft } from "@/lib/setups/setup-draft";
 import type { DayLiftCheckResult } from "@/lib/balance";
@@ -12,8 +19,10 @@ import { setupCatalogueFor } from "./store";
 
 const PROBLEM_WORDS: Record<NonNullable<DayLiftCheckResult["problem"]>, string> = {
   "no-gross-lift": "The scale shows no lift at all with that load: check the weighing. The gas is planned as entered.",
-  "above-pure-helium": "That is more lift than pure helium gives in the planned volume: the envelope holds more gas than planned, or the weighing is off. Try settling the gas volume instead. The gas is planned as entered.",
-  "out-of-range": "That weighing implies a fill nobody should fly (below half helium): check the weighing and the gas. The gas is planned as entered.",
+  "above-pure-helium":
+    "That is more lift than pure helium gives in the planned volume: the envelope holds more gas than planned, or the weighing is off. Try settling the gas volume instead. The gas is planned as entered.",
+  "out-of-range":
+    "That weighing implies a fill nobody should fly (below half helium): check the weighing and the gas. The gas is planned as entered.",
 };
 
 function resultWords(check: DayLiftCheckResult, entered: { purity: number; gasVolumeM3: number }, units: UnitSystem): string {
@@ -54,16 +63,46 @@ export function LiftCheckSection() {
   return (
     <Section title="The day's lift check" testId="section-lift-check" defaultOpen={stored !== null}>
       <p className="mb-3 text-sm text-muted">
-        At the field, tie the filled lifter to a scale and read its free lift (the upward pull). The check works out the gas you really have and plans with it.
+        At the field, tie the filled lifter to a scale and read its free lift (the upward pull). The check works out the gas you really have
+        and plans with it.
       </p>
       <div className="grid gap-3 sm:grid-cols-2">
-        <QuantityInput label="Free lift weighed" quantity="mass" valueSI={freeLiftKg} unitSystem={units} minSI={freeLimit.min} maxSI={freeLimit.max} onCommit={setFreeLiftKg} optional testId="lift-check-free-lift" disabled={readOnly} />
-        <QuantityInput label="Air temperature at the weighing" quantity="temperature" valueSI={temperatureC} unitSystem={units} minSI={temperatureLimit.min} maxSI={temperatureLimit.max} onCommit={setTemperatureC} optional testId="lift-check-temperature" disabled={readOnly} />
+        <QuantityInput
+          label="Free lift weighed"
+          quantity="mass"
+          valueSI={freeLiftKg}
+          unitSystem={units}
+          minSI={freeLimit.min}
+          maxSI={freeLimit.max}
+          onCommit={setFreeLiftKg}
+          optional
+          testId="lift-check-free-lift"
+          disabled={readOnly}
+        />
+        <QuantityInput
+          label="Air temperature at the weighing"
+          quantity="temperature"
+          valueSI={temperatureC}
+          unitSystem={units}
+          minSI={temperatureLimit.min}
+          maxSI={temperatureLimit.max}
+          onCommit={setTemperatureC}
+          optional
+          testId="lift-check-temperature"
+          disabled={readOnly}
+        />
         <fieldset className="text-sm" disabled={readOnly}>
           <legend className="text-muted">What hung on it</legend>
           {LIFT_CHECK_LOADS.map((load) => (
             <label key={load} className="mr-3 block">
-              <input type="radio" name="lift-check-load" value={load} checked={weighedWith === load} onChange={() => setWeighedWith(load)} className="mr-1" />
+              <input
+                type="radio"
+                name="lift-check-load"
+                value={load}
+                checked={weighedWith === load}
+                onChange={() => setWeighedWith(load)}
+                className="mr-1"
+              />
               {LIFT_CHECK_LOAD_WORDS[load]}
             </label>
           ))}
@@ -71,31 +110,66 @@ export function LiftCheckSection() {
         <fieldset className="text-sm" disabled={readOnly}>
           <legend className="text-muted">It settles</legend>
           <label className="block">
-            <input type="radio" name="lift-check-unknown" value="purity" checked={solveFor === "purity"} onChange={() => setSolveFor("purity")} className="mr-1" />
+            <input
+              type="radio"
+              name="lift-check-unknown"
+              value="purity"
+              checked={solveFor === "purity"}
+              onChange={() => setSolveFor("purity")}
+              className="mr-1"
+            />
             the gas purity (the envelope&apos;s volume as planned)
           </label>
           <label className="block">
-            <input type="radio" name="lift-check-unknown" value="volume" checked={solveFor === "volume"} onChange={() => setSolveFor("volume")} className="mr-1" />
+            <input
+              type="radio"
+              name="lift-check-unknown"
+              value="volume"
+              checked={solveFor === "volume"}
+              onChange={() => setSolveFor("volume")}
+              className="mr-1"
+            />
             the gas volume (the purity entered under Gas)
           </label>
         </fieldset>
       </div>
       {!readOnly && (
         <div className="mt-3 flex flex-wrap gap-2">
-          <button type="button" disabled={!candidate || !changed} onClick={() => setLiftCheck(candidate)} className="rounded bg-accent px-3 py-1.5 text-sm text-white disabled:opacity-50" data-testid="lift-check-apply">
+          <button
+            type="button"
+            disabled={!candidate || !changed}
+            onClick={() => setLiftCheck(candidate)}
+            className="rounded bg-accent px-3 py-1.5 text-sm text-white disabled:opacity-50"
+            data-testid="lift-check-apply"
+          >
             Use this check
           </button>
           {stored && (
-            <button type="button" onClick={() => { setLiftCheck(null); setFreeLiftKg(null); }} className="rounded border border-hairline px-3 py-1.5 text-sm" data-testid="lift-check-remove">
+            <button
+              type="button"
+              onClick={() => {
+                setLiftCheck(null);
+                setFreeLiftKg(null);
+              }}
+              className="rounded border border-hairline px-3 py-1.5 text-sm"
+              data-testid="lift-check-remove"
+            >
               Remove the check
             </button>
           )}
         </div>
       )}
       {check && stored && (
-        <p className={`mt-3 rounded border px-3 py-2 text-sm ${check.problem ? "border-flag-stop text-flag-stop" : "border-accent"}`} role="status" data-testid="lift-check-result" data-problem={check.problem ?? ""}>
+        <p
+          className={`mt-3 rounded border px-3 py-2 text-sm ${check.problem ? "border-flag-stop text-flag-stop" : "border-accent"}`}
+          role="status"
+          data-testid="lift-check-result"
+          data-problem={check.problem ?? ""}
+        >
           <span className="font-medium">Measured input: </span>
-          {formatQuantity("mass", stored.freeLiftKg, units)} free lift at {formatQuantity("temperature", stored.temperatureC, units)} with {LIFT_CHECK_LOAD_WORDS[stored.weighedWith]} (gross lift {formatQuantity("mass", check.grossLiftKg, units)}). {resultWords(check, entered, units)}
+          {formatQuantity("mass", stored.freeLiftKg, units)} free lift at {formatQuantity("temperature", stored.temperatureC, units)} with{" "}
+          {LIFT_CHECK_LOAD_WORDS[stored.weighedWith]} (gross lift {formatQuantity("mass", check.grossLiftKg, units)}).{" "}
+          {resultWords(check, entered, units)}
         </p>
       )}
     </Section>

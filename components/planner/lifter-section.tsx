@@ -42,26 +42,43 @@ export function LifterSection() {
         <label className="block text-sm text-muted">
           Envelope model
           <select className={select} value={modelId} onChange={(e) => actions.setModel(e.target.value)} data-testid="model-select">
-            {catalogue.models.filter((m) => isOffered(m, m.id === modelId)).map((m) => (
-              <option key={m.id} value={m.id}>{m.name} ({formatQuantity("volume", m.gasVolumeM3, unitSystem)}){m.active === false ? RETIRED : ""}</option>
-            ))}
+            {catalogue.models
+              .filter((m) => isOffered(m, m.id === modelId))
+              .map((m) => (
+                <option key={m.id} value={m.id}>
+                  {m.name} ({formatQuantity("volume", m.gasVolumeM3, unitSystem)}){m.active === false ? RETIRED : ""}
+                </option>
+              ))}
           </select>
         </label>
         <label className="block text-sm text-muted">
           Serial unit
-          <select className={select} value={unitId ?? ""} onChange={(e) => actions.setUnit(e.target.value || null)} data-testid="unit-select">
+          <select
+            className={select}
+            value={unitId ?? ""}
+            onChange={(e) => actions.setUnit(e.target.value || null)}
+            data-testid="unit-select"
+          >
             <option value="">none: the model&apos;s nominal mass</option>
             {units.map((u) => (
-              <option key={u.id} value={u.id}>{unitWords(u, unitSystem)}{u.active === false ? RETIRED : ""}</option>
+              <option key={u.id} value={u.id}>
+                {unitWords(u, unitSystem)}
+                {u.active === false ? RETIRED : ""}
+              </option>
             ))}
           </select>
         </label>
         <label className="block text-sm text-muted sm:col-span-2">
           Mount
           <select className={select} value={mountId} onChange={(e) => actions.setMountId(e.target.value)} data-testid="mount-select">
-            {catalogue.mounts.filter((m) => isOffered(m, m.id === mountId)).map((m) => (
-              <option key={m.id} value={m.id}>{m.name}, rated {formatQuantity("mass", m.ratedLoadKg, unitSystem)}{m.active === false ? RETIRED : ""}</option>
-            ))}
+            {catalogue.mounts
+              .filter((m) => isOffered(m, m.id === mountId))
+              .map((m) => (
+                <option key={m.id} value={m.id}>
+                  {m.name}, rated {formatQuantity("mass", m.ratedLoadKg, unitSystem)}
+                  {m.active === false ? RETIRED : ""}
+                </option>
+              ))}
           </select>
         </label>
       </div>

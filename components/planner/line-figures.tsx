@@ -25,19 +25,36 @@ export function LineFigures() {
       <dl className="mt-2">
         {wind && (
           <>
-            <FigureRow label={`Wind ${formatQuantity("speed", result.wind?.speedMS ?? 0, units)}: payload height`} testId="line-height">{distance(wind.heightAboveGroundM, units)}</FigureRow>
-            <FigureRow label="Wind: downwind of the anchor" testId="line-blowdown">{distance(wind.blowdownM, units)}</FigureRow>
-            <FigureRow label="Wind: line angle at the anchor" testId="line-anchor-angle">{wind.anchorAngleDeg.toFixed(1)}°</FigureRow>
+            <FigureRow label={`Wind ${formatQuantity("speed", result.wind?.speedMS ?? 0, units)}: payload height`} testId="line-height">
+              {distance(wind.heightAboveGroundM, units)}
+            </FigureRow>
+            <FigureRow label="Wind: downwind of the anchor" testId="line-blowdown">
+              {distance(wind.blowdownM, units)}
+            </FigureRow>
+            <FigureRow label="Wind: line angle at the anchor" testId="line-anchor-angle">
+              {wind.anchorAngleDeg.toFixed(1)}°
+            </FigureRow>
             <FigureRow label="Wind: tension at the anchor">{formatQuantity("force", wind.anchorTensionN, units)}</FigureRow>
             {result.wind?.windAtLifterMS !== undefined && (
-              <FigureRow label="Wind at the lifter's height" testId="wind-at-lifter">{formatQuantity("speed", result.wind.windAtLifterMS, units)}</FigureRow>
+              <FigureRow label="Wind at the lifter's height" testId="wind-at-lifter">
+                {formatQuantity("speed", result.wind.windAtLifterMS, units)}
+              </FigureRow>
             )}
-            {wind.lengthOnGroundM > 0 && <FigureRow label="Wind: line on the ground" testId="line-on-ground">{distance(wind.lengthOnGroundM, units)}</FigureRow>}
+            {wind.lengthOnGroundM > 0 && (
+              <FigureRow label="Wind: line on the ground" testId="line-on-ground">
+                {distance(wind.lengthOnGroundM, units)}
+              </FigureRow>
+            )}
           </>
         )}
         {gust && (
           <>
-            <FigureRow label={`Gust ${formatQuantity("speed", result.gust?.speedMS ?? 0, units)}: payload height`} testId="gust-line-height">{distance(gust.heightAboveGroundM, units)}</FigureRow>
+            <FigureRow
+              label={`Gust ${formatQuantity("speed", result.gust?.speedMS ?? 0, units)}: payload height`}
+              testId="gust-line-height"
+            >
+              {distance(gust.heightAboveGroundM, units)}
+            </FigureRow>
             <FigureRow label="Gust: downwind of the anchor">{distance(gust.blowdownM, units)}</FigureRow>
           </>
         )}

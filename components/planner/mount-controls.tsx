@@ -40,10 +40,20 @@ export function MountControls() {
           testId="mount-position-input"
         />
         <div className="flex gap-1">
-          <button type="button" className="rounded border border-hairline bg-white px-2 py-1 text-sm" onClick={() => actions.nudgeMount(-STEP_M)} data-testid="mount-forward">
+          <button
+            type="button"
+            className="rounded border border-hairline bg-white px-2 py-1 text-sm"
+            onClick={() => actions.nudgeMount(-STEP_M)}
+            data-testid="mount-forward"
+          >
             ◀ forward {formatQuantity("smallLength", STEP_M, units, 1)}
           </button>
-          <button type="button" className="rounded border border-hairline bg-white px-2 py-1 text-sm" onClick={() => actions.nudgeMount(STEP_M)} data-testid="mount-aft">
+          <button
+            type="button"
+            className="rounded border border-hairline bg-white px-2 py-1 text-sm"
+            onClick={() => actions.nudgeMount(STEP_M)}
+            data-testid="mount-aft"
+          >
             aft {formatQuantity("smallLength", STEP_M, units, 1)} ▶
           </button>
         </div>
@@ -56,9 +66,11 @@ export function MountControls() {
             if (!outcome.ok) return setLevelMessage(outcome.reason);
             const moved = `Mount moved to ${formatQuantity("length", outcome.positionXM, units, 3)} for level calm trim`;
             // Level is not enough if the new place brings a stop: say which, so it is not missed.
-            setLevelMessage(outcome.newStops.length === 0
-              ? `${moved}.`
-              : `${moved}, but there ${outcome.newStops.map((code) => STOP_CAUSES[code]).join(" and ")}: a stop flag. Move it back or change the payloads.`);
+            setLevelMessage(
+              outcome.newStops.length === 0
+                ? `${moved}.`
+                : `${moved}, but there ${outcome.newStops.map((code) => STOP_CAUSES[code]).join(" and ")}: a stop flag. Move it back or change the payloads.`,
+            );
           }}
         >
           Level it
@@ -78,7 +90,11 @@ export function MountControls() {
           data-testid="mount-slider"
         />
       </label>
-      {levelMessage && <p className="text-sm" role="status" data-testid="level-message">{levelMessage}</p>}
+      {levelMessage && (
+        <p className="text-sm" role="status" data-testid="level-message">
+          {levelMessage}
+        </p>
+      )}
       <p className="text-sm" data-testid="capacity">
         <span className="text-muted">How much more it can carry here: </span>
         {capacity.extraMassKg === null

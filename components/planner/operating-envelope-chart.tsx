@@ -35,7 +35,18 @@ function LevelMark({ cx, cy, level }: { cx: number; cy: number; level: FlagLevel
     return <path d={`M${cx} ${cy - r - 1} L${cx + r + 1} ${cy + r} L${cx - r - 1} ${cy + r} Z`} fill={colour} data-level="caution" />;
   }
   const k = r * 0.41;
-  const octagon = [[-k, -r], [k, -r], [r, -k], [r, k], [k, r], [-k, r], [-r, k], [-r, -k]].map(([x, y]) => `${cx + x},${cy + y}`).join(" ");
+  const octagon = [
+    [-k, -r],
+    [k, -r],
+    [r, -k],
+    [r, k],
+    [k, r],
+    [-k, r],
+    [-r, k],
+    [-r, -k],
+  ]
+    .map(([x, y]) => `${cx + x},${cy + y}`)
+    .join(" ");
   return (
     <g data-level="stop">
       <polygon points={octagon} fill={colour} />
@@ -47,10 +58,12 @@ function LevelMark({ cx, cy, level }: { cx: number; cy: number; level: FlagLevel
 const LEVEL_WORDS: Record<FlagLevel, string> = { ok: "every flag ok", caution: "caution", stop: "stop" };
 
 function pointWords(point: EnvelopePoint, units: UnitSystem): string {
-  const where = point.heightAboveGroundM === null
-    ? "it does not fly"
-    : `${formatQuantity("distance", point.heightAboveGroundM, units)} up, ${formatQuantity("distance", point.blowdownM ?? 0, units)} downwind`;
-  const worst = point.worstLevel === "ok" || !point.worstCode ? LEVEL_WORDS.ok : `${LEVEL_WORDS[point.worstLevel]}: ${STOP_CAUSES[point.worstCode]}`;
+  const where =
+    point.heightAboveGroundM === null
+      ? "it does not fly"
+      : `${formatQuantity("distance", point.heightAboveGroundM, units)} up, ${formatQuantity("distance", point.blowdownM ?? 0, units)} downwind`;
+  const worst =
+    point.worstLevel === "ok" || !point.worstCode ? LEVEL_WORDS.ok : `${LEVEL_WORDS[point.worstLevel]}: ${STOP_CAUSES[point.worstCode]}`;
   return `${formatQuantity("speed", point.windMS, units)}, ${formatQuantity("distance", point.lineOutM, units)} out: ${where}; ${worst}`;
 }
 
@@ -72,7 +85,8 @@ export function OperatingEnvelopeChart({ envelope, unitSystem = "metric" }: Oper
   const distanceUnit = unitOf("distance", units);
   const counts = { ok: 0, caution: 0, stop: 0 };
   for (const column of envelope.points) for (const p of column) counts[p.worstLevel] += 1;
-  const summary = `Operating envelope: height against line out for ${envelope.windsMS.length} winds; ` +
+  const summary =
+    `Operating envelope: height against line out for ${envelope.windsMS.length} winds; ` +
     `${counts.ok} points with every flag ok, ${counts.caution} with a caution, ${counts.stop} with a stop.`;
 
   return (
@@ -84,7 +98,15 @@ export function OperatingEnvelopeChart({ envelope, unitSystem = "metric" }: Oper
         <ResponsiveContainer width="100%" height="100%">
           <LineChart margin={{ top: 8, right: 16, bottom: 4, left: -8 }}>
             <CartesianGrid stroke="#e6e2d9" />
-            <XAxis dataKey="lineOut" type="number" domain={[0, "auto"]} allowDecimals={false} tick={{ fontSize: 11 }} tickFormatter={whole} allowDuplicatedCategory={false} />
+            <XAxis
+              dataKey="lineOut"
+              type="number"
+              domain={[0, "auto"]}
+              allowDecimals={false}
+              tick={{ fontSize: 11 }}
+              tickFormatter={whole}
+              allowDuplicatedCategory={false}
+            />
             <YAxis type="number" domain={[0, "auto"]} allowDecimals={false} tick={{ fontSize: 11 }} tickFormatter={whole} />
             {/* In the order of the winds, not sorted as text. */}
             <Legend iconType="plainline" itemSorter={null} wrapperStyle={{ fontSize: 11 }} />
@@ -105,9 +127,13 @@ export function OperatingEnvelopeChart({ envelope, unitSystem = "metric" }: Oper
                 strokeWidth={1.4}
                 isAnimationActive={false}
                 connectNulls={false}
-                dot={({ cx, cy, payload, index }) => (typeof cx === "number" && typeof cy === "number" && (payload as ChartRow).height !== null
-                  ? <LevelMark key={`${s.windMS}-${index}`} cx={cx} cy={cy} level={(payload as ChartRow).point.worstLevel} />
-                  : <g key={`${s.windMS}-${index}`} />)}
+                dot={({ cx, cy, payload, index }) =>
+                  typeof cx === "number" && typeof cy === "number" && (payload as ChartRow).height !== null ? (
+                    <LevelMark key={`${s.windMS}-${index}`} cx={cx} cy={cy} level={(payload as ChartRow).point.worstLevel} />
+                  ) : (
+                    <g key={`${s.windMS}-${index}`} />
+                  )
+                }
               />
             ))}
           </LineChart>
@@ -116,7 +142,9 @@ export function OperatingEnvelopeChart({ envelope, unitSystem = "metric" }: Oper
       <ul className="flex flex-wrap gap-4 text-xs" aria-label="What the marks mean">
         {(["ok", "caution", "stop"] as const).map((level) => (
           <li key={level} className="flex items-center gap-1">
-            <svg width="14" height="14" viewBox="0 0 14 14" aria-hidden="true"><LevelMark cx={7} cy={7} level={level} /></svg>
+            <svg width="14" height="14" viewBox="0 0 14 14" aria-hidden="true">
+              <LevelMark cx={7} cy={7} level={level} />
+            </svg>
             <span>{level === "ok" ? "every flag ok" : `worst flag ${level}`}</span>
           </li>
         ))}
@@ -127,7 +155,11 @@ export function OperatingEnvelopeChart({ envelope, unitSystem = "metric" }: Oper
           <thead>
             <tr>
               <th className="text-left font-medium">Line out</th>
-              {envelope.windsMS.map((w) => <th key={w} className="text-right font-medium">{formatQuantity("speed", w, units)}</th>)}
+              {envelope.windsMS.map((w) => (
+                <th key={w} className="text-right font-medium">
+                  {formatQuantity("speed", w, units)}
+                </th>
+              ))}
             </tr>
           </thead>
           <tbody>

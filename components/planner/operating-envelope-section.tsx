@@ -11,7 +11,11 @@ import { Section } from "./section";
 // Recharts loads with the chart, after the page: not in the Planner's first load.
 const OperatingEnvelopeChart = dynamic(() => import("./operating-envelope-chart").then((m) => m.OperatingEnvelopeChart), {
   ssr: false,
-  loading: () => <p role="status" className="h-72 text-sm text-muted">Loading the chart…</p>,
+  loading: () => (
+    <p role="status" className="h-72 text-sm text-muted">
+      Loading the chart…
+    </p>
+  ),
 });
 
 /** The chart's grid: winds 0–15 m/s every 3 m/s (six curves stay readable), twelve line-outs. */
@@ -50,17 +54,23 @@ export function OperatingEnvelopeSection() {
   return (
     <Section title="Operating envelope" testId="section-envelope">
       {envelope.reason ? (
-        <p className="text-sm" data-testid="envelope-reason">{REASONS[envelope.reason]}</p>
+        <p className="text-sm" data-testid="envelope-reason">
+          {REASONS[envelope.reason]}
+        </p>
       ) : (
         <div className="space-y-3">
           <dl className="grid gap-1 text-sm sm:grid-cols-2">
             <div>
               <dt className="text-muted">Every flag ok at {formatQuantity("distance", envelope.lineOutM ?? 0, units)} out</dt>
-              <dd className="figure" data-testid="envelope-all-ok">{windWords(envelope.highestAllOkWindMS, maxWindMS, units, "not even in calm air")}</dd>
+              <dd className="figure" data-testid="envelope-all-ok">
+                {windWords(envelope.highestAllOkWindMS, maxWindMS, units, "not even in calm air")}
+              </dd>
             </div>
             <div>
               <dt className="text-muted">No stop flag at that line out</dt>
-              <dd className="figure" data-testid="envelope-no-stop">{windWords(envelope.highestWithoutStopWindMS, maxWindMS, units, "not even in calm air")}</dd>
+              <dd className="figure" data-testid="envelope-no-stop">
+                {windWords(envelope.highestWithoutStopWindMS, maxWindMS, units, "not even in calm air")}
+              </dd>
             </div>
           </dl>
           <div className="flex flex-wrap items-end gap-3">

@@ -66,10 +66,31 @@ export function PayloadsSection() {
             <div className="flex flex-wrap items-center gap-2 text-sm">
               <span className="font-medium">{p.name}</span>
               <span className="figure text-muted">{formatQuantity("itemMass", p.massKg, units)}</span>
-              <span className="text-muted">{p.attachment}{p.adapterId ? " + adapter" : ""}</span>
+              <span className="text-muted">
+                {p.attachment}
+                {p.adapterId ? " + adapter" : ""}
+              </span>
               <span className="ml-auto flex gap-2">
-                <button type="button" className="text-accent underline" onPointerEnter={loadPayloadForm} onFocus={loadPayloadForm} onClick={() => setEditing({ mode: "edit", index: i })}>Edit</button>
-                <button type="button" className="text-flag-stop underline" onClick={() => { actions.removePayload(i); focusList(); }} aria-label={`Remove ${p.name}`}>Remove</button>
+                <button
+                  type="button"
+                  className="text-accent underline"
+                  onPointerEnter={loadPayloadForm}
+                  onFocus={loadPayloadForm}
+                  onClick={() => setEditing({ mode: "edit", index: i })}
+                >
+                  Edit
+                </button>
+                <button
+                  type="button"
+                  className="text-flag-stop underline"
+                  onClick={() => {
+                    actions.removePayload(i);
+                    focusList();
+                  }}
+                  aria-label={`Remove ${p.name}`}
+                >
+                  Remove
+                </button>
               </span>
             </div>
             {editing?.mode === "edit" && editing.index === i && (
@@ -93,14 +114,37 @@ export function PayloadsSection() {
       <div className="mt-3 flex flex-wrap items-end gap-2">
         <label className="text-sm text-muted">
           From the catalogue
-          <select value={templateId} onChange={(e) => setTemplateId(e.target.value)} className="mt-0.5 block rounded border border-hairline bg-white px-2 py-1" data-testid="template-select">
+          <select
+            value={templateId}
+            onChange={(e) => setTemplateId(e.target.value)}
+            className="mt-0.5 block rounded border border-hairline bg-white px-2 py-1"
+            data-testid="template-select"
+          >
             {templates.map((t) => (
-              <option key={t.id} value={t.id}>{t.name} ({formatQuantity("itemMass", t.massKg, units)})</option>
+              <option key={t.id} value={t.id}>
+                {t.name} ({formatQuantity("itemMass", t.massKg, units)})
+              </option>
             ))}
           </select>
         </label>
-        <button type="button" onClick={addTemplate} className="rounded border border-accent px-3 py-1.5 text-sm text-accent" data-testid="add-template">Add</button>
-        <button type="button" onPointerEnter={loadPayloadForm} onFocus={loadPayloadForm} onClick={() => setEditing({ mode: "add", initial: BLANK_PAYLOAD })} className="rounded border border-hairline px-3 py-1.5 text-sm" data-testid="add-custom">Custom payload…</button>
+        <button
+          type="button"
+          onClick={addTemplate}
+          className="rounded border border-accent px-3 py-1.5 text-sm text-accent"
+          data-testid="add-template"
+        >
+          Add
+        </button>
+        <button
+          type="button"
+          onPointerEnter={loadPayloadForm}
+          onFocus={loadPayloadForm}
+          onClick={() => setEditing({ mode: "add", initial: BLANK_PAYLOAD })}
+          className="rounded border border-hairline px-3 py-1.5 text-sm"
+          data-testid="add-custom"
+        >
+          Custom payload…
+        </button>
       </div>
       {editing?.mode === "add" && (
         <PayloadForm

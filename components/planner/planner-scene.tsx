@@ -36,13 +36,26 @@ export function PlannerScene() {
       payloadDrafts.map((p, i) => {
         const own = flags.filter((f) => f.payloads?.some((p) => p.index === i));
         const level = own.some((f) => f.level === "stop") ? "stop" : own.some((f) => f.level === "caution") ? "caution" : "ok";
-        return { key: `${i}-${p.name}`, label: p.name, shape: p.shape, lengthM: p.lengthM, widthM: p.widthM, heightM: p.heightM, offset: { x: p.offsetXM, z: p.offsetZM }, level };
+        return {
+          key: `${i}-${p.name}`,
+          label: p.name,
+          shape: p.shape,
+          lengthM: p.lengthM,
+          widthM: p.widthM,
+          heightM: p.heightM,
+          offset: { x: p.offsetXM, z: p.offsetZM },
+          level,
+        };
       }),
     [payloadDrafts, flags],
   );
 
   const trimWords = (deg: number | null) =>
-    deg === null ? "has no stable trim" : formatFixed(Math.abs(deg), 1) === "0.0" ? "trims level" : `trims ${formatFixed(Math.abs(deg), 1)}° ${deg > 0 ? "nose up" : "nose down"}`;
+    deg === null
+      ? "has no stable trim"
+      : formatFixed(Math.abs(deg), 1) === "0.0"
+        ? "trims level"
+        : `trims ${formatFixed(Math.abs(deg), 1)}° ${deg > 0 ? "nose up" : "nose down"}`;
   const summary = `${model.name}: in calm air it ${trimWords(calmTrimDeg)}; shown ${CASE_WORDS[trimCase].toLowerCase()} case at ${formatFixed(trimDeg, 1)}°. Mount ${formatQuantity("length", mountX, units, 3)} from the nose; centre of mass ${formatQuantity("smallLength", Math.abs(centreOfMass.x - model.buoyancyCentreXM), units)} ${centreOfMass.x >= model.buoyancyCentreXM ? "aft of" : "forward of"} the centre of buoyancy.`;
 
   return (
@@ -85,7 +98,9 @@ export function PlannerScene() {
           Trim {formatFixed(trimDeg, 1)}°
         </span>
       </div>
-      <p className="sr-only" aria-live="polite" data-testid="scene-summary">{summary}</p>
+      <p className="sr-only" aria-live="polite" data-testid="scene-summary">
+        {summary}
+      </p>
     </div>
   );
 }

@@ -7,7 +7,12 @@ import { FlagBadge } from "@/components/ui/flag-badge";
 import { ApiError, savePreferencesRequest, saveSetupRequest, submitSetupRequest } from "@/lib/client/api";
 import { usePlanner, usePlannerActions, usePlannerStoreApi } from "./planner-context";
 
-const STATUS_WORDS = { draft: "draft", submitted: "submitted for review", changes_requested: "changes requested", approved: "approved" } as const;
+const STATUS_WORDS = {
+  draft: "draft",
+  submitted: "submitted for review",
+  changes_requested: "changes requested",
+  approved: "approved",
+} as const;
 
 export function PlannerToolbar() {
   const store = usePlannerStoreApi();
@@ -63,7 +68,8 @@ export function PlannerToolbar() {
     onError: report,
   });
 
-  const canSubmit = !dirty && worst !== "stop" && (worst !== "caution" || acknowledged) && (status === "draft" || status === "changes_requested");
+  const canSubmit =
+    !dirty && worst !== "stop" && (worst !== "caution" || acknowledged) && (status === "draft" || status === "changes_requested");
   const reopensHint =
     dirty && (status === "submitted" || status === "approved")
       ? "Saving changes takes this setup back to draft; it will need a new review."
@@ -82,10 +88,20 @@ export function PlannerToolbar() {
   return (
     <div className="panel flex flex-wrap items-center gap-3 p-3" data-testid="planner-toolbar">
       <div className="mr-auto">
-        <h1 className="text-xl" data-testid="setup-name">{name}</h1>
+        <h1 className="text-xl" data-testid="setup-name">
+          {name}
+        </h1>
         <p className="text-sm text-muted">
-          <span data-testid="setup-status">{STATUS_WORDS[status]}</span> · version <span className="figure" data-testid="setup-version">{version}</span>
-          {dirty && <span className="ml-2 text-flag-caution" data-testid="unsaved">unsaved changes</span>} · worst flag <FlagBadge level={worst} />
+          <span data-testid="setup-status">{STATUS_WORDS[status]}</span> · version{" "}
+          <span className="figure" data-testid="setup-version">
+            {version}
+          </span>
+          {dirty && (
+            <span className="ml-2 text-flag-caution" data-testid="unsaved">
+              unsaved changes
+            </span>
+          )}{" "}
+          · worst flag <FlagBadge level={worst} />
         </p>
       </div>
       <fieldset className="flex items-center gap-1 text-sm" aria-label="Units">
@@ -103,24 +119,56 @@ export function PlannerToolbar() {
           </button>
         ))}
       </fieldset>
-      <button type="button" onClick={() => save.mutate()} disabled={save.isPending} className="rounded bg-accent px-4 py-1.5 font-medium text-white disabled:opacity-60" data-testid="save-setup">
+      <button
+        type="button"
+        onClick={() => save.mutate()}
+        disabled={save.isPending}
+        className="rounded bg-accent px-4 py-1.5 font-medium text-white disabled:opacity-60"
+        data-testid="save-setup"
+      >
         {save.isPending ? "Saving…" : "Save"}
       </button>
       <div className="flex flex-col items-start">
         {worst === "caution" && !dirty && (status === "draft" || status === "changes_requested") && (
           <label className="flex items-center gap-1 text-xs">
-            <input type="checkbox" checked={acknowledged} onChange={(e) => setAcknowledged(e.target.checked)} data-testid="acknowledge-cautions" />
+            <input
+              type="checkbox"
+              checked={acknowledged}
+              onChange={(e) => setAcknowledged(e.target.checked)}
+              data-testid="acknowledge-cautions"
+            />
             I have read the caution flags
           </label>
         )}
-        <button type="button" onClick={() => submit.mutate()} disabled={!canSubmit || submit.isPending} className="rounded border border-accent px-4 py-1.5 font-medium text-accent disabled:cursor-not-allowed disabled:opacity-50" data-testid="submit-setup" title={submitHint ?? undefined}>
+        <button
+          type="button"
+          onClick={() => submit.mutate()}
+          disabled={!canSubmit || submit.isPending}
+          className="rounded border border-accent px-4 py-1.5 font-medium text-accent disabled:cursor-not-allowed disabled:opacity-50"
+          data-testid="submit-setup"
+          title={submitHint ?? undefined}
+        >
           Submit for review
         </button>
       </div>
-      {submitHint && <p className="basis-full text-xs text-muted" data-testid="submit-hint">{submitHint}</p>}
-      {reopensHint && <p className="basis-full text-xs text-flag-caution" data-testid="reopens-hint">{reopensHint}</p>}
+      {submitHint && (
+        <p className="basis-full text-xs text-muted" data-testid="submit-hint">
+          {submitHint}
+        </p>
+      )}
+      {reopensHint && (
+        <p className="basis-full text-xs text-flag-caution" data-testid="reopens-hint">
+          {reopensHint}
+        </p>
+      )}
       {message && (
-        <p ref={messageRef} tabIndex={-1} role={message.kind === "error" ? "alert" : "status"} className={`basis-full text-sm ${message.kind === "error" ? "text-flag-stop" : "text-flag-ok"}`} data-testid="save-message">
+        <p
+          ref={messageRef}
+          tabIndex={-1}
+          role={message.kind === "error" ? "alert" : "status"}
+          className={`basis-full text-sm ${message.kind === "error" ? "text-flag-stop" : "text-flag-ok"}`}
+          data-testid="save-message"
+        >
           {message.text}
           {message.conflict && (
             <button type="button" className="ml-2 underline" onClick={() => window.location.reload()} data-testid="load-saved-version">

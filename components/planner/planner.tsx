@@ -1,6 +1,7 @@
 "use client";
 import { BalancePanel } from "./balance-panel";
 import { LifterSection } from "./lifter-section";
+import { LiftCheckSection } from "./lift-check-section";
 import { MountControls } from "./mount-controls";
 import { OperatingEnvelopeSection } from "./operating-envelope-section";
 import { PayloadsSection } from "./payloads-section";
@@ -23,6 +24,7 @@ export function Planner({ data }: { data: PlannerData }) {
             <LifterSection />
             <SiteSection />
             <GasSection />
+            <LiftCheckSection />
             <TetherSection />
             <OperatingEnvelopeSection />
             <PayloadsSection />

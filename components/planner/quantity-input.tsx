@@ -72,7 +72,9 @@ export function QuantityInput({
 
   return (
     <div className="text-sm">
-      <label htmlFor={id} className="block text-muted">{label}</label>
+      <label htmlFor={id} className="block text-muted">
+        {label}
+      </label>
       <div className="mt-0.5 flex items-center gap-1">
         <input
           id={id}
@@ -92,7 +94,11 @@ export function QuantityInput({
         />
         <span className="unit text-muted">{unitOf(quantity, unitSystem)}</span>
       </div>
-      {error && <p id={`${id}-error`} className="mt-0.5 text-xs text-flag-stop" role="alert">{error}</p>}
+      {error && (
+        <p id={`${id}-error`} className="mt-0.5 text-xs text-flag-stop" role="alert">
+          {error}
+        </p>
+      )}
     </div>
   );
 }

@@ -39,7 +39,16 @@ function WindMeasurement() {
         </select>
       </label>
       {at === "other" && (
-        <QuantityInput label="Measured at height" quantity="length" valueSI={site.windMeasuredAtM} unitSystem={units} minSI={L.windMeasuredAtM.min} maxSI={L.windMeasuredAtM.max} onCommit={(v) => v !== null && setSite({ windMeasuredAtM: v })} testId="wind-measured-at-input" />
+        <QuantityInput
+          label="Measured at height"
+          quantity="length"
+          valueSI={site.windMeasuredAtM}
+          unitSystem={units}
+          minSI={L.windMeasuredAtM.min}
+          maxSI={L.windMeasuredAtM.max}
+          onCommit={(v) => v !== null && setSite({ windMeasuredAtM: v })}
+          testId="wind-measured-at-input"
+        />
       )}
       <label className="block text-sm text-muted">
         Wind with height
@@ -129,10 +138,50 @@ export function SiteSection() {
             onBlur={(e) => setSite({ siteName: e.target.value.trim() })}
           />
         </label>
-        <QuantityInput label="Altitude above sea level" quantity="length" valueSI={site.altitudeM} unitSystem={units} minSI={L.altitudeM.min} maxSI={L.altitudeM.max} onCommit={(v) => v !== null && setSite({ altitudeM: v })} testId="altitude-input" />
-        <QuantityInput label="Air temperature" quantity="temperature" valueSI={site.temperatureC} unitSystem={units} minSI={L.temperatureC.min} maxSI={L.temperatureC.max} optional placeholder="standard" onCommit={(v) => setSite({ temperatureC: v })} testId="temperature-input" />
-        <QuantityInput label="Wind" quantity="speed" valueSI={site.windMS} unitSystem={units} minSI={L.windMS.min} maxSI={L.windMS.max} onCommit={(v) => v !== null && setSite({ windMS: v })} testId="wind-input" />
-        <QuantityInput label="Gusts" quantity="speed" valueSI={site.gustMS} unitSystem={units} minSI={L.gustMS.min} maxSI={L.gustMS.max} optional placeholder="none" onCommit={(v) => setSite({ gustMS: v })} testId="gust-input" />
+        <QuantityInput
+          label="Altitude above sea level"
+          quantity="length"
+          valueSI={site.altitudeM}
+          unitSystem={units}
+          minSI={L.altitudeM.min}
+          maxSI={L.altitudeM.max}
+          onCommit={(v) => v !== null && setSite({ altitudeM: v })}
+          testId="altitude-input"
+        />
+        <QuantityInput
+          label="Air temperature"
+          quantity="temperature"
+          valueSI={site.temperatureC}
+          unitSystem={units}
+          minSI={L.temperatureC.min}
+          maxSI={L.temperatureC.max}
+          optional
+          placeholder="standard"
+          onCommit={(v) => setSite({ temperatureC: v })}
+          testId="temperature-input"
+        />
+        <QuantityInput
+          label="Wind"
+          quantity="speed"
+          valueSI={site.windMS}
+          unitSystem={units}
+          minSI={L.windMS.min}
+          maxSI={L.windMS.max}
+          onCommit={(v) => v !== null && setSite({ windMS: v })}
+          testId="wind-input"
+        />
+        <QuantityInput
+          label="Gusts"
+          quantity="speed"
+          valueSI={site.gustMS}
+          unitSystem={units}
+          minSI={L.gustMS.min}
+          maxSI={L.gustMS.max}
+          optional
+          placeholder="none"
+          onCommit={(v) => setSite({ gustMS: v })}
+          testId="gust-input"
+        />
         <WindMeasurement />
         <HumidityInput />
       </div>
@@ -171,7 +220,15 @@ export function GasSection() {
       <div className="grid grid-cols-2 gap-3 sm:grid-cols-3">
         {percentField("Helium purity (rest is air)", gas.purity, L.purity.min, "purity", "purity-input")}
         {percentField("Fill", gas.fillFraction, L.fillFraction.min, "fillFraction", "fill-input")}
-        <QuantityInput label="Superheat (gas warmer than air)" quantity="temperatureDifference" valueSI={gas.superheatK} unitSystem={units} minSI={L.superheatK.min} maxSI={L.superheatK.max} onCommit={(v) => v !== null && setGas({ superheatK: v })} />
+        <QuantityInput
+          label="Superheat (gas warmer than air)"
+          quantity="temperatureDifference"
+          valueSI={gas.superheatK}
+          unitSystem={units}
+          minSI={L.superheatK.min}
+          maxSI={L.superheatK.max}
+          onCommit={(v) => v !== null && setGas({ superheatK: v })}
+        />
       </div>
     </Section>
   );
@@ -190,10 +247,46 @@ export function TetherSection() {
       </label>
       {tether && (
         <div className="mt-3 grid grid-cols-2 gap-3 sm:grid-cols-3">
-          <QuantityInput label="Line mass" quantity="massPerLength" valueSI={tether.massPerMetreKg} unitSystem={units} minSI={L.tetherMassPerMetreKg.min} maxSI={L.tetherMassPerMetreKg.max} onCommit={(v) => v !== null && setTether({ ...tether, massPerMetreKg: v })} />
-          <QuantityInput label="Line out" quantity="length" valueSI={tether.lengthOutM} unitSystem={units} minSI={L.tetherLengthOutM.min} maxSI={L.tetherLengthOutM.max} onCommit={(v) => v !== null && setTether({ ...tether, lengthOutM: v })} testId="tether-length-input" />
-          <QuantityInput label="Breaking load" quantity="force" valueSI={tether.breakingLoadN} unitSystem={units} minSI={L.tetherBreakingLoadN.min} maxSI={L.tetherBreakingLoadN.max} onCommit={(v) => v !== null && setTether({ ...tether, breakingLoadN: v })} />
-          <QuantityInput label="Line diameter (for its drag in wind)" quantity="smallLength" valueSI={tether.diameterM} unitSystem={units} minSI={L.tetherDiameterM.min} maxSI={L.tetherDiameterM.max} optional placeholder="no drag" onCommit={(v) => setTether({ ...tether, diameterM: v })} testId="tether-diameter-input" />
+          <QuantityInput
+            label="Line mass"
+            quantity="massPerLength"
+            valueSI={tether.massPerMetreKg}
+            unitSystem={units}
+            minSI={L.tetherMassPerMetreKg.min}
+            maxSI={L.tetherMassPerMetreKg.max}
+            onCommit={(v) => v !== null && setTether({ ...tether, massPerMetreKg: v })}
+          />
+          <QuantityInput
+            label="Line out"
+            quantity="length"
+            valueSI={tether.lengthOutM}
+            unitSystem={units}
+            minSI={L.tetherLengthOutM.min}
+            maxSI={L.tetherLengthOutM.max}
+            onCommit={(v) => v !== null && setTether({ ...tether, lengthOutM: v })}
+            testId="tether-length-input"
+          />
+          <QuantityInput
+            label="Breaking load"
+            quantity="force"
+            valueSI={tether.breakingLoadN}
+            unitSystem={units}
+            minSI={L.tetherBreakingLoadN.min}
+            maxSI={L.tetherBreakingLoadN.max}
+            onCommit={(v) => v !== null && setTether({ ...tether, breakingLoadN: v })}
+          />
+          <QuantityInput
+            label="Line diameter (for its drag in wind)"
+            quantity="smallLength"
+            valueSI={tether.diameterM}
+            unitSystem={units}
+            minSI={L.tetherDiameterM.min}
+            maxSI={L.tetherDiameterM.max}
+            optional
+            placeholder="no drag"
+            onCommit={(v) => setTether({ ...tether, diameterM: v })}
+            testId="tether-diameter-input"
+          />
         </div>
       )}
     </Section>

@@ -106,11 +106,24 @@ export function createPlannerStore(data: PlannerData): PlannerStore {
           const model = modelOf(catalogue, draft.modelId);
           if (!solution.withinRail) {
             const at = (x: number) => formatQuantity("length", x, unitSystem, 3);
-            return { ok: false, reason: `Level trim needs the mount at ${at(solution.positionX)} from the nose, off the rail (${at(model.railStartXM)} to ${at(model.railEndXM)}).` };
+            return {
+              ok: false,
+              reason: `Level trim needs the mount at ${at(solution.positionX)} from the nose, off the rail (${at(model.railStartXM)} to ${at(model.railEndXM)}).`,
+            };
           }
-          const stopsBefore = new Set(get().result.flags.filter((f) => f.level === "stop").map((f) => f.code));
+          const stopsBefore = new Set(
+            get()
+              .result.flags.filter((f) => f.level === "stop")
+              .map((f) => f.code),
+          );
           get().actions.setMountPosition(solution.positionX);
-          const newStops = [...new Set(get().result.flags.filter((f) => f.level === "stop" && !stopsBefore.has(f.code)).map((f) => f.code))];
+          const newStops = [
+            ...new Set(
+              get()
+                .result.flags.filter((f) => f.level === "stop" && !stopsBefore.has(f.code))
+                .map((f) => f.code),
+            ),
+          ];
           return { ok: true, positionXM: solution.positionX, newStops };
         },
         setName: (name) => edit((d) => ({ ...d, name })),

@@ -25,7 +25,8 @@ export function useSceneTether(): SceneTether {
     if (!(result.freeLiftKg > 0)) return { tetherLine: null, grounded: true, groundedLabel: "it does not fly" };
     const windy = trimCase === "wind" ? (input.site?.windMS ?? 0) > 0 : trimCase === "gust" ? (input.site?.gustMS ?? 0) > 0 : false;
     const c = trimCase === "wind" ? result.wind : trimCase === "gust" ? result.gust : null;
-    if (windy && !c) return { tetherLine: null, grounded: true, groundedLabel: trimCase === "wind" ? "no flight in the wind" : "no flight in gusts" };
+    if (windy && !c)
+      return { tetherLine: null, grounded: true, groundedLabel: trimCase === "wind" ? "no flight in the wind" : "no flight in gusts" };
     // Calm air shows the line straight down, as a heavy line hangs; wind and gusts their curve.
     const caseName = trimCase === "calm" ? ((input.site?.windMS ?? 0) === 0 ? "wind" : null) : trimCase;
     const points = caseName ? tetherLinePoints(input, result, caseName) : [];

@@ -7,7 +7,9 @@ function Table({ table, testId }: { table: ReportTable; testId: string }) {
       <thead>
         <tr>
           {table.header.map((h) => (
-            <th key={h} scope="col" className="border-b border-ink/30 py-1 pr-2 text-left font-medium">{h}</th>
+            <th key={h} scope="col" className="border-b border-ink/30 py-1 pr-2 text-left font-medium">
+              {h}
+            </th>
           ))}
         </tr>
       </thead>
@@ -15,7 +17,9 @@ function Table({ table, testId }: { table: ReportTable; testId: string }) {
         {table.rows.map((row, i) => (
           <tr key={i}>
             {row.map((cell, j) => (
-              <td key={j} className="figure border-b border-hairline py-1 pr-2">{cell}</td>
+              <td key={j} className="figure border-b border-hairline py-1 pr-2">
+                {cell}
+              </td>
             ))}
           </tr>
         ))}
@@ -33,8 +37,14 @@ export function FieldReportView({ report }: { report: FieldReport }) {
         <h1 className="text-2xl">{report.title}</h1>
         <p className="text-sm text-muted">{report.subtitle}</p>
       </header>
-      <section className={`border-4 p-4 ${approved ? "border-flag-ok" : "border-flag-stop"}`} data-testid="report-review" data-state={report.review.state}>
-        <p className={`font-display font-bold ${approved ? "text-2xl text-flag-ok" : "text-4xl text-flag-stop"}`}>{report.review.headline}</p>
+      <section
+        className={`border-4 p-4 ${approved ? "border-flag-ok" : "border-flag-stop"}`}
+        data-testid="report-review"
+        data-state={report.review.state}
+      >
+        <p className={`font-display font-bold ${approved ? "text-2xl text-flag-ok" : "text-4xl text-flag-stop"}`}>
+          {report.review.headline}
+        </p>
         {report.review.detail && <p className="mt-1 text-sm">{report.review.detail}</p>}
       </section>
       <div className="grid gap-5 sm:grid-cols-2 print:grid-cols-2">
@@ -61,8 +71,12 @@ export function FieldReportView({ report }: { report: FieldReport }) {
         <ul className="mt-1 space-y-1 text-sm" data-testid="report-flags">
           {report.flags.map((flag, i) => (
             <li key={i} className="flex gap-2">
-              <span className="mt-0.5 shrink-0"><FlagIcon level={flag.level} /></span>
-              <span><span className="font-medium">{flag.level}</span> · {flag.text}</span>
+              <span className="mt-0.5 shrink-0">
+                <FlagIcon level={flag.level} />
+              </span>
+              <span>
+                <span className="font-medium">{flag.level}</span> · {flag.text}
+              </span>
             </li>
           ))}
         </ul>

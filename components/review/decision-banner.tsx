@@ -22,8 +22,14 @@ export function DecisionBanner({ decision, status }: { decision: ThreadItem | nu
       <p className="text-sm text-muted">
         {decision.authorName}, {WHEN.format(decision.at)}, on version {decision.setupVersion}
       </p>
-      {decision.body && <p className="mt-2 whitespace-pre-wrap" data-testid="decision-reason-text">{decision.body}</p>}
-      {!approved && stillStands && <p className="mt-2 text-sm">Change the setup below, save, and submit it again. Reply in the discussion if something is unclear.</p>}
+      {decision.body && (
+        <p className="mt-2 whitespace-pre-wrap" data-testid="decision-reason-text">
+          {decision.body}
+        </p>
+      )}
+      {!approved && stillStands && (
+        <p className="mt-2 text-sm">Change the setup below, save, and submit it again. Reply in the discussion if something is unclear.</p>
+      )}
     </section>
   );
 }

@@ -23,7 +23,8 @@ export function DecisionForm({ setupId, version, raised }: DecisionFormProps) {
   const [codes, setCodes] = useState<ReviewReasonCode[]>(raised.map((r) => r.code));
   const [tried, setTried] = useState(false);
   const decide = useMutation({
-    mutationFn: () => decideRequest(setupId, { decision, reason: reason.trim(), reasonCodes: decision === "changes_requested" ? codes : [], version }),
+    mutationFn: () =>
+      decideRequest(setupId, { decision, reason: reason.trim(), reasonCodes: decision === "changes_requested" ? codes : [], version }),
     onSuccess: () => router.refresh(),
   });
   const reasonMissing = decision === "changes_requested" && words(reason) < SEND_BACK_REASON_MIN_WORDS;
@@ -40,15 +41,31 @@ export function DecisionForm({ setupId, version, raised }: DecisionFormProps) {
         if (!reasonMissing) decide.mutate();
       }}
     >
-      <h2 id={`${id}-title`} className="text-lg">Decision on version {version}</h2>
+      <h2 id={`${id}-title`} className="text-lg">
+        Decision on version {version}
+      </h2>
       <fieldset className="space-y-1 text-sm">
         <legend className="sr-only">Decision</legend>
         <label className="flex items-center gap-2">
-          <input type="radio" name="decision" value="approved" checked={decision === "approved"} onChange={() => setDecision("approved")} data-testid="decision-approve" />
+          <input
+            type="radio"
+            name="decision"
+            value="approved"
+            checked={decision === "approved"}
+            onChange={() => setDecision("approved")}
+            data-testid="decision-approve"
+          />
           Approve for first flight
         </label>
         <label className="flex items-center gap-2">
-          <input type="radio" name="decision" value="changes_requested" checked={decision === "changes_requested"} onChange={() => setDecision("changes_requested")} data-testid="decision-send-back" />
+          <input
+            type="radio"
+            name="decision"
+            value="changes_requested"
+            checked={decision === "changes_requested"}
+            onChange={() => setDecision("changes_requested")}
+            data-testid="decision-send-back"
+          />
           Send back for changes
         </label>
       </fieldset>
@@ -57,7 +74,11 @@ export function DecisionForm({ setupId, version, raised }: DecisionFormProps) {
           <legend className="text-muted">What it is about</legend>
           {[...raised, { code: "other" as const, level: "ok" as const, text: "something the flags do not cover" }].map((r) => (
             <label key={r.code} className="mt-1 flex items-start gap-2">
-              <input type="checkbox" checked={codes.includes(r.code)} onChange={(e) => setCodes(e.target.checked ? [...codes, r.code] : codes.filter((c) => c !== r.code))} />
+              <input
+                type="checkbox"
+                checked={codes.includes(r.code)}
+                onChange={(e) => setCodes(e.target.checked ? [...codes, r.code] : codes.filter((c) => c !== r.code))}
+              />
               <span>{r.text}</span>
             </label>
           ))}
@@ -77,12 +98,25 @@ export function DecisionForm({ setupId, version, raised }: DecisionFormProps) {
           aria-describedby={reasonError ? `${id}-reason-error` : undefined}
           data-testid="decision-reason"
         />
-        {reasonError && <p id={`${id}-reason-error`} className="text-sm text-flag-stop">{reasonError}</p>}
+        {reasonError && (
+          <p id={`${id}-reason-error`} className="text-sm text-flag-stop">
+            {reasonError}
+          </p>
+        )}
       </div>
-      <button type="submit" disabled={decide.isPending} className="rounded bg-accent px-3 py-1.5 text-sm font-medium text-white disabled:opacity-60" data-testid="decision-submit">
+      <button
+        type="submit"
+        disabled={decide.isPending}
+        className="rounded bg-accent px-3 py-1.5 text-sm font-medium text-white disabled:opacity-60"
+        data-testid="decision-submit"
+      >
         {decision === "approved" ? "Approve" : "Send back"}
       </button>
-      {decide.error && <p role="alert" className="text-sm text-flag-stop">{decide.error.message}</p>}
+      {decide.error && (
+        <p role="alert" className="text-sm text-flag-stop">
+          {decide.error.message}
+        </p>
+      )}
     </form>
   );
 }

@@ -18,7 +18,9 @@ const statusWord = (value: unknown) => (typeof value === "string" && value in ST
 export function HistoryList({ entries }: { entries: HistoryEntry[] }) {
   return (
     <section className="panel p-4" aria-labelledby="history-title" data-testid="history">
-      <h2 id="history-title" className="text-lg">History</h2>
+      <h2 id="history-title" className="text-lg">
+        History
+      </h2>
       {entries.length === 0 ? (
         <p className="mt-2 text-sm text-muted">Nothing recorded yet.</p>
       ) : (
@@ -29,11 +31,20 @@ export function HistoryList({ entries }: { entries: HistoryEntry[] }) {
             const version = typeof e.detail.version === "number" ? e.detail.version : null;
             return (
               <li key={i} data-testid="history-entry">
-                <time className="figure text-muted" dateTime={e.at.toISOString()}>{WHEN.format(e.at)}</time> · {e.actorName ?? "a removed account"} {ACTIONS[e.action] ?? e.action}
+                <time className="figure text-muted" dateTime={e.at.toISOString()}>
+                  {WHEN.format(e.at)}
+                </time>{" "}
+                · {e.actorName ?? "a removed account"} {ACTIONS[e.action] ?? e.action}
                 {version !== null && <> (version {version})</>}
-                {from && to && from !== to && <>: {from} → {to}</>}
+                {from && to && from !== to && (
+                  <>
+                    : {from} → {to}
+                  </>
+                )}
                 {typeof e.detail.fileName === "string" && <>: {e.detail.fileName}</>}
-                {typeof e.detail.reason === "string" && e.detail.reason && <span className="block pl-4 text-muted">“{e.detail.reason}”</span>}
+                {typeof e.detail.reason === "string" && e.detail.reason && (
+                  <span className="block pl-4 text-muted">“{e.detail.reason}”</span>
+                )}
               </li>
             );
           })}

@@ -27,26 +27,54 @@ export function QueueFilters({ params, models, onChange }: QueueFiltersProps) {
   }, [text, params.q, onChange]);
 
   return (
-    <form role="search" className="flex flex-wrap items-end gap-3 text-sm text-muted" onSubmit={(e) => { e.preventDefault(); onChange({ q: text.trim() }); }}>
+    <form
+      role="search"
+      className="flex flex-wrap items-end gap-3 text-sm text-muted"
+      onSubmit={(e) => {
+        e.preventDefault();
+        onChange({ q: text.trim() });
+      }}
+    >
       <label>
         Search setup or customer
-        <input type="search" className={`${field} w-56`} value={text} maxLength={120} onChange={(e) => setText(e.target.value)} data-testid="queue-search" />
+        <input
+          type="search"
+          className={`${field} w-56`}
+          value={text}
+          maxLength={120}
+          onChange={(e) => setText(e.target.value)}
+          data-testid="queue-search"
+        />
       </label>
       <label>
         Status
-        <select className={field} value={params.status} onChange={(e) => onChange({ status: e.target.value as QueueParams["status"] })} data-testid="queue-status">
+        <select
+          className={field}
+          value={params.status}
+          onChange={(e) => onChange({ status: e.target.value as QueueParams["status"] })}
+          data-testid="queue-status"
+        >
           {SETUP_STATUSES.filter((s) => s !== "draft").map((s) => (
-            <option key={s} value={s}>{STATUS_WORDS[s]}</option>
+            <option key={s} value={s}>
+              {STATUS_WORDS[s]}
+            </option>
           ))}
           <option value="any">any reviewed or waiting</option>
         </select>
       </label>
       <label>
         Worst flag
-        <select className={field} value={params.worst} onChange={(e) => onChange({ worst: e.target.value as QueueParams["worst"] })} data-testid="queue-worst">
+        <select
+          className={field}
+          value={params.worst}
+          onChange={(e) => onChange({ worst: e.target.value as QueueParams["worst"] })}
+          data-testid="queue-worst"
+        >
           <option value="">any</option>
           {FLAG_LEVELS.map((l) => (
-            <option key={l} value={l}>{l}</option>
+            <option key={l} value={l}>
+              {l}
+            </option>
           ))}
         </select>
       </label>
@@ -55,7 +83,9 @@ export function QueueFilters({ params, models, onChange }: QueueFiltersProps) {
         <select className={field} value={params.model} onChange={(e) => onChange({ model: e.target.value })} data-testid="queue-model">
           <option value="">any</option>
           {models.map((m) => (
-            <option key={m.id} value={m.id}>{m.name}</option>
+            <option key={m.id} value={m.id}>
+              {m.name}
+            </option>
           ))}
         </select>
       </label>

@@ -14,10 +14,20 @@ export interface QueueParams {
   pageSize: number;
 }
 
-export const QUEUE_DEFAULTS: QueueParams = { status: "submitted", worst: "", model: "", q: "", sort: "waiting", dir: "desc", page: 1, pageSize: 25 };
+export const QUEUE_DEFAULTS: QueueParams = {
+  status: "submitted",
+  worst: "",
+  model: "",
+  q: "",
+  sort: "waiting",
+  dir: "desc",
+  page: 1,
+  pageSize: 25,
+};
 export const PAGE_SIZES = [10, 25, 50, 100] as const;
 
-const oneOf = <T extends string>(value: string | null, allowed: readonly T[], fallback: T): T => (value !== null && (allowed as readonly string[]).includes(value) ? (value as T) : fallback);
+const oneOf = <T extends string>(value: string | null, allowed: readonly T[], fallback: T): T =>
+  value !== null && (allowed as readonly string[]).includes(value) ? (value as T) : fallback;
 
 export function readQueueParams(search: URLSearchParams): QueueParams {
   const page = Number(search.get("page"));
@@ -46,7 +56,13 @@ export function toSearch(params: QueueParams): string {
 
 /** The API's query for these params (the API's own defaults differ: it is explicit about each). */
 export function toApiQuery(params: QueueParams): string {
-  const search = new URLSearchParams({ status: params.status, sort: params.sort, dir: params.dir, page: String(params.page), pageSize: String(params.pageSize) });
+  const search = new URLSearchParams({
+    status: params.status,
+    sort: params.sort,
+    dir: params.dir,
+    page: String(params.page),
+    pageSize: String(params.pageSize),
+  });
   if (params.worst) search.set("worst", params.worst);
   if (params.model) search.set("model", params.model);
   if (params.q) search.set("q", params.q);

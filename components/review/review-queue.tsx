@@ -46,12 +46,36 @@ export function ReviewQueue({ models, unitSystem }: ReviewQueueProps) {
       }),
       column.accessor("ownerName", { header: "Customer", enableSorting: false }),
       column.accessor("modelName", { header: "Envelope", enableSorting: false }),
-      column.accessor("payloadMassKg", { id: "payloadMassKg", header: "Payload", cell: (info) => <span className="figure">{formatQuantity("mass", info.getValue(), unitSystem)}</span> }),
-      column.accessor("freeLiftRatio", { id: "freeLiftRatio", header: "Free-lift ratio", cell: (info) => <span className="figure">{info.getValue() === null ? "—" : `${((info.getValue() ?? 0) * 100).toFixed(1)} %`}</span> }),
-      column.accessor("worstFlag", { header: "Worst flag", enableSorting: false, cell: (info) => (info.getValue() ? <FlagBadge level={info.getValue() as (typeof FLAG_LEVELS)[number]} /> : "—") }),
+      column.accessor("payloadMassKg", {
+        id: "payloadMassKg",
+        header: "Payload",
+        cell: (info) => <span className="figure">{formatQuantity("mass", info.getValue(), unitSystem)}</span>,
+      }),
+      column.accessor("freeLiftRatio", {
+        id: "freeLiftRatio",
+        header: "Free-lift ratio",
+        cell: (info) => <span className="figure">{info.getValue() === null ? "—" : `${((info.getValue() ?? 0) * 100).toFixed(1)} %`}</span>,
+      }),
+      column.accessor("worstFlag", {
+        header: "Worst flag",
+        enableSorting: false,
+        cell: (info) => (info.getValue() ? <FlagBadge level={info.getValue() as (typeof FLAG_LEVELS)[number]} /> : "—"),
+      }),
       column.accessor("status", { header: "Status", enableSorting: false, cell: (info) => STATUS_WORDS[info.getValue() as SetupStatus] }),
-      column.accessor("submittedAt", { id: "submittedAt", header: "Submitted", cell: (info) => <span className="figure">{info.getValue() ? new Date(info.getValue() as string).toISOString().slice(0, 16).replace("T", " ") : "—"}</span> }),
-      column.accessor("submittedAt", { id: "waiting", header: "Waiting", cell: (info) => <span className="figure">{info.getValue() ? waitingText(new Date(info.getValue() as string)) : "—"}</span> }),
+      column.accessor("submittedAt", {
+        id: "submittedAt",
+        header: "Submitted",
+        cell: (info) => (
+          <span className="figure">
+            {info.getValue() ? new Date(info.getValue() as string).toISOString().slice(0, 16).replace("T", " ") : "—"}
+          </span>
+        ),
+      }),
+      column.accessor("submittedAt", {
+        id: "waiting",
+        header: "Waiting",
+        cell: (info) => <span className="figure">{info.getValue() ? waitingText(new Date(info.getValue() as string)) : "—"}</span>,
+      }),
     ],
     [unitSystem],
   );
@@ -83,17 +107,33 @@ export function ReviewQueue({ models, unitSystem }: ReviewQueueProps) {
     <div className="space-y-3">
       <QueueFilters params={params} models={models} onChange={go} />
       <div className="overflow-x-auto">
-        <table className="panel w-full min-w-[48rem] border-separate border-spacing-0 text-sm" data-testid="review-queue" aria-busy={query.isFetching}>
-          <caption className="sr-only">Setups for review, sorted by {params.sort}, {params.dir === "asc" ? "ascending" : "descending"}</caption>
+        <table
+          className="panel w-full min-w-[48rem] border-separate border-spacing-0 text-sm"
+          data-testid="review-queue"
+          aria-busy={query.isFetching}
+        >
+          <caption className="sr-only">
+            Setups for review, sorted by {params.sort}, {params.dir === "asc" ? "ascending" : "descending"}
+          </caption>
           <thead className="text-left text-muted">
             {table.getHeaderGroups().map((group) => (
               <tr key={group.id}>
                 {group.headers.map((header) => {
                   const sorted = header.column.getIsSorted();
                   return (
-                    <th key={header.id} scope="col" className="px-3 py-2 font-medium" aria-sort={sorted === "asc" ? "ascending" : sorted === "desc" ? "descending" : undefined}>
+                    <th
+                      key={header.id}
+                      scope="col"
+                      className="px-3 py-2 font-medium"
+                      aria-sort={sorted === "asc" ? "ascending" : sorted === "desc" ? "descending" : undefined}
+                    >
                       {header.column.getCanSort() ? (
-                        <button type="button" className="inline-flex items-center gap-1 underline-offset-2 hover:underline" onClick={header.column.getToggleSortingHandler()} data-testid={`sort-${header.column.id}`}>
+                        <button
+                          type="button"
+                          className="inline-flex items-center gap-1 underline-offset-2 hover:underline"
+                          onClick={header.column.getToggleSortingHandler()}
+                          data-testid={`sort-${header.column.id}`}
+                        >
                           {flexRender(header.column.columnDef.header, header.getContext())}
                           <span aria-hidden="true">{sorted === "asc" ? "▲" : sorted === "desc" ? "▼" : "↕"}</span>
                         </button>
@@ -119,11 +159,17 @@ export function ReviewQueue({ models, unitSystem }: ReviewQueueProps) {
           </tbody>
         </table>
       </div>
-      {query.isPending && <p role="status" className="text-sm text-muted">Loading the queue…</p>}
+      {query.isPending && (
+        <p role="status" className="text-sm text-muted">
+          Loading the queue…
+        </p>
+      )}
       {query.isError && (
         <p role="alert" className="text-sm text-flag-stop">
           The queue could not be loaded: {query.error.message}{" "}
-          <button type="button" className="underline" onClick={() => query.refetch()}>Try again</button>
+          <button type="button" className="underline" onClick={() => query.refetch()}>
+            Try again
+          </button>
         </p>
       )}
       {query.isSuccess && total === 0 && (
@@ -132,21 +178,40 @@ export function ReviewQueue({ models, unitSystem }: ReviewQueueProps) {
         </p>
       )}
       <nav aria-label="Queue pages" className="flex flex-wrap items-center gap-3 text-sm">
-        <span className="figure" data-testid="queue-total">{total} {total === 1 ? "setup" : "setups"}</span>
-        <button type="button" className="rounded border border-hairline bg-white px-2 py-1 disabled:opacity-50" disabled={params.page <= 1} onClick={() => go({ page: params.page - 1 })}>
+        <span className="figure" data-testid="queue-total">
+          {total} {total === 1 ? "setup" : "setups"}
+        </span>
+        <button
+          type="button"
+          className="rounded border border-hairline bg-white px-2 py-1 disabled:opacity-50"
+          disabled={params.page <= 1}
+          onClick={() => go({ page: params.page - 1 })}
+        >
           Previous
         </button>
         <span>
           Page <span className="figure">{Math.min(params.page, pages)}</span> of <span className="figure">{pages}</span>
         </span>
-        <button type="button" className="rounded border border-hairline bg-white px-2 py-1 disabled:opacity-50" disabled={params.page >= pages} onClick={() => go({ page: params.page + 1 })} data-testid="queue-next">
+        <button
+          type="button"
+          className="rounded border border-hairline bg-white px-2 py-1 disabled:opacity-50"
+          disabled={params.page >= pages}
+          onClick={() => go({ page: params.page + 1 })}
+          data-testid="queue-next"
+        >
           Next
         </button>
         <label className="ml-auto flex items-center gap-1 text-muted">
           Rows per page
-          <select className="rounded border border-hairline bg-white px-1 py-0.5 text-ink" value={params.pageSize} onChange={(e) => go({ pageSize: Number(e.target.value) })}>
+          <select
+            className="rounded border border-hairline bg-white px-1 py-0.5 text-ink"
+            value={params.pageSize}
+            onChange={(e) => go({ pageSize: Number(e.target.value) })}
+          >
             {PAGE_SIZES.map((n) => (
-              <option key={n} value={n}>{n}</option>
+              <option key={n} value={n}>
+                {n}
+              </option>
             ))}
           </select>
         </label>

@@ -21,13 +21,21 @@ export function ReviewWorkspace({ data, children }: ReviewWorkspaceProps) {
         <div className="space-y-4">
           <PlannerScene />
           <section className="panel p-4" aria-labelledby="payloads-title">
-            <h2 id="payloads-title" className="text-lg">Payloads on the mount</h2>
+            <h2 id="payloads-title" className="text-lg">
+              Payloads on the mount
+            </h2>
             {data.draft.payloads.length === 0 ? (
               <p className="mt-2 text-sm text-muted">No payloads.</p>
             ) : (
               <table className="mt-2 w-full text-sm" data-testid="review-payloads">
                 <thead className="text-left text-muted">
-                  <tr><th className="py-1 font-medium">Payload</th><th className="py-1 font-medium">Kind</th><th className="py-1 font-medium">Mass</th><th className="py-1 font-medium">Attachment</th><th className="py-1 font-medium">Size</th></tr>
+                  <tr>
+                    <th className="py-1 font-medium">Payload</th>
+                    <th className="py-1 font-medium">Kind</th>
+                    <th className="py-1 font-medium">Mass</th>
+                    <th className="py-1 font-medium">Attachment</th>
+                    <th className="py-1 font-medium">Size</th>
+                  </tr>
                 </thead>
                 <tbody>
                   {data.draft.payloads.map((p, i) => (
@@ -35,8 +43,13 @@ export function ReviewWorkspace({ data, children }: ReviewWorkspaceProps) {
                       <td className="py-1">{p.name}</td>
                       <td className="py-1">{p.category}</td>
                       <td className="figure py-1">{formatQuantity("mass", p.massKg, units)}</td>
-                      <td className="py-1">{p.attachment}{p.adapterId ? " with adapter" : ""}</td>
-                      <td className="figure py-1">{[p.lengthM, p.widthM, p.heightM].map((m) => formatQuantity("smallLength", m, units)).join(" × ")}</td>
+                      <td className="py-1">
+                        {p.attachment}
+                        {p.adapterId ? " with adapter" : ""}
+                      </td>
+                      <td className="figure py-1">
+                        {[p.lengthM, p.widthM, p.heightM].map((m) => formatQuantity("smallLength", m, units)).join(" × ")}
+                      </td>
                     </tr>
                   ))}
                 </tbody>

@@ -17,9 +17,13 @@ const WHEN = new Intl.DateTimeFormat("en-GB", { dateStyle: "medium", timeStyle: 
 function Item({ item, mine }: { item: ThreadItemView; mine: boolean }) {
   const decision = item.decision === "approved" ? "Approved" : item.decision === "changes_requested" ? "Sent back for changes" : null;
   return (
-    <li className={`rounded border p-3 ${decision ? "border-ink/20 bg-paper" : "border-hairline bg-white"}`} data-testid={decision ? "thread-decision" : "thread-comment"}>
+    <li
+      className={`rounded border p-3 ${decision ? "border-ink/20 bg-paper" : "border-hairline bg-white"}`}
+      data-testid={decision ? "thread-decision" : "thread-comment"}
+    >
       <p className="text-xs text-muted">
-        <span className="font-medium text-ink">{mine ? "You" : item.authorName}</span> ({item.authorRole}) · <time dateTime={item.at}>{WHEN.format(new Date(item.at))} UTC</time>
+        <span className="font-medium text-ink">{mine ? "You" : item.authorName}</span> ({item.authorRole}) ·{" "}
+        <time dateTime={item.at}>{WHEN.format(new Date(item.at))} UTC</time>
         {item.setupVersion !== null && <> · on version {item.setupVersion}</>}
       </p>
       {decision && <p className="mt-1 font-medium">{decision}</p>}
@@ -53,7 +57,9 @@ export function Thread({ setupId, viewerId, initialItems, title = "Discussion" }
   const tooLong = body.length > COMMENT_MAX_LENGTH;
   return (
     <section aria-labelledby={`${fieldId}-title`} className="panel space-y-3 p-4" data-testid="thread">
-      <h2 id={`${fieldId}-title`} className="text-lg">{title}</h2>
+      <h2 id={`${fieldId}-title`} className="text-lg">
+        {title}
+      </h2>
       {thread.data.items.length === 0 ? (
         <p className="text-sm text-muted">No comments yet.</p>
       ) : (
@@ -70,7 +76,9 @@ export function Thread({ setupId, viewerId, initialItems, title = "Discussion" }
           if (body.trim() && !tooLong) add.mutate(body.trim());
         }}
       >
-        <label htmlFor={fieldId} className="block text-sm text-muted">Add a comment</label>
+        <label htmlFor={fieldId} className="block text-sm text-muted">
+          Add a comment
+        </label>
         <textarea
           id={fieldId}
           value={body}
@@ -84,10 +92,19 @@ export function Thread({ setupId, viewerId, initialItems, title = "Discussion" }
         <p id={`${fieldId}-hint`} className={`text-xs ${tooLong ? "text-flag-stop" : "text-muted"}`}>
           {body.length} / {COMMENT_MAX_LENGTH} characters
         </p>
-        <button type="submit" disabled={add.isPending || !body.trim() || tooLong} className="rounded bg-accent px-3 py-1.5 text-sm font-medium text-white disabled:opacity-60" data-testid="comment-send">
+        <button
+          type="submit"
+          disabled={add.isPending || !body.trim() || tooLong}
+          className="rounded bg-accent px-3 py-1.5 text-sm font-medium text-white disabled:opacity-60"
+          data-testid="comment-send"
+        >
           Send comment
         </button>
-        {add.error && <p role="alert" className="text-sm text-flag-stop">{add.error.message}</p>}
+        {add.error && (
+          <p role="alert" className="text-sm text-flag-stop">
+            {add.error.message}
+          </p>
+        )}
       </form>
     </section>
   );

@@ -45,29 +45,52 @@ export function markerTexture(kind: MarkerKind): CanvasTexture {
     ctx.fillStyle = "rgba(245,243,238,0.9)";
     if (kind === "buoyancy") {
       // Hollow ring.
-      ctx.beginPath(); ctx.arc(c, c, r + 6, 0, 2 * Math.PI); ctx.fill();
-      ctx.beginPath(); ctx.arc(c, c, r - 7, 0, 2 * Math.PI);
-      ctx.lineWidth = 14; ctx.strokeStyle = BUOYANCY; ctx.stroke();
+      ctx.beginPath();
+      ctx.arc(c, c, r + 6, 0, 2 * Math.PI);
+      ctx.fill();
+      ctx.beginPath();
+      ctx.arc(c, c, r - 7, 0, 2 * Math.PI);
+      ctx.lineWidth = 14;
+      ctx.strokeStyle = BUOYANCY;
+      ctx.stroke();
       letter(ctx, "B", BUOYANCY);
     } else if (kind === "mass") {
       // Filled quartered disc: alternate ink and paper quadrants inside an ink rim.
-      ctx.beginPath(); ctx.arc(c, c, r + 4, 0, 2 * Math.PI); ctx.fill();
+      ctx.beginPath();
+      ctx.arc(c, c, r + 4, 0, 2 * Math.PI);
+      ctx.fill();
       for (let q = 0; q < 4; q++) {
-        ctx.beginPath(); ctx.moveTo(c, c);
+        ctx.beginPath();
+        ctx.moveTo(c, c);
         ctx.arc(c, c, r - 2, (q * Math.PI) / 2 - Math.PI / 2, ((q + 1) * Math.PI) / 2 - Math.PI / 2);
         ctx.closePath();
         ctx.fillStyle = q % 2 === 0 ? INK : "#f5f3ee";
         ctx.fill();
       }
-      ctx.beginPath(); ctx.arc(c, c, r - 2, 0, 2 * Math.PI);
-      ctx.lineWidth = 6; ctx.strokeStyle = INK; ctx.stroke();
+      ctx.beginPath();
+      ctx.arc(c, c, r - 2, 0, 2 * Math.PI);
+      ctx.lineWidth = 6;
+      ctx.strokeStyle = INK;
+      ctx.stroke();
       letter(ctx, "M", INK);
     } else {
       // Small diamond.
       const d = 34;
-      ctx.beginPath(); ctx.moveTo(c, c - d - 6); ctx.lineTo(c + d + 6, c); ctx.lineTo(c, c + d + 6); ctx.lineTo(c - d - 6, c); ctx.closePath(); ctx.fill();
-      ctx.beginPath(); ctx.moveTo(c, c - d); ctx.lineTo(c + d, c); ctx.lineTo(c, c + d); ctx.lineTo(c - d, c); ctx.closePath();
-      ctx.fillStyle = ACCENT; ctx.fill();
+      ctx.beginPath();
+      ctx.moveTo(c, c - d - 6);
+      ctx.lineTo(c + d + 6, c);
+      ctx.lineTo(c, c + d + 6);
+      ctx.lineTo(c - d - 6, c);
+      ctx.closePath();
+      ctx.fill();
+      ctx.beginPath();
+      ctx.moveTo(c, c - d);
+      ctx.lineTo(c + d, c);
+      ctx.lineTo(c, c + d);
+      ctx.lineTo(c - d, c);
+      ctx.closePath();
+      ctx.fillStyle = ACCENT;
+      ctx.fill();
       letter(ctx, "T", INK);
     }
   });
@@ -78,9 +101,12 @@ export function textTexture(text: string): { texture: CanvasTexture; aspect: num
   const widthPx = Math.min(1024, Math.max(128, Math.ceil((text.length * 44 + 48) / 64) * 64));
   const texture = canvasTexture(`text:${text}`, widthPx, (ctx) => {
     ctx.fillStyle = "rgba(245,243,238,0.92)";
-    ctx.beginPath(); ctx.roundRect(4, 24, widthPx - 8, 80, 40); ctx.fill();
+    ctx.beginPath();
+    ctx.roundRect(4, 24, widthPx - 8, 80, 40);
+    ctx.fill();
     ctx.font = "600 64px ui-sans-serif, system-ui, sans-serif";
-    ctx.textBaseline = "middle"; ctx.textAlign = "center";
+    ctx.textBaseline = "middle";
+    ctx.textAlign = "center";
     ctx.fillStyle = INK;
     ctx.fillText(text, widthPx / 2, 66);
   });

@@ -7,15 +7,11 @@ import dynamic from "next/dynamic";
 import { Component, type ErrorInfo, type ReactNode } from "react";
 import type { LifterSceneProps } from "./types";
 
-export const SCENE_UNAVAILABLE_MESSAGE =
-  "The 3D view is not available in this browser; the balance panel and the forms still work.";
+export const SCENE_UNAVAILABLE_MESSAGE = "The 3D view is not available in this browser; the balance panel and the forms still work.";
 
 function LoadingView() {
   return (
-    <div
-      role="status"
-      className="flex h-full min-h-[inherit] w-full items-center justify-center text-sm text-muted"
-    >
+    <div role="status" className="flex h-full min-h-[inherit] w-full items-center justify-center text-sm text-muted">
       Loading the 3D view…
     </div>
   );

@@ -36,19 +36,34 @@ interface LifterProps extends LifterSceneProps {
 /** Everything inside the Canvas; split out so hooks can read the R3F state. */
 const Lifter = memo(function Lifter(props: LifterProps) {
   const {
-    glbUrl, hullLengthM, hullMaxDiameterM, rail, railTabCount, mountX, payloads,
-    buoyancyCentre, centreOfMass, tetherPoint, trimDeg: flyingTrimDeg, tetherAngleDeg, windMS, windLabel,
-    onMountDrag, onMountDragEnd, mountSelected = false, wrapperRef, controlsRef,
-    tetherLine = null, grounded = false, groundedLabel,
+    glbUrl,
+    hullLengthM,
+    hullMaxDiameterM,
+    rail,
+    railTabCount,
+    mountX,
+    payloads,
+    buoyancyCentre,
+    centreOfMass,
+    tetherPoint,
+    trimDeg: flyingTrimDeg,
+    tetherAngleDeg,
+    windMS,
+    windLabel,
+    onMountDrag,
+    onMountDragEnd,
+    mountSelected = false,
+    wrapperRef,
+    controlsRef,
+    tetherLine = null,
+    grounded = false,
+    groundedLabel,
   } = props;
   // A lifter that does not fly rests level on the ground.
   const trimDeg = grounded ? 0 : flyingTrimDeg;
   const bodyRef = useRef<Group>(null);
   const mountRef = useRef<Mesh>(null);
-  const scale = useMemo(
-    () => sceneScale(hullLengthM, hullMaxDiameterM, tetherPoint),
-    [hullLengthM, hullMaxDiameterM, tetherPoint],
-  );
+  const scale = useMemo(() => sceneScale(hullLengthM, hullMaxDiameterM, tetherPoint), [hullLengthM, hullMaxDiameterM, tetherPoint]);
   const unitM = scale.lengthM;
   // On the ground, the ground comes up to the lowest thing hung under it (drawing only).
   const lowestZ = useMemo(
@@ -57,7 +72,13 @@ const Lifter = memo(function Lifter(props: LifterProps) {
   );
   const groundY = grounded ? lowestZ - 0.01 * unitM : scale.groundY;
   const { onPointerDown } = useMountDrag({
-    bodyRef, controlsRef, railStartX: rail.startX, railEndX: rail.endX, railZ: rail.z, onMountDrag, onMountDragEnd,
+    bodyRef,
+    controlsRef,
+    railStartX: rail.startX,
+    railEndX: rail.endX,
+    railZ: rail.z,
+    onMountDrag,
+    onMountDragEnd,
   });
   const draggable = onMountDrag !== undefined;
 
@@ -97,12 +118,23 @@ const Lifter = memo(function Lifter(props: LifterProps) {
             <ReadySignal wrapperRef={wrapperRef} />
           </Suspense>
           <Rail
-            startX={rail.startX} endX={rail.endX} z={rail.z} tabCount={railTabCount} unitM={unitM}
-            onPointerDown={onPointerDown} draggable={draggable}
+            startX={rail.startX}
+            endX={rail.endX}
+            z={rail.z}
+            tabCount={railTabCount}
+            unitM={unitM}
+            onPointerDown={onPointerDown}
+            draggable={draggable}
           />
           <Mount
-            x={mountX} z={rail.z} unitM={unitM} payloads={payloads} selected={mountSelected}
-            mountRef={mountRef} onPointerDown={onPointerDown} draggable={draggable}
+            x={mountX}
+            z={rail.z}
+            unitM={unitM}
+            payloads={payloads}
+            selected={mountSelected}
+            mountRef={mountRef}
+            onPointerDown={onPointerDown}
+            draggable={draggable}
           />
           <Bridle tetherPoint={tetherPoint} railStartX={rail.startX} railEndX={rail.endX} railZ={rail.z} />
         </group>
@@ -110,11 +142,19 @@ const Lifter = memo(function Lifter(props: LifterProps) {
 
       <Tether top={tetherWorld} tetherAngleDeg={grounded ? 0 : tetherAngleDeg} groundY={groundY} shape={grounded ? null : tetherLine} />
       {grounded && groundedLabel ? (
-        <GroundLabel text={groundedLabel} position={[0.5 * hullLengthM, groundY + 0.04 * unitM, 1.2 * hullMaxDiameterM]} heightM={0.07 * unitM} />
+        <GroundLabel
+          text={groundedLabel}
+          position={[0.5 * hullLengthM, groundY + 0.04 * unitM, 1.2 * hullMaxDiameterM]}
+          heightM={0.07 * unitM}
+        />
       ) : null}
       <Markers
-        buoyancy={buoyancyWorld} mass={massWorld} tether={tetherWorld} sizeM={0.07 * unitM}
-        guideFromY={guideFromY} guideToY={guideToY}
+        buoyancy={buoyancyWorld}
+        mass={massWorld}
+        tether={tetherWorld}
+        sizeM={0.07 * unitM}
+        guideFromY={guideFromY}
+        guideToY={guideToY}
       />
       {windMS > 0 && !grounded ? <WindArrow windMS={windMS} label={windLabel} tail={windTail} lengthUnitM={unitM} /> : null}
 
@@ -165,11 +205,7 @@ export function LifterScene({ summary = "3D view of the lifter", className = "",
         aria-label={summary}
         className="absolute inset-0 touch-none select-none"
       >
-        <Canvas
-          frameloop="demand"
-          dpr={[1, 2]}
-          camera={{ position: scale.cameraPosition, fov: 35, near: 0.01, far: 40 * scale.lengthM }}
-        >
+        <Canvas frameloop="demand" dpr={[1, 2]} camera={{ position: scale.cameraPosition, fov: 35, near: 0.01, far: 40 * scale.lengthM }}>
           <Lifter {...props} wrapperRef={wrapperRef} controlsRef={controlsRef} />
         </Canvas>
       </div>

@@ -22,7 +22,13 @@ interface MarkerProps {
 export const Marker = memo(function Marker({ kind, position, sizeM, guide }: MarkerProps) {
   const map = useMemo(() => markerTexture(kind), [kind]);
   const guidePoints = useMemo<[number, number, number][] | null>(
-    () => (guide ? [[position[0], guide.fromY, 0], [position[0], guide.toY, 0]] : null),
+    () =>
+      guide
+        ? [
+            [position[0], guide.fromY, 0],
+            [position[0], guide.toY, 0],
+          ]
+        : null,
     [guide, position],
   );
   return (
@@ -58,14 +64,8 @@ interface MarkersProps {
 }
 
 export const Markers = memo(function Markers({ buoyancy, mass, tether, sizeM, guideFromY, guideToY }: MarkersProps) {
-  const buoyancyGuide = useMemo(
-    () => ({ fromY: guideFromY, toY: guideToY, colour: BUOYANCY, dashed: true }),
-    [guideFromY, guideToY],
-  );
-  const massGuide = useMemo(
-    () => ({ fromY: guideFromY, toY: guideToY, colour: INK, dashed: false }),
-    [guideFromY, guideToY],
-  );
+  const buoyancyGuide = useMemo(() => ({ fromY: guideFromY, toY: guideToY, colour: BUOYANCY, dashed: true }), [guideFromY, guideToY]);
+  const massGuide = useMemo(() => ({ fromY: guideFromY, toY: guideToY, colour: INK, dashed: false }), [guideFromY, guideToY]);
   return (
     <group>
       <Marker kind="buoyancy" position={buoyancy} sizeM={sizeM} guide={buoyancyGuide} />

@@ -46,34 +46,50 @@ function PayloadShape({ payload }: { payload: ScenePayload }) {
 }
 
 function samePayload(a: ScenePayload, b: ScenePayload): boolean {
-  return a.key === b.key && a.label === b.label && a.shape === b.shape && a.lengthM === b.lengthM
-    && a.widthM === b.widthM && a.heightM === b.heightM && a.offset.x === b.offset.x
-    && a.offset.z === b.offset.z && a.level === b.level;
+  return (
+    a.key === b.key &&
+    a.label === b.label &&
+    a.shape === b.shape &&
+    a.lengthM === b.lengthM &&
+    a.widthM === b.widthM &&
+    a.heightM === b.heightM &&
+    a.offset.x === b.offset.x &&
+    a.offset.z === b.offset.z &&
+    a.level === b.level
+  );
 }
 
 /** One payload with a hang line from the attachment point (local origin) to its top. */
-const Payload = memo(function Payload({ payload }: { payload: ScenePayload }) {
-  const topZ = payload.offset.z + size(payload.heightM) / 2;
-  const hangPoints = useMemo<[number, number, number][]>(
-    () => [[0, 0, 0], [payload.offset.x, Math.min(0, topZ), 0]],
-    [payload.offset.x, topZ],
-  );
-  // A payload above the attachment (rare) needs no hang line.
-  const showHang = topZ < 0 && Math.hypot(payload.offset.x, topZ) > 1e-3;
-  return (
-    <group>
-      {showHang ? <Line points={hangPoints} color={LINE} lineWidth={1} /> : null}
-      <group position={[payload.offset.x, payload.offset.z, 0]}>
-        <PayloadShape payload={payload} />
+const Payload = memo(
+  function Payload({ payload }: { payload: ScenePayload }) {
+    const topZ = payload.offset.z + size(payload.heightM) / 2;
+    const hangPoints = useMemo<[number, number, number][]>(
+      () => [
+        [0, 0, 0],
+        [payload.offset.x, Math.min(0, topZ), 0],
+      ],
+      [payload.offset.x, topZ],
+    );
+    // A payload above the attachment (rare) needs no hang line.
+    const showHang = topZ < 0 && Math.hypot(payload.offset.x, topZ) > 1e-3;
+    return (
+      <group>
+        {showHang ? <Line points={hangPoints} color={LINE} lineWidth={1} /> : null}
+        <group position={[payload.offset.x, payload.offset.z, 0]}>
+          <PayloadShape payload={payload} />
+        </group>
       </group>
-    </group>
-  );
-}, (previous, next) => samePayload(previous.payload, next.payload));
+    );
+  },
+  (previous, next) => samePayload(previous.payload, next.payload),
+);
 
 export const Payloads = memo(function Payloads({ payloads }: { payloads: ScenePayload[] }) {
   return (
     <group name="payloads">
-      {payloads.map((payload) => <Payload key={payload.key} payload={payload} />)}
+      {payloads.map((payload) => (
+        <Payload key={payload.key} payload={payload} />
+      ))}
     </group>
   );
 });

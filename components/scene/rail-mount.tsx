@@ -41,9 +41,12 @@ export const Rail = memo(function Rail({ startX, endX, z, tabCount, unitM, onPoi
     if (count === 1) return [centreX];
     return Array.from({ length: count }, (_, i) => startX + ((endX - startX) * i) / (count - 1));
   }, [tabCount, startX, endX, centreX]);
-  const setCursor = useCallback((event: ThreeEvent<PointerEvent>, cursor: string) => {
-    if (draggable) (event.nativeEvent.target as HTMLElement | null)?.style.setProperty("cursor", cursor);
-  }, [draggable]);
+  const setCursor = useCallback(
+    (event: ThreeEvent<PointerEvent>, cursor: string) => {
+      if (draggable) (event.nativeEvent.target as HTMLElement | null)?.style.setProperty("cursor", cursor);
+    },
+    [draggable],
+  );
   return (
     <group name="rail" position={[centreX, z, 0]}>
       <mesh>
@@ -85,9 +88,12 @@ interface MountProps {
 export const Mount = memo(function Mount({ x, z, unitM, payloads, selected, mountRef, onPointerDown, draggable }: MountProps) {
   const carriageY = -0.5 * (RAIL_HEIGHT + CARRIAGE_HEIGHT) * unitM;
   const screwY = carriageY - 0.5 * (CARRIAGE_HEIGHT + SCREW_LENGTH) * unitM;
-  const setCursor = useCallback((event: ThreeEvent<PointerEvent>, cursor: string) => {
-    if (draggable) (event.nativeEvent.target as HTMLElement | null)?.style.setProperty("cursor", cursor);
-  }, [draggable]);
+  const setCursor = useCallback(
+    (event: ThreeEvent<PointerEvent>, cursor: string) => {
+      if (draggable) (event.nativeEvent.target as HTMLElement | null)?.style.setProperty("cursor", cursor);
+    },
+    [draggable],
+  );
   return (
     <group name="mount" position={[x, z, 0]}>
       <group

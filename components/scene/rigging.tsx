@@ -21,8 +21,20 @@ interface BridleProps {
 
 /** Bridle lines from the rail's ends to the tether point, in body coordinates (three axes). */
 export const Bridle = memo(function Bridle({ tetherPoint, railStartX, railEndX, railZ }: BridleProps) {
-  const fore = useMemo<Point3[]>(() => [[railStartX, railZ, 0], [tetherPoint.x, tetherPoint.z, 0]], [railStartX, railZ, tetherPoint.x, tetherPoint.z]);
-  const aft = useMemo<Point3[]>(() => [[railEndX, railZ, 0], [tetherPoint.x, tetherPoint.z, 0]], [railEndX, railZ, tetherPoint.x, tetherPoint.z]);
+  const fore = useMemo<Point3[]>(
+    () => [
+      [railStartX, railZ, 0],
+      [tetherPoint.x, tetherPoint.z, 0],
+    ],
+    [railStartX, railZ, tetherPoint.x, tetherPoint.z],
+  );
+  const aft = useMemo<Point3[]>(
+    () => [
+      [railEndX, railZ, 0],
+      [tetherPoint.x, tetherPoint.z, 0],
+    ],
+    [railEndX, railZ, tetherPoint.x, tetherPoint.z],
+  );
   return (
     <group name="bridle">
       <Line points={fore} color={LINE} lineWidth={1.2} />

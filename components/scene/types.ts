@@ -2,25 +2,35 @@
  * The scene's contract: it draws exactly these values and computes no physics. A container maps
  * the planner store (and lib/balance's results) onto these props.
  */
-export interface SceneVec { x: number; z: number }           // body frame, metres: x aft from the nose tip, z up
+export interface SceneVec {
+  x: number;
+  z: number;
+} // body frame, metres: x aft from the nose tip, z up
 export interface ScenePayload {
-  key: string; label: string;
-  shape: "box" | "cylinder" | "rod";                          // rod = thin whip antenna
-  lengthM: number; widthM: number; heightM: number;           // box along x, y, z; cylinder: diameter = lengthM, height = heightM; rod: length = heightM, thickness = widthM
-  offset: SceneVec;                                           // its centre from the mount's attachment point (mountX, rail.z)
-  level?: "ok" | "caution" | "stop";                          // worst flag touching it (optional tint/outline)
+  key: string;
+  label: string;
+  shape: "box" | "cylinder" | "rod"; // rod = thin whip antenna
+  lengthM: number;
+  widthM: number;
+  heightM: number; // box along x, y, z; cylinder: diameter = lengthM, height = heightM; rod: length = heightM, thickness = widthM
+  offset: SceneVec; // its centre from the mount's attachment point (mountX, rail.z)
+  level?: "ok" | "caution" | "stop"; // worst flag touching it (optional tint/outline)
 }
 export interface LifterSceneProps {
   glbUrl: string;
-  hullLengthM: number; hullMaxDiameterM: number;
-  rail: { startX: number; endX: number; z: number }; railTabCount: number;
+  hullLengthM: number;
+  hullMaxDiameterM: number;
+  rail: { startX: number; endX: number; z: number };
+  railTabCount: number;
   mountX: number;
   payloads: ScenePayload[];
-  buoyancyCentre: SceneVec; centreOfMass: SceneVec | null; tetherPoint: SceneVec;
-  trimDeg: number;            // pitch to draw, nose up positive, rotating the whole lifter about the tether point
-  tetherAngleDeg: number;     // tether from vertical, leaning downwind (wind blows from the nose towards the tail, i.e. +x)
-  windMS: number;             // 0 hides the wind arrow
-  onMountDrag?: (positionXM: number) => void;   // body-frame x under the pointer, clamped to [rail.startX, rail.endX]
+  buoyancyCentre: SceneVec;
+  centreOfMass: SceneVec | null;
+  tetherPoint: SceneVec;
+  trimDeg: number; // pitch to draw, nose up positive, rotating the whole lifter about the tether point
+  tetherAngleDeg: number; // tether from vertical, leaning downwind (wind blows from the nose towards the tail, i.e. +x)
+  windMS: number; // 0 hides the wind arrow
+  onMountDrag?: (positionXM: number) => void; // body-frame x under the pointer, clamped to [rail.startX, rail.endX]
   onMountDragEnd?: () => void;
   /** Text alternative of the view (the container summarises the trim); the canvas is role="img". */
   summary?: string;

@@ -47,50 +47,62 @@ export function useMountDrag(options: MountDragOptions): MountDragHandlers {
   const dragging = useRef(false);
   const lastX = useRef(Number.NaN);
 
-  const railXUnderPointer = useCallback((offsetX: number, offsetY: number): number | null => {
-    const body = latest.current.bodyRef.current;
-    const canvas = gl.domElement;
-    if (!body || canvas.clientWidth === 0 || canvas.clientHeight === 0) return null;
-    scratchNdc.set((offsetX / canvas.clientWidth) * 2 - 1, -(offsetY / canvas.clientHeight) * 2 + 1);
-    scratchRaycaster.setFromCamera(scratchNdc, camera);
-    body.updateWorldMatrix(true, false);
-    scratchRay.copy(scratchRaycaster.ray).applyMatrix4(scratchInverse.copy(body.matrixWorld).invert());
-    // Rail line: P(s) = (s, railZ, 0); ray: Q(t) = o + t·d with |d| = 1. Closest points solve
-    // s = (b·e − w_x) / (1 − b²), with w = P(0) − o, b = d_x, e = d·w.
-    const { origin: o, direction: d } = scratchRay;
-    const wx = -o.x;
-    const wy = latest.current.railZ - o.y;
-    const wz = -o.z;
-    const b = d.x;
-    const denom = 1 - b * b;
-    if (denom < PARALLEL_EPSILON) return null;
-    const e = d.x * wx + d.y * wy + d.z * wz;
-    const s = (b * e - wx) / denom;
-    const { railStartX, railEndX } = latest.current;
-    return Math.min(Math.max(s, Math.min(railStartX, railEndX)), Math.max(railStartX, railEndX));
-  }, [camera, gl]);
+  const railXUnderPointer = useCallback(
+    (offsetX: number, offsetY: number): number | null => {
+      const body = latest.current.bodyRef.current;
+      const canvas = gl.domElement;
+      if (!body || canvas.clientWidth === 0 || canvas.clientHeight === 0) return null;
+      scratchNdc.set((offsetX / canvas.clientWidth) * 2 - 1, -(offsetY / canvas.clientHeight) * 2 + 1);
+      scratchRaycaster.setFromCamera(scratchNdc, camera);
+      body.updateWorldMatrix(true, false);
+      scratchRay.copy(scratchRaycaster.ray).applyMatrix4(scratchInverse.copy(body.matrixWorld).invert());
+      // Rail line: P(s) = (s, railZ, 0); ray: Q(t) = o + t·d with |d| = 1. Closest points solve
+      // s = (b·e − w_x) / (1 − b²), with w = P(0) − o, b = d_x, e = d·w.
+      const { origin: o, direction: d } = scratchRay;
+      const wx = -o.x;
+      const wy = latest.current.railZ - o.y;
+      const wz = -o.z;
+      const b = d.x;
+      const denom = 1 - b * b;
+      if (denom < PARALLEL_EPSILON) return null;
+      const e = d.x * wx + d.y * wy + d.z * wz;
+      const s = (b * e - wx) / denom;
+      const { railStartX, railEndX } = latest.current;
+      return Math.min(Math.max(s, Math.min(railStartX, railEndX)), Math.max(railStartX, railEndX));
+    },
+    [camera, gl],
+  );
 
-  const emit = useCallback((offsetX: number, offsetY: number) => {
-    const x = railXUnderPointer(offsetX, offsetY);
-    if (x === null || Math.abs(x - lastX.current) < MIN_STEP_M) return;
-    lastX.current = x;
-    latest.current.onMountDrag?.(x);
-  }, [railXUnderPointer]);
+  const emit = useCallback(
+    (offsetX: number, offsetY: number) => {
+      const x = railXUnderPointer(offsetX, offsetY);
+      if (x === null || Math.abs(x - lastX.current) < MIN_STEP_M) return;
+      lastX.current = x;
+      latest.current.onMountDrag?.(x);
+    },
+    [railXUnderPointer],
+  );
 
-  const onMove = useCallback((event: PointerEvent) => {
-    if (dragging.current) emit(event.offsetX, event.offsetY);
-  }, [emit]);
+  const onMove = useCallback(
+    (event: PointerEvent) => {
+      if (dragging.current) emit(event.offsetX, event.offsetY);
+    },
+    [emit],
+  );
 
-  const finish = useCallback((event: PointerEvent) => {
-    if (!dragging.current) return;
-    dragging.current = false;
-    const canvas = gl.domElement;
-    if (canvas.hasPointerCapture(event.pointerId)) canvas.releasePointerCapture(event.pointerId);
-    canvas.style.cursor = "";
-    const controls = latest.current.controlsRef.current;
-    if (controls) controls.enabled = true;
-    latest.current.onMountDragEnd?.();
-  }, [gl]);
+  const finish = useCallback(
+    (event: PointerEvent) => {
+      if (!dragging.current) return;
+      dragging.current = false;
+      const canvas = gl.domElement;
+      if (canvas.hasPointerCapture(event.pointerId)) canvas.releasePointerCapture(event.pointerId);
+      canvas.style.cursor = "";
+      const controls = latest.current.controlsRef.current;
+      if (controls) controls.enabled = true;
+      latest.current.onMountDragEnd?.();
+    },
+    [gl],
+  );
 
   useEffect(() => {
     const canvas = gl.domElement;
@@ -104,19 +116,22 @@ export function useMountDrag(options: MountDragOptions): MountDragHandlers {
     };
   }, [gl, onMove, finish]);
 
-  const onPointerDown = useCallback((event: ThreeEvent<PointerEvent>) => {
-    if (!latest.current.onMountDrag || event.button !== 0) return;
-    event.stopPropagation();
-    dragging.current = true;
-    lastX.current = Number.NaN;
-    const controls = latest.current.controlsRef.current;
-    if (controls) controls.enabled = false;
-    const canvas = gl.domElement;
-    canvas.setPointerCapture(event.pointerId);
-    canvas.style.cursor = "grabbing";
-    // A press on the rail moves the mount there at once.
-    emit(event.nativeEvent.offsetX, event.nativeEvent.offsetY);
-  }, [emit, gl]);
+  const onPointerDown = useCallback(
+    (event: ThreeEvent<PointerEvent>) => {
+      if (!latest.current.onMountDrag || event.button !== 0) return;
+      event.stopPropagation();
+      dragging.current = true;
+      lastX.current = Number.NaN;
+      const controls = latest.current.controlsRef.current;
+      if (controls) controls.enabled = false;
+      const canvas = gl.domElement;
+      canvas.setPointerCapture(event.pointerId);
+      canvas.style.cursor = "grabbing";
+      // A press on the rail moves the mount there at once.
+      emit(event.nativeEvent.offsetX, event.nativeEvent.offsetY);
+    },
+    [emit, gl],
+  );
 
   return { onPointerDown, dragging };
 }

@@ -26,14 +26,25 @@ export function NewSetupForm({ models }: NewSetupFormProps) {
         Envelope model
         <select name="modelId" className="mt-0.5 block rounded border border-hairline bg-white px-2 py-1">
           {models.map((m) => (
-            <option key={m.id} value={m.id}>{m.name} ({m.gasVolumeM3.toFixed(2)} m³)</option>
+            <option key={m.id} value={m.id}>
+              {m.name} ({m.gasVolumeM3.toFixed(2)} m³)
+            </option>
           ))}
         </select>
       </label>
-      <button type="submit" disabled={create.isPending || create.isSuccess} className="rounded bg-accent px-3 py-1.5 text-sm font-medium text-white disabled:opacity-60" data-testid="new-setup">
+      <button
+        type="submit"
+        disabled={create.isPending || create.isSuccess}
+        className="rounded bg-accent px-3 py-1.5 text-sm font-medium text-white disabled:opacity-60"
+        data-testid="new-setup"
+      >
         New setup
       </button>
-      {create.error && <p role="alert" className="text-sm text-flag-stop">{create.error.message}</p>}
+      {create.error && (
+        <p role="alert" className="text-sm text-flag-stop">
+          {create.error.message}
+        </p>
+      )}
     </form>
   );
 }

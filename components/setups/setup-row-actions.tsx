@@ -24,23 +24,41 @@ export function SetupRowActions({ id, name }: { id: string; name: string }) {
   const error = duplicate.error ?? remove.error;
   return (
     <span className="flex flex-wrap items-center gap-2 text-sm">
-      <button type="button" disabled={pending} className="text-accent underline" onClick={() => duplicate.mutate()} aria-label={`Duplicate ${name}`}>
+      <button
+        type="button"
+        disabled={pending}
+        className="text-accent underline"
+        onClick={() => duplicate.mutate()}
+        aria-label={`Duplicate ${name}`}
+      >
         Duplicate
       </button>
       {confirming ? (
         <span className="flex items-center gap-1" role="group" aria-label="Confirm delete">
           <span>Delete for good?</span>
-          <button type="button" disabled={pending} className="rounded bg-flag-stop px-2 py-0.5 text-white" onClick={() => remove.mutate()} data-testid="confirm-delete">
+          <button
+            type="button"
+            disabled={pending}
+            className="rounded bg-flag-stop px-2 py-0.5 text-white"
+            onClick={() => remove.mutate()}
+            data-testid="confirm-delete"
+          >
             Delete
           </button>
-          <button type="button" className="underline" onClick={() => setConfirming(false)}>Keep</button>
+          <button type="button" className="underline" onClick={() => setConfirming(false)}>
+            Keep
+          </button>
         </span>
       ) : (
         <button type="button" className="text-flag-stop underline" onClick={() => setConfirming(true)} aria-label={`Delete ${name}`}>
           Delete
         </button>
       )}
-      {error && <span role="alert" className="text-flag-stop">{error.message}</span>}
+      {error && (
+        <span role="alert" className="text-flag-stop">
+          {error.message}
+        </span>
+      )}
     </span>
   );
 }

@@ -33,14 +33,24 @@ export function SetupTable({ rows, showOwner = false, testId = "setup-table", hr
           <th className="px-3 py-2 font-medium">Status</th>
           <th className="px-3 py-2 font-medium">Worst flag</th>
           <th className="px-3 py-2 font-medium">Last change</th>
-          {actionsFor && <th className="px-3 py-2 font-medium"><span className="sr-only">Actions</span></th>}
+          {actionsFor && (
+            <th className="px-3 py-2 font-medium">
+              <span className="sr-only">Actions</span>
+            </th>
+          )}
         </tr>
       </thead>
       <tbody>
         {rows.map((row) => (
           <tr key={row.id} className="border-t border-hairline" data-testid="setup-row">
             <td className="border-t border-hairline px-3 py-2 font-medium">
-              {hrefFor ? <Link href={hrefFor(row)} className="text-accent underline-offset-2 hover:underline">{row.name}</Link> : row.name}
+              {hrefFor ? (
+                <Link href={hrefFor(row)} className="text-accent underline-offset-2 hover:underline">
+                  {row.name}
+                </Link>
+              ) : (
+                row.name
+              )}
               {unread?.[row.id] ? (
                 <span className="ml-2 rounded-full bg-accent px-1.5 py-0.5 text-xs font-normal text-white" data-testid="unread-comments">
                   {unread[row.id]} new {unread[row.id] === 1 ? "comment" : "comments"}

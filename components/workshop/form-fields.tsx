@@ -27,12 +27,25 @@ interface NumberFieldProps extends FieldProps {
 }
 
 /** A number in the maker's units, with its unit after the box and the schema's message below it. */
-export function NumberField({ path, label, register, errors, quantity, plainUnit = "", unitSystem, placeholder, hint, testId }: NumberFieldProps) {
+export function NumberField({
+  path,
+  label,
+  register,
+  errors,
+  quantity,
+  plainUnit = "",
+  unitSystem,
+  placeholder,
+  hint,
+  testId,
+}: NumberFieldProps) {
   const id = useId();
   const error = errorAt(errors, path);
   return (
     <div className="text-sm">
-      <label htmlFor={id} className="block text-muted">{label}</label>
+      <label htmlFor={id} className="block text-muted">
+        {label}
+      </label>
       <div className="mt-0.5 flex items-center gap-1">
         <input
           id={id}
@@ -46,8 +59,16 @@ export function NumberField({ path, label, register, errors, quantity, plainUnit
         />
         <span className="text-muted">{unitLabel({ quantity }, unitSystem, plainUnit)}</span>
       </div>
-      {hint && <p id={`${id}-hint`} className="text-xs text-muted">{hint}</p>}
-      {error && <p className="mt-0.5 text-xs text-flag-stop" role="alert">{error}</p>}
+      {hint && (
+        <p id={`${id}-hint`} className="text-xs text-muted">
+          {hint}
+        </p>
+      )}
+      {error && (
+        <p className="mt-0.5 text-xs text-flag-stop" role="alert">
+          {error}
+        </p>
+      )}
     </div>
   );
 }
@@ -63,10 +84,20 @@ export function TextField({ path, label, register, errors, hint, testId, multili
   const box = `mt-0.5 w-full rounded border bg-white px-2 py-1 ${error ? "border-flag-stop" : "border-hairline"}`;
   return (
     <div className={`text-sm ${className}`}>
-      <label htmlFor={id} className="block text-muted">{label}</label>
-      {multiline ? <textarea id={id} {...register(path)} rows={2} className={box} data-testid={testId} /> : <input id={id} {...register(path)} className={box} data-testid={testId} aria-invalid={error ? true : undefined} />}
+      <label htmlFor={id} className="block text-muted">
+        {label}
+      </label>
+      {multiline ? (
+        <textarea id={id} {...register(path)} rows={2} className={box} data-testid={testId} />
+      ) : (
+        <input id={id} {...register(path)} className={box} data-testid={testId} aria-invalid={error ? true : undefined} />
+      )}
       {hint && <p className="text-xs text-muted">{hint}</p>}
-      {error && <p className="mt-0.5 text-xs text-flag-stop" role="alert">{error}</p>}
+      {error && (
+        <p className="mt-0.5 text-xs text-flag-stop" role="alert">
+          {error}
+        </p>
+      )}
     </div>
   );
 }
@@ -80,17 +111,31 @@ export function SelectField({ path, label, register, errors, options, testId }: 
   const error = errorAt(errors, path);
   return (
     <div className="text-sm">
-      <label htmlFor={id} className="block text-muted">{label}</label>
+      <label htmlFor={id} className="block text-muted">
+        {label}
+      </label>
       <select id={id} {...register(path)} className="mt-0.5 w-full rounded border border-hairline bg-white px-2 py-1" data-testid={testId}>
-        {options.map((o) => <option key={o.value} value={o.value}>{o.label}</option>)}
+        {options.map((o) => (
+          <option key={o.value} value={o.value}>
+            {o.label}
+          </option>
+        ))}
       </select>
-      {error && <p className="mt-0.5 text-xs text-flag-stop" role="alert">{error}</p>}
+      {error && (
+        <p className="mt-0.5 text-xs text-flag-stop" role="alert">
+          {error}
+        </p>
+      )}
     </div>
   );
 }
 
 /** Puts a server's field issues ("hull.lengthM": message) beside the fields; the rest go to the form's message. */
-export function applyServerIssues(issues: readonly { path: string; message: string }[] | undefined, setError: (path: string, error: { message: string }) => void, known: (path: string) => boolean): string[] {
+export function applyServerIssues(
+  issues: readonly { path: string; message: string }[] | undefined,
+  setError: (path: string, error: { message: string }) => void,
+  known: (path: string) => boolean,
+): string[] {
   const unplaced: string[] = [];
   for (const issue of issues ?? []) {
     if (known(issue.path)) setError(issue.path, { message: issue.message });

@@ -51,12 +51,22 @@ export function ItemActions({ kind, id, name, active, setupCount, afterDelete }:
           Delete
         </button>
       )}
-      {error && <span className="text-xs text-flag-stop" role="alert">{error}</span>}
+      {error && (
+        <span className="text-xs text-flag-stop" role="alert">
+          {error}
+        </span>
+      )}
     </span>
   );
 }
 
 /** "active" or "retired", by word first (look.md: never by colour alone). */
 export function ActiveBadge({ active }: { active: boolean }) {
-  return active ? <span className="text-sm">in catalogue</span> : <span className="rounded bg-paper px-1.5 py-0.5 text-sm text-muted" data-testid="retired-badge">retired</span>;
+  return active ? (
+    <span className="text-sm">in catalogue</span>
+  ) : (
+    <span className="rounded bg-paper px-1.5 py-0.5 text-sm text-muted" data-testid="retired-badge">
+      retired
+    </span>
+  );
 }

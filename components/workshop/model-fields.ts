@@ -67,7 +67,11 @@ export interface LimitField extends LabelledField {
   source: string;
 }
 
-const limit = (key: keyof Limits, label: string, spec: Omit<NumberFieldSpec, "path" | "empty"> & { plainUnit?: string } = {}): LimitField => ({
+const limit = (
+  key: keyof Limits,
+  label: string,
+  spec: Omit<NumberFieldSpec, "path" | "empty"> & { plainUnit?: string } = {},
+): LimitField => ({
   limitKey: key,
   path: `limits.${key}`,
   empty: "undefined",
@@ -94,7 +98,12 @@ export const LIMIT_FIELDS: readonly LimitField[] = [
 export const MODEL_NUMBER_FIELDS: readonly NumberFieldSpec[] = [...HULL_FIELDS, ...MASS_RIGGING_FIELDS, ...AERO_FIELDS, ...LIMIT_FIELDS];
 
 /** The rigging a hull suggests (lib/balance geometry-envelope.ts): where a new model starts. */
-export function suggestedRigging(hull: HullParams): Pick<EnvelopeModelValues, "massCentreXM" | "massCentreZM" | "tetherPointXM" | "tetherPointZM" | "railStartXM" | "railEndXM" | "railZM" | "aero"> {
+export function suggestedRigging(
+  hull: HullParams,
+): Pick<
+  EnvelopeModelValues,
+  "massCentreXM" | "massCentreZM" | "tetherPointXM" | "tetherPointZM" | "railStartXM" | "railEndXM" | "railZM" | "aero"
+> {
   const g = deriveEnvelopeGeometry(hull);
   return {
     massCentreXM: g.fabricMassCentre.x,

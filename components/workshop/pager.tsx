@@ -17,8 +17,16 @@ export function Pager({ basePath, page, pageSize, total, testId = "pager" }: Pag
   return (
     <div className="flex items-center gap-3 text-sm text-muted" data-testid={testId}>
       <span>{total === 0 ? "None yet." : `${first}–${last} of ${total}`}</span>
-      {page > 1 && <Link href={link(page - 1)} className="text-accent-dark underline" rel="prev">Previous</Link>}
-      {page < pages && <Link href={link(page + 1)} className="text-accent-dark underline" rel="next">Next</Link>}
+      {page > 1 && (
+        <Link href={link(page - 1)} className="text-accent-dark underline" rel="prev">
+          Previous
+        </Link>
+      )}
+      {page < pages && (
+        <Link href={link(page + 1)} className="text-accent-dark underline" rel="next">
+          Next
+        </Link>
+      )}
     </div>
   );
 }

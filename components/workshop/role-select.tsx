@@ -32,7 +32,9 @@ export function RoleSelect({ userId, name, role, disabled = false }: RoleSelectP
   const message = change.isSuccess ? `${name} is now ${current}.` : (change.error?.message ?? null);
   return (
     <span className="inline-flex flex-wrap items-center gap-2" data-testid="role-select" data-role={current}>
-      <label htmlFor={id} className="sr-only">Role of {name}</label>
+      <label htmlFor={id} className="sr-only">
+        Role of {name}
+      </label>
       <select
         id={id}
         value={proposed}
@@ -45,18 +47,38 @@ export function RoleSelect({ userId, name, role, disabled = false }: RoleSelectP
         data-testid="role-choice"
       >
         {ROLES.map((r) => (
-          <option key={r} value={r}>{r}{r === current ? " (now)" : ""}</option>
+          <option key={r} value={r}>
+            {r}
+            {r === current ? " (now)" : ""}
+          </option>
         ))}
       </select>
       {proposed !== current && !confirming && (
-        <button type="button" onClick={() => setConfirming(true)} className="rounded border border-accent bg-white px-2 py-1 text-sm text-accent-dark" data-testid="role-change">
+        <button
+          type="button"
+          onClick={() => setConfirming(true)}
+          className="rounded border border-accent bg-white px-2 py-1 text-sm text-accent-dark"
+          data-testid="role-change"
+        >
           Change {name}&apos;s role…
         </button>
       )}
       {confirming && (
-        <span role="group" aria-label={`Confirm the role change of ${name}`} className="inline-flex flex-wrap items-center gap-2 rounded border border-flag-caution bg-paper px-2 py-1 text-sm">
-          <span>Make {name} {proposed} instead of {current}?</span>
-          <button type="button" onClick={() => change.mutate(proposed)} disabled={change.isPending} className="rounded bg-accent px-2 py-0.5 text-white" data-testid="role-confirm">
+        <span
+          role="group"
+          aria-label={`Confirm the role change of ${name}`}
+          className="inline-flex flex-wrap items-center gap-2 rounded border border-flag-caution bg-paper px-2 py-1 text-sm"
+        >
+          <span>
+            Make {name} {proposed} instead of {current}?
+          </span>
+          <button
+            type="button"
+            onClick={() => change.mutate(proposed)}
+            disabled={change.isPending}
+            className="rounded bg-accent px-2 py-0.5 text-white"
+            data-testid="role-confirm"
+          >
             Yes, make {name} {proposed}
           </button>
           <button
@@ -72,7 +94,11 @@ export function RoleSelect({ userId, name, role, disabled = false }: RoleSelectP
           </button>
         </span>
       )}
-      {message && <span className="text-xs text-muted" role="status">{message}</span>}
+      {message && (
+        <span className="text-xs text-muted" role="status">
+          {message}
+        </span>
+      )}
     </span>
   );
 }

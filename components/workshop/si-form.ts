@@ -69,10 +69,15 @@ export function toSiValues(form: Tree, fields: readonly NumberFieldSpec[], syste
 }
 
 /** react-hook-form resolver: display text → SI → the shared zod schema. */
-export function siResolver<S extends z.ZodType<FieldValues, FieldValues>>(schema: S, fields: readonly NumberFieldSpec[], system: UnitSystem): Resolver<FieldValues, unknown, z.output<S>> {
+export function siResolver<S extends z.ZodType<FieldValues, FieldValues>>(
+  schema: S,
+  fields: readonly NumberFieldSpec[],
+  system: UnitSystem,
+): Resolver<FieldValues, unknown, z.output<S>> {
   const check = zodResolver(schema as never) as unknown as Resolver<FieldValues, unknown, z.output<S>>;
   return (values, context, options) => check(toSiValues(values, fields, system), context, options);
 }
 
 /** "m", "ft", "%": the unit label of a field in the maker's system. */
-export const unitLabel = (field: Pick<NumberFieldSpec, "quantity">, system: UnitSystem, plain = ""): string => (field.quantity ? unitOf(field.quantity, system) : plain);
+export const unitLabel = (field: Pick<NumberFieldSpec, "quantity">, system: UnitSystem, plain = ""): string =>
+  field.quantity ? unitOf(field.quantity, system) : plain;

@@ -30,8 +30,14 @@ interface ItemFormProps {
 function ItemForm({ kind, id, initial, unitSystem, onDone }: ItemFormProps) {
   const spec = SIMPLE_KINDS[kind];
   const router = useRouter();
-  const numbers = useMemo<NumberFieldSpec[]>(() => spec.fields.flatMap((f) => (f.type === "number" ? [{ path: f.path, quantity: f.quantity }] : [])), [spec]);
-  const form = useForm<FieldValues>({ resolver: siResolver(spec.schema, numbers, unitSystem), defaultValues: toFormValues(initial, numbers, unitSystem) });
+  const numbers = useMemo<NumberFieldSpec[]>(
+    () => spec.fields.flatMap((f) => (f.type === "number" ? [{ path: f.path, quantity: f.quantity }] : [])),
+    [spec],
+  );
+  const form = useForm<FieldValues>({
+    resolver: siResolver(spec.schema, numbers, unitSystem),
+    defaultValues: toFormValues(initial, numbers, unitSystem),
+  });
   const [message, setMessage] = useState<string | null>(null);
   const save = useMutation({
     mutationFn: (values: FieldValues) => saveCatalogueItemRequest(kind, id, values),
@@ -39,25 +45,80 @@ function ItemForm({ kind, id, initial, unitSystem, onDone }: ItemFormProps) {
       router.refresh();
       onDone();
     },
-    onError: (error) => setMessage([error.message, ...applyServerIssues(error instanceof ApiError ? error.error.issues : [], (p, e) => form.setError(p, e), () => true)].join(" ")),
+    onError: (error) =>
+      setMessage(
+        [
+          error.message,
+          ...applyServerIssues(
+            error instanceof ApiError ? error.error.issues : [],
+            (p, e) => form.setError(p, e),
+            () => true,
+          ),
+        ].join(" "),
+      ),
   });
   const { register, formState } = form;
   return (
-    <form onSubmit={form.handleSubmit((v) => save.mutate(v))} noValidate className="panel grid gap-3 p-4 sm:grid-cols-3" data-testid="item-form" aria-label={id ? `Edit ${String(initial.name)}` : `New ${spec.one}`}>
+    <form
+      onSubmit={form.handleSubmit((v) => save.mutate(v))}
+      noValidate
+      className="panel grid gap-3 p-4 sm:grid-cols-3"
+      data-testid="item-form"
+      aria-label={id ? `Edit ${String(initial.name)}` : `New ${spec.one}`}
+    >
       <h3 className="font-display font-bold sm:col-span-3">{id ? `Edit ${String(initial.name)}` : `New ${spec.one}`}</h3>
       {spec.fields.map((f) =>
         f.type === "number" ? (
-          <NumberField key={f.path} path={f.path} label={f.label} quantity={f.quantity} unitSystem={unitSystem} register={register} errors={formState.errors} testId={`field-${f.path}`} />
+          <NumberField
+            key={f.path}
+            path={f.path}
+            label={f.label}
+            quantity={f.quantity}
+            unitSystem={unitSystem}
+            register={register}
+            errors={formState.errors}
+            testId={`field-${f.path}`}
+          />
         ) : f.type === "select" ? (
-          <SelectField key={f.path} path={f.path} label={f.label} options={f.options.map((o) => ({ value: o, label: o }))} register={register} errors={formState.errors} testId={`field-${f.path}`} />
+          <SelectField
+            key={f.path}
+            path={f.path}
+            label={f.label}
+            options={f.options.map((o) => ({ value: o, label: o }))}
+            register={register}
+            errors={formState.errors}
+            testId={`field-${f.path}`}
+          />
         ) : (
-          <TextField key={f.path} path={f.path} label={f.label} multiline={f.multiline} register={register} errors={formState.errors} testId={`field-${f.path}`} className={f.multiline ? "sm:col-span-3" : ""} />
+          <TextField
+            key={f.path}
+            path={f.path}
+            label={f.label}
+            multiline={f.multiline}
+            register={register}
+            errors={formState.errors}
+            testId={`field-${f.path}`}
+            className={f.multiline ? "sm:col-span-3" : ""}
+          />
         ),
       )}
       <div className="flex items-center gap-3 sm:col-span-3">
-        <button type="submit" disabled={save.isPending} className="rounded bg-accent px-3 py-1.5 text-sm text-white" data-testid="item-save">{id ? "Save" : `Add the ${spec.one}`}</button>
-        <button type="button" onClick={onDone} className="rounded border border-hairline bg-white px-3 py-1.5 text-sm">Cancel</button>
-        {message && <p className="text-sm text-flag-stop" role="alert">{message}</p>}
+        <button
+          type="submit"
+          disabled={save.isPending}
+          className="rounded bg-accent px-3 py-1.5 text-sm text-white"
+          data-testid="item-save"
+        >
+          {id ? "Save" : `Add the ${spec.one}`}
+        </button>
+        <button type="button" onClick={onDone} className="rounded border border-hairline bg-white px-3 py-1.5 text-sm">
+          Cancel
+        </button>
+        {message && (
+          <p className="text-sm text-flag-stop" role="alert">
+            {message}
+          </p>
+        )}
       </div>
     </form>
   );
@@ -81,29 +142,60 @@ export function SimpleCatalogue({ kind, rows, unitSystem }: SimpleCatalogueProps
   return (
     <div className="space-y-3">
       <div className="flex justify-end">
-        <button type="button" onClick={() => setEditing({ id: null, initial: spec.blank })} className="rounded bg-accent px-3 py-1.5 text-sm text-white" data-testid="new-item">New {spec.one}</button>
+        <button
+          type="button"
+          onClick={() => setEditing({ id: null, initial: spec.blank })}
+          className="rounded bg-accent px-3 py-1.5 text-sm text-white"
+          data-testid="new-item"
+        >
+          New {spec.one}
+        </button>
       </div>
-      {editing && editing.id === null && <ItemForm kind={kind} id={null} initial={editing.initial} unitSystem={unitSystem} onDone={() => setEditing(null)} />}
+      {editing && editing.id === null && (
+        <ItemForm kind={kind} id={null} initial={editing.initial} unitSystem={unitSystem} onDone={() => setEditing(null)} />
+      )}
       <table className="panel w-full border-separate border-spacing-0 text-sm" data-testid={`workshop-${kind}`}>
         <thead className="text-left text-muted">
           <tr>
             <th className="px-3 py-2">Name</th>
-            {spec.columns.map((c) => <th key={c.path} className="px-3 py-2">{c.label}</th>)}
+            {spec.columns.map((c) => (
+              <th key={c.path} className="px-3 py-2">
+                {c.label}
+              </th>
+            ))}
             <th className="px-3 py-2">Used by</th>
             <th className="px-3 py-2">State</th>
-            <th className="px-3 py-2"><span className="sr-only">Actions</span></th>
+            <th className="px-3 py-2">
+              <span className="sr-only">Actions</span>
+            </th>
           </tr>
         </thead>
         <tbody>
           {rows.map((row) => (
             <tr key={row.id} data-testid="item-row" data-item-id={row.id}>
               <td className={cell}>{row.name}</td>
-              {spec.columns.map((c) => <td key={c.path} className={`${cell} ${c.quantity ? "figure" : ""}`}>{shown(row[c.path], c.quantity, unitSystem)}</td>)}
-              <td className={`${cell} figure`}>{row.setupCount} setup{row.setupCount === 1 ? "" : "s"}</td>
-              <td className={cell}><ActiveBadge active={row.active} /></td>
+              {spec.columns.map((c) => (
+                <td key={c.path} className={`${cell} ${c.quantity ? "figure" : ""}`}>
+                  {shown(row[c.path], c.quantity, unitSystem)}
+                </td>
+              ))}
+              <td className={`${cell} figure`}>
+                {row.setupCount} setup{row.setupCount === 1 ? "" : "s"}
+              </td>
+              <td className={cell}>
+                <ActiveBadge active={row.active} />
+              </td>
               <td className={cell}>
                 <span className="inline-flex flex-wrap gap-2">
-                  <button type="button" onClick={() => setEditing({ id: row.id, initial: valuesOf(row) })} className="rounded border border-accent bg-white px-2 py-0.5 text-sm text-accent-dark" aria-label={`Edit ${row.name}`} data-testid="item-edit">Edit</button>
+                  <button
+                    type="button"
+                    onClick={() => setEditing({ id: row.id, initial: valuesOf(row) })}
+                    className="rounded border border-accent bg-white px-2 py-0.5 text-sm text-accent-dark"
+                    aria-label={`Edit ${row.name}`}
+                    data-testid="item-edit"
+                  >
+                    Edit
+                  </button>
                   <ItemActions kind={kind} id={row.id} name={row.name} active={row.active} setupCount={row.setupCount} />
                 </span>
               </td>
@@ -111,7 +203,16 @@ export function SimpleCatalogue({ kind, rows, unitSystem }: SimpleCatalogueProps
           ))}
         </tbody>
       </table>
-      {editing && editing.id !== null && <ItemForm key={editing.id} kind={kind} id={editing.id} initial={editing.initial} unitSystem={unitSystem} onDone={() => setEditing(null)} />}
+      {editing && editing.id !== null && (
+        <ItemForm
+          key={editing.id}
+          kind={kind}
+          id={editing.id}
+          initial={editing.initial}
+          unitSystem={unitSystem}
+          onDone={() => setEditing(null)}
+        />
+      )}
     </div>
   );
 }

@@ -32,9 +32,19 @@ export function TemplatesCsv() {
   return (
     <div className="panel space-y-2 p-4 text-sm" data-testid="templates-csv">
       <h2 className="font-display text-base font-bold">CSV</h2>
-      <p className="text-muted">Columns: {TEMPLATE_CSV_COLUMNS.join(", ")} (SI units, as the names say). A row with an id updates that template; a row without one adds a template. One bad row and nothing is imported.</p>
+      <p className="text-muted">
+        Columns: {TEMPLATE_CSV_COLUMNS.join(", ")} (SI units, as the names say). A row with an id updates that template; a row without one
+        adds a template. One bad row and nothing is imported.
+      </p>
       <div className="flex flex-wrap items-center gap-3">
-        <a href="/api/catalogue/templates.csv" download className="rounded border border-accent bg-white px-3 py-1.5 text-accent-dark" data-testid="templates-export">Export CSV</a>
+        <a
+          href="/api/catalogue/templates.csv"
+          download
+          className="rounded border border-accent bg-white px-3 py-1.5 text-accent-dark"
+          data-testid="templates-export"
+        >
+          Export CSV
+        </a>
         <label className="rounded border border-hairline bg-white px-3 py-1.5">
           Import CSV…
           <input
@@ -49,14 +59,28 @@ export function TemplatesCsv() {
             }}
           />
         </label>
-        {message && <span role="status" data-testid="templates-import-message">{message}</span>}
+        {message && (
+          <span role="status" data-testid="templates-import-message">
+            {message}
+          </span>
+        )}
       </div>
       {problems.length > 0 && (
         <table className="w-full border-separate border-spacing-0" data-testid="templates-import-problems">
-          <thead className="text-left text-muted"><tr><th className="px-2 py-1">Row</th><th className="px-2 py-1">Column</th><th className="px-2 py-1">Problem</th></tr></thead>
+          <thead className="text-left text-muted">
+            <tr>
+              <th className="px-2 py-1">Row</th>
+              <th className="px-2 py-1">Column</th>
+              <th className="px-2 py-1">Problem</th>
+            </tr>
+          </thead>
           <tbody>
             {problems.map((p, i) => (
-              <tr key={i}><td className="figure border-t border-hairline px-2 py-1">{p.row}</td><td className="border-t border-hairline px-2 py-1">{p.field}</td><td className="border-t border-hairline px-2 py-1">{p.problem}</td></tr>
+              <tr key={i}>
+                <td className="figure border-t border-hairline px-2 py-1">{p.row}</td>
+                <td className="border-t border-hairline px-2 py-1">{p.field}</td>
+                <td className="border-t border-hairline px-2 py-1">{p.problem}</td>
+              </tr>
             ))}
           </tbody>
         </table>

@@ -9,7 +9,11 @@ import type { Tx } from "./setups";
 // (lib/storage), and the core (lib/server/attachments.ts) keeps the two in step.
 
 export async function listAttachmentsForSetup({ setupId }: { setupId: string }): Promise<AttachmentRow[]> {
-  return getDb().select().from(attachments).where(eq(attachments.setupId, setupId)).orderBy(asc(attachments.createdAt), asc(attachments.id));
+  return getDb()
+    .select()
+    .from(attachments)
+    .where(eq(attachments.setupId, setupId))
+    .orderBy(asc(attachments.createdAt), asc(attachments.id));
 }
 
 export async function countAttachmentsForSetup({ setupId }: { setupId: string }): Promise<number> {
@@ -43,10 +47,19 @@ export async function insertAttachment({
       where exists (select 1 from setups where id = ${row.setupId} and owner_id = ${row.uploaderId})
         and (select count(*) from attachments where setup_id = ${row.setupId}) < ${cap}`);
     if (written.rowsAffected === 0) {
-      const [setup] = await tx.select({ id: setups.id }).from(setups).where(and(eq(setups.id, row.setupId), eq(setups.ownerId, row.uploaderId)));
+      const [setup] = await tx
+        .select({ id: setups.id })
+        .from(setups)
+        .where(and(eq(setups.id, row.setupId), eq(setups.ownerId, row.uploaderId)));
       return setup ? { kind: "full" as const } : { kind: "no_setup" as const };
     }
-    await recordAudit(tx, { actorId: row.uploaderId, action: "setup.attachment.add", entityType: "setup", entityId: row.setupId, detail: { fileName: row.fileName } });
+    await recordAudit(tx, {
+      actorId: row.uploaderId,
+      action: "setup.attachment.add",
+      entityType: "setup",
+      entityId: row.setupId,
+      detail: { fileName: row.fileName },
+    });
     const [inserted] = await tx.select().from(attachments).where(eq(attachments.id, row.id));
     return { kind: "inserted" as const, row: inserted };
   });
@@ -61,7 +74,13 @@ export async function deleteAttachment({ id, ownerId }: { id: string; ownerId: s
       .where(and(eq(attachments.id, id), inArray(attachments.setupId, owned)))
       .returning({ setupId: attachments.setupId, fileName: attachments.fileName });
     if (!deleted) return false;
-    await recordAudit(tx, { actorId: ownerId, action: "setup.attachment.delete", entityType: "setup", entityId: deleted.setupId, detail: { fileName: deleted.fileName } });
+    await recordAudit(tx, {
+      actorId: ownerId,
+      action: "setup.attachment.delete",
+      entityType: "setup",
+      entityId: deleted.setupId,
+      detail: { fileName: deleted.fileName },
+    });
     return true;
   });
 }
@@ -72,7 +91,13 @@ export async function deleteAttachment({ id, ownerId }: { id: string; ownerId: s
  * the caller deletes once the transaction has committed.
  */
 export async function deleteAttachmentRowsOfSetup(tx: Tx, { setupId, ownerId }: { setupId: string; ownerId: string }): Promise<string[]> {
-  const owned = tx.select({ id: setups.id }).from(setups).where(and(eq(setups.id, setupId), eq(setups.ownerId, ownerId)));
-  const rows = await tx.delete(attachments).where(and(eq(attachments.setupId, setupId), inArray(attachments.setupId, owned))).returning({ storageKey: attachments.storageKey });
+  const owned = tx
+    .select({ id: setups.id })
+    .from(setups)
+    .where(and(eq(setups.id, setupId), eq(setups.ownerId, ownerId)));
+  const rows = await tx
+    .delete(attachments)
+    .where(and(eq(attachments.setupId, setupId), inArray(attachments.setupId, owned)))
+    .returning({ storageKey: attachments.storageKey });
   return rows.map((r) => r.storageKey);
 }

@@ -8,8 +8,18 @@ import type { Tx } from "./setups";
 export type AuditEntityType = "setup" | "user" | "envelope_model" | "envelope_unit" | "mount" | "adapter" | "payload_template";
 
 /** One line of the audit log, written in the transaction of the change it records. */
-export async function recordAudit(tx: Tx, entry: { actorId: string; action: string; entityType: AuditEntityType; entityId: string; detail?: Record<string, unknown> }): Promise<void> {
-  await tx.insert(auditLog).values({ id: randomUUID(), actorId: entry.actorId, action: entry.action, entityType: entry.entityType, entityId: entry.entityId, detailJson: entry.detail ?? {} });
+export async function recordAudit(
+  tx: Tx,
+  entry: { actorId: string; action: string; entityType: AuditEntityType; entityId: string; detail?: Record<string, unknown> },
+): Promise<void> {
+  await tx.insert(auditLog).values({
+    id: randomUUID(),
+    actorId: entry.actorId,
+    action: entry.action,
+    entityType: entry.entityType,
+    entityId: entry.entityId,
+    detailJson: entry.detail ?? {},
+  });
 }
 
 export interface HistoryEntry {

@@ -21,16 +21,24 @@ export type CalibratedUnit = EnvelopeUnitRow & {
 
 async function latestTestsByUnit(unitIds: readonly string[]): Promise<Map<string, UnitLiftTestRow>> {
   if (unitIds.length === 0) return new Map();
-  const rows = await getDb().select().from(unitLiftTests).where(inArray(unitLiftTests.unitId, [...unitIds]));
+  const rows = await getDb()
+    .select()
+    .from(unitLiftTests)
+    .where(inArray(unitLiftTests.unitId, [...unitIds]));
   const byUnit = new Map<string, UnitLiftTestRow[]>();
   for (const row of rows) byUnit.set(row.unitId, [...(byUnit.get(row.unitId) ?? []), row]);
-  return new Map([...byUnit].flatMap(([unitId, tests]) => {
-    const latest = latestLiftTest(tests);
-    return latest ? [[unitId, latest] as const] : [];
-  }));
+  return new Map(
+    [...byUnit].flatMap(([unitId, tests]) => {
+      const latest = latestLiftTest(tests);
+      return latest ? [[unitId, latest] as const] : [];
+    }),
+  );
 }
 
-async function calibrate(units: readonly EnvelopeUnitRow[], volumeOfModel: (modelId: string) => number | undefined): Promise<CalibratedUnit[]> {
+async function calibrate(
+  units: readonly EnvelopeUnitRow[],
+  volumeOfModel: (modelId: string) => number | undefined,
+): Promise<CalibratedUnit[]> {
   const latest = await latestTestsByUnit(units.map((u) => u.id));
   return units.map((unit) => {
     const test = latest.get(unit.id) ?? null;
@@ -81,14 +89,26 @@ export function catalogueIdsOfDraft(draft: SetupDraft): Required<CatalogueInclud
 export async function getPlannerCatalogue({ ownerId, includeIds = {} }: { ownerId: string; includeIds?: CatalogueIncludes }) {
   const db = getDb();
   const [models, unitRows, mountRows, adapterRows, templates] = await Promise.all([
-    db.select().from(envelopeModels).where(activeOr(envelopeModels.active, envelopeModels.id, includeIds.modelIds)).orderBy(asc(envelopeModels.gasVolumeM3)),
+    db
+      .select()
+      .from(envelopeModels)
+      .where(activeOr(envelopeModels.active, envelopeModels.id, includeIds.modelIds))
+      .orderBy(asc(envelopeModels.gasVolumeM3)),
     db
       .select()
       .from(envelopeUnits)
       .where(and(eq(envelopeUnits.ownerId, ownerId), activeOr(envelopeUnits.active, envelopeUnits.id, includeIds.unitIds)))
       .orderBy(asc(envelopeUnits.serial)),
-    db.select().from(mounts).where(activeOr(mounts.active, mounts.id, includeIds.mountIds)).orderBy(asc(mounts.name)),
-    db.select().from(adapters).where(activeOr(adapters.active, adapters.id, includeIds.adapterIds)).orderBy(asc(adapters.name)),
+    db
+      .select()
+      .from(mounts)
+      .where(activeOr(mounts.active, mounts.id, includeIds.mountIds))
+      .orderBy(asc(mounts.name)),
+    db
+      .select()
+      .from(adapters)
+      .where(activeOr(adapters.active, adapters.id, includeIds.adapterIds))
+      .orderBy(asc(adapters.name)),
     db
       .select()
       .from(payloadTemplates)
@@ -98,7 +118,11 @@ export async function getPlannerCatalogue({ ownerId, includeIds = {} }: { ownerI
   const volumes = new Map(models.map((m) => [m.id, m.gasVolumeM3]));
   const missingModels = [...new Set(unitRows.map((u) => u.modelId).filter((id) => !volumes.has(id)))];
   if (missingModels.length) {
-    for (const m of await db.select({ id: envelopeModels.id, v: envelopeModels.gasVolumeM3 }).from(envelopeModels).where(inArray(envelopeModels.id, missingModels))) volumes.set(m.id, m.v);
+    for (const m of await db
+      .select({ id: envelopeModels.id, v: envelopeModels.gasVolumeM3 })
+      .from(envelopeModels)
+      .where(inArray(envelopeModels.id, missingModels)))
+      volumes.set(m.id, m.v);
   }
   const units = await calibrate(unitRows, (id) => volumes.get(id));
   return { models, units, mounts: mountRows, adapters: adapterRows, templates };
@@ -123,7 +147,10 @@ export async function getCatalogueForDraft({ draft, ownerId }: { draft: SetupDra
     db.select().from(mounts).where(eq(mounts.id, draft.mountId)),
     adapterIds.length ? db.select().from(adapters).where(inArray(adapters.id, adapterIds)) : Promise.resolve([]),
     templateIds.length
-      ? db.select({ id: payloadTemplates.id, active: payloadTemplates.active }).from(payloadTemplates).where(inArray(payloadTemplates.id, templateIds))
+      ? db
+          .select({ id: payloadTemplates.id, active: payloadTemplates.active })
+          .from(payloadTemplates)
+          .where(inArray(payloadTemplates.id, templateIds))
       : Promise.resolve([]),
   ]);
   const [unit] = model ? await calibrate(unitRows, (id) => (id === model.id ? model.gasVolumeM3 : undefined)) : [];
@@ -184,7 +211,12 @@ export async function listModelsPage({ page, pageSize }: { page: number; pageSiz
     .orderBy(asc(envelopeModels.name), asc(envelopeModels.id))
     .limit(pageSize)
     .offset(offsetOf(page, pageSize));
-  return { rows: rows.map((r) => ({ ...r.model, setupCount: Number(r.setupCount) })), total: await totalOf(envelopeModels), page, pageSize };
+  return {
+    rows: rows.map((r) => ({ ...r.model, setupCount: Number(r.setupCount) })),
+    total: await totalOf(envelopeModels),
+    page,
+    pageSize,
+  };
 }
 
 export async function getModelById({ id }: { id: string }) {
@@ -205,7 +237,14 @@ export async function listModelChoices() {
 
 export async function listUnitsPage({ page, pageSize }: { page: number; pageSize: number }) {
   const rows = await getDb()
-    .select({ unit: envelopeUnits, modelName: envelopeModels.name, modelVolumeM3: envelopeModels.gasVolumeM3, ownerEmail: user.email, ownerName: user.name, setupCount: setupCountSql("units") })
+    .select({
+      unit: envelopeUnits,
+      modelName: envelopeModels.name,
+      modelVolumeM3: envelopeModels.gasVolumeM3,
+      ownerEmail: user.email,
+      ownerName: user.name,
+      setupCount: setupCountSql("units"),
+    })
     .from(envelopeUnits)
     .innerJoin(envelopeModels, eq(envelopeUnits.modelId, envelopeModels.id))
     .leftJoin(user, eq(envelopeUnits.ownerId, user.id))
@@ -213,9 +252,18 @@ export async function listUnitsPage({ page, pageSize }: { page: number; pageSize
     .limit(pageSize)
     .offset(offsetOf(page, pageSize));
   const volumes = new Map(rows.map((r) => [r.unit.modelId, r.modelVolumeM3]));
-  const calibrated = await calibrate(rows.map((r) => r.unit), (id) => volumes.get(id));
+  const calibrated = await calibrate(
+    rows.map((r) => r.unit),
+    (id) => volumes.get(id),
+  );
   return {
-    rows: calibrated.map((unit, i) => ({ ...unit, modelName: rows[i].modelName, ownerEmail: rows[i].ownerEmail, ownerName: rows[i].ownerName, setupCount: Number(rows[i].setupCount) })),
+    rows: calibrated.map((unit, i) => ({
+      ...unit,
+      modelName: rows[i].modelName,
+      ownerEmail: rows[i].ownerEmail,
+      ownerName: rows[i].ownerName,
+      setupCount: Number(rows[i].setupCount),
+    })),
     total: await totalOf(envelopeUnits),
     page,
     pageSize,
@@ -226,13 +274,23 @@ export async function listUnitsPage({ page, pageSize }: { page: number; pageSize
 export async function getUnitById({ id }: { id: string }) {
   const db = getDb();
   const [row] = await db
-    .select({ unit: envelopeUnits, model: envelopeModels, ownerEmail: user.email, ownerName: user.name, setupCount: setupCountSql("units") })
+    .select({
+      unit: envelopeUnits,
+      model: envelopeModels,
+      ownerEmail: user.email,
+      ownerName: user.name,
+      setupCount: setupCountSql("units"),
+    })
     .from(envelopeUnits)
     .innerJoin(envelopeModels, eq(envelopeUnits.modelId, envelopeModels.id))
     .leftJoin(user, eq(envelopeUnits.ownerId, user.id))
     .where(eq(envelopeUnits.id, id));
   if (!row) return null;
-  const tests = await db.select().from(unitLiftTests).where(eq(unitLiftTests.unitId, id)).orderBy(desc(unitLiftTests.testedOn), desc(unitLiftTests.createdAt));
+  const tests = await db
+    .select()
+    .from(unitLiftTests)
+    .where(eq(unitLiftTests.unitId, id))
+    .orderBy(desc(unitLiftTests.testedOn), desc(unitLiftTests.createdAt));
   const latest = latestLiftTest(tests);
   return {
     ...row.unit,
@@ -251,7 +309,15 @@ const SIMPLE_TABLES = { mounts, adapters, templates: payloadTemplates } as const
 type SimpleRow<K extends Simple> = K extends "mounts" ? MountRow : K extends "adapters" ? AdapterRow : PayloadTemplateRow;
 
 /** Mounts, adapters or templates by name, a page at a time, with how many setups use each. */
-export async function listSimplePage<K extends Simple>({ kind, page, pageSize }: { kind: K; page: number; pageSize: number }): Promise<Page<SimpleRow<K> & { setupCount: number }>> {
+export async function listSimplePage<K extends Simple>({
+  kind,
+  page,
+  pageSize,
+}: {
+  kind: K;
+  page: number;
+  pageSize: number;
+}): Promise<Page<SimpleRow<K> & { setupCount: number }>> {
   const table = SIMPLE_TABLES[kind];
   const rows = await getDb()
     .select({ item: table, setupCount: setupCountSql(kind) })
@@ -259,12 +325,26 @@ export async function listSimplePage<K extends Simple>({ kind, page, pageSize }:
     .orderBy(asc(table.name), asc(table.id))
     .limit(pageSize)
     .offset(offsetOf(page, pageSize));
-  return { rows: rows.map((r) => ({ ...(r.item as SimpleRow<K>), setupCount: Number(r.setupCount) })), total: await totalOf(table), page, pageSize };
+  return {
+    rows: rows.map((r) => ({ ...(r.item as SimpleRow<K>), setupCount: Number(r.setupCount) })),
+    total: await totalOf(table),
+    page,
+    pageSize,
+  };
 }
 
-export async function getSimpleById<K extends Simple>({ kind, id }: { kind: K; id: string }): Promise<(SimpleRow<K> & { setupCount: number }) | null> {
+export async function getSimpleById<K extends Simple>({
+  kind,
+  id,
+}: {
+  kind: K;
+  id: string;
+}): Promise<(SimpleRow<K> & { setupCount: number }) | null> {
   const table = SIMPLE_TABLES[kind];
-  const [row] = await getDb().select({ item: table, setupCount: setupCountSql(kind) }).from(table).where(eq(table.id, id));
+  const [row] = await getDb()
+    .select({ item: table, setupCount: setupCountSql(kind) })
+    .from(table)
+    .where(eq(table.id, id));
   return row ? { ...(row.item as SimpleRow<K>), setupCount: Number(row.setupCount) } : null;
 }
 

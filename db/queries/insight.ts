@@ -40,7 +40,12 @@ export async function payloadMassHistogram(filter: InsightFilter) {
     .where(where(filter))
     .groupBy(bin, setupPayloads.category)
     .orderBy(asc(bin), asc(setupPayloads.category));
-  return rows.map((r) => ({ binStartKg: r.bin * PAYLOAD_BIN_KG, binEndKg: (r.bin + 1) * PAYLOAD_BIN_KG, category: r.category as PayloadCategory, count: r.count }));
+  return rows.map((r) => ({
+    binStartKg: r.bin * PAYLOAD_BIN_KG,
+    binEndKg: (r.bin + 1) * PAYLOAD_BIN_KG,
+    category: r.category as PayloadCategory,
+    count: r.count,
+  }));
 }
 
 export async function setupPayloadMassHistogram(filter: InsightFilter) {
@@ -101,7 +106,12 @@ export async function flagCounts(filter: InsightFilter) {
 
 export async function setupsPerMonth(filter: InsightFilter) {
   const month = sql<string>`strftime('%Y-%m', ${setups.createdAt} / 1000, 'unixepoch')`;
-  const rows = await getDb().select({ month, status: setups.status, count: count() }).from(setups).where(where(filter)).groupBy(month, setups.status).orderBy(asc(month), asc(setups.status));
+  const rows = await getDb()
+    .select({ month, status: setups.status, count: count() })
+    .from(setups)
+    .where(where(filter))
+    .groupBy(month, setups.status)
+    .orderBy(asc(month), asc(setups.status));
   return rows.map((r) => ({ month: r.month, status: r.status as SetupStatus, count: r.count }));
 }
 

@@ -21,7 +21,15 @@ export async function enqueueMail(writer: Writer, messages: readonly OutgoingMai
   if (messages.length === 0) return;
   const now = new Date();
   await writer.insert(mailOutbox).values(
-    messages.map((m) => ({ id: randomUUID(), kind: m.kind, toAddress: m.to, subject: m.content.subject, textBody: m.content.text, htmlBody: m.content.html, nextAttemptAt: now })),
+    messages.map((m) => ({
+      id: randomUUID(),
+      kind: m.kind,
+      toAddress: m.to,
+      subject: m.content.subject,
+      textBody: m.content.text,
+      htmlBody: m.content.html,
+      nextAttemptAt: now,
+    })),
   );
 }
 
@@ -62,8 +70,22 @@ const heldClaim = (id: string, attempts: number) =>
   and(eq(mailOutbox.id, id), eq(mailOutbox.status, "pending"), eq(mailOutbox.attempts, attempts));
 
 /** Marks a claimed row sent. False when the claim was lost (then someone else settles it). */
-export async function markMailSent({ id, attempts, sentAt, db = getDb() }: { id: string; attempts: number; sentAt: Date; db?: Database }): Promise<boolean> {
-  const rows = await db.update(mailOutbox).set({ status: "sent", sentAt, lastError: null }).where(heldClaim(id, attempts)).returning({ id: mailOutbox.id });
+export async function markMailSent({
+  id,
+  attempts,
+  sentAt,
+  db = getDb(),
+}: {
+  id: string;
+  attempts: number;
+  sentAt: Date;
+  db?: Database;
+}): Promise<boolean> {
+  const rows = await db
+    .update(mailOutbox)
+    .set({ status: "sent", sentAt, lastError: null })
+    .where(heldClaim(id, attempts))
+    .returning({ id: mailOutbox.id });
   return rows.length > 0;
 }
 

@@ -44,19 +44,26 @@ const headerColumns = {
  * A setup's header as this viewer may see it, or null: the owner always; review staff once it has
  * been submitted (a customer's unsubmitted drafts stay theirs).
  */
-export async function getSetupHeaderForViewer({ id, viewer }: { id: string; viewer: { id: string; role: Role } }): Promise<SetupHeader | null> {
+export async function getSetupHeaderForViewer({
+  id,
+  viewer,
+}: {
+  id: string;
+  viewer: { id: string; role: Role };
+}): Promise<SetupHeader | null> {
   const staff = viewer.role === "support" || viewer.role === "maker";
   const [row] = await getDb()
     .select(headerColumns)
     .from(setups)
     .innerJoin(user, eq(setups.ownerId, user.id))
     .innerJoin(envelopeModels, eq(setups.modelId, envelopeModels.id))
-    .where(and(eq(setups.id, id), staff ? or(eq(setups.ownerId, viewer.id), isNotNull(setups.submittedAt)) : eq(setups.ownerId, viewer.id)));
+    .where(
+      and(eq(setups.id, id), staff ? or(eq(setups.ownerId, viewer.id), isNotNull(setups.submittedAt)) : eq(setups.ownerId, viewer.id)),
+    );
   return row ?? null;
 }
 
 // ---------------------------------------------------------------- the queue
-
 
 export interface QueueFilter {
   /** null: every setup that has been submitted at some time. */
@@ -87,7 +94,12 @@ export async function listQueue(filter: QueueFilter): Promise<{ rows: QueueRow[]
   }
   const where = and(...conditions);
   // "waiting" longest first is submittedAt oldest first: one index serves both.
-  const column = { submittedAt: setups.submittedAt, waiting: setups.submittedAt, freeLiftRatio: setups.freeLiftRatio, payloadMassKg: setups.payloadMassKg }[filter.sort];
+  const column = {
+    submittedAt: setups.submittedAt,
+    waiting: setups.submittedAt,
+    freeLiftRatio: setups.freeLiftRatio,
+    payloadMassKg: setups.payloadMassKg,
+  }[filter.sort];
   const ascending = filter.sort === "waiting" ? filter.dir === "desc" : filter.dir === "asc";
   const db = getDb();
   const [rows, [{ total }]] = await Promise.all([
@@ -140,12 +152,34 @@ export async function recordDecision({
       .innerJoin(envelopeModels, eq(setups.modelId, envelopeModels.id))
       .where(and(eq(setups.id, id), isNotNull(setups.submittedAt)));
     if (!header) return { kind: "not_found" };
-    const verdict = nextStatus({ action: decision === "approved" ? "approve" : "request_changes", from: header.status, isOwner: header.ownerId === reviewer.id, role: reviewer.role });
+    const verdict = nextStatus({
+      action: decision === "approved" ? "approve" : "request_changes",
+      from: header.status,
+      isOwner: header.ownerId === reviewer.id,
+      role: reviewer.role,
+    });
     if (!verdict.ok) return { kind: "refused", message: verdict.message, reason: verdict.reason };
     if (header.version !== version) return { kind: "stale", currentVersion: header.version };
-    await tx.update(setups).set({ status: verdict.to }).where(and(eq(setups.id, id), eq(setups.version, version)));
-    await tx.insert(decisions).values({ id: randomUUID(), setupId: id, reviewerId: reviewer.id, outcome: decision, setupVersion: version, reasonsJson: reasonCodes, note: reason });
-    await recordAudit(tx, { actorId: reviewer.id, action: "setup.decision", entityType: "setup", entityId: id, detail: { version, from: header.status, to: verdict.to, decision, reason } });
+    await tx
+      .update(setups)
+      .set({ status: verdict.to })
+      .where(and(eq(setups.id, id), eq(setups.version, version)));
+    await tx.insert(decisions).values({
+      id: randomUUID(),
+      setupId: id,
+      reviewerId: reviewer.id,
+      outcome: decision,
+      setupVersion: version,
+      reasonsJson: reasonCodes,
+      note: reason,
+    });
+    await recordAudit(tx, {
+      actorId: reviewer.id,
+      action: "setup.decision",
+      entityType: "setup",
+      entityId: id,
+      detail: { version, from: header.status, to: verdict.to, decision, reason },
+    });
     await enqueueMail(tx, mail({ ...header, status: verdict.to }));
     return { kind: "decided", status: verdict.to };
   });
@@ -170,12 +204,28 @@ export async function listThread({ setupId }: { setupId: string }): Promise<Thre
   const db = getDb();
   const [commentRows, decisionRows] = await Promise.all([
     db
-      .select({ id: comments.id, at: comments.createdAt, authorId: comments.authorId, authorName: user.name, authorRole: user.role, body: comments.body })
+      .select({
+        id: comments.id,
+        at: comments.createdAt,
+        authorId: comments.authorId,
+        authorName: user.name,
+        authorRole: user.role,
+        body: comments.body,
+      })
       .from(comments)
       .innerJoin(user, eq(comments.authorId, user.id))
       .where(eq(comments.setupId, setupId)),
     db
-      .select({ id: decisions.id, at: decisions.createdAt, authorId: decisions.reviewerId, authorName: user.name, authorRole: user.role, body: decisions.note, decision: decisions.outcome, setupVersion: decisions.setupVersion })
+      .select({
+        id: decisions.id,
+        at: decisions.createdAt,
+        authorId: decisions.reviewerId,
+        authorName: user.name,
+        authorRole: user.role,
+        body: decisions.note,
+        decision: decisions.outcome,
+        setupVersion: decisions.setupVersion,
+      })
       .from(decisions)
       .innerJoin(user, eq(decisions.reviewerId, user.id))
       .where(eq(decisions.setupId, setupId)),
@@ -187,7 +237,17 @@ export async function listThread({ setupId }: { setupId: string }): Promise<Thre
 }
 
 /** Adds a comment and the mail it causes, in one transaction; returns the new comment's id. */
-export async function addComment({ setupId, authorId, body, mail }: { setupId: string; authorId: string; body: string; mail: (participants: { id: string; email: string; role: Role }[]) => OutgoingMail[] }): Promise<string> {
+export async function addComment({
+  setupId,
+  authorId,
+  body,
+  mail,
+}: {
+  setupId: string;
+  authorId: string;
+  body: string;
+  mail: (participants: { id: string; email: string; role: Role }[]) => OutgoingMail[];
+}): Promise<string> {
   return getDb().transaction(async (tx) => {
     const id = randomUUID();
     await tx.insert(comments).values({ id, setupId, authorId, body });
@@ -221,7 +281,13 @@ export async function countUnreadComments({ setupIds, userId }: { setupIds: stri
     .select({ setupId: comments.setupId, unread: count() })
     .from(comments)
     .leftJoin(setupReads, and(eq(setupReads.setupId, comments.setupId), eq(setupReads.userId, userId)))
-    .where(and(inArray(comments.setupId, setupIds), sql`${comments.authorId} <> ${userId}`, or(sql`${setupReads.lastReadAt} is null`, sql`${comments.createdAt} > ${setupReads.lastReadAt}`)))
+    .where(
+      and(
+        inArray(comments.setupId, setupIds),
+        sql`${comments.authorId} <> ${userId}`,
+        or(sql`${setupReads.lastReadAt} is null`, sql`${comments.createdAt} > ${setupReads.lastReadAt}`),
+      ),
+    )
     .groupBy(comments.setupId);
   return Object.fromEntries(rows.map((r) => [r.setupId, r.unread]));
 }

@@ -45,7 +45,15 @@ function selectSetupList() {
 }
 
 /** One page of a person's setups, most recently changed first, and how many they have in all. */
-export async function listSetupsForOwner({ ownerId, page = 1, pageSize = 25 }: { ownerId: string; page?: number; pageSize?: number }): Promise<{ rows: SetupListItem[]; total: number }> {
+export async function listSetupsForOwner({
+  ownerId,
+  page = 1,
+  pageSize = 25,
+}: {
+  ownerId: string;
+  page?: number;
+  pageSize?: number;
+}): Promise<{ rows: SetupListItem[]; total: number }> {
   const [rows, [{ total }]] = await Promise.all([
     selectSetupList()
       .where(eq(setups.ownerId, ownerId))
@@ -68,14 +76,21 @@ export interface StoredSetup {
 export async function getSetupById({ id, ownerId }: { id: string; ownerId: string | null }): Promise<StoredSetup | null> {
   const db = getDb();
   const where = ownerId === null ? eq(setups.id, id) : and(eq(setups.id, id), eq(setups.ownerId, ownerId));
-  const [found] = await db.select({ row: setups, result: setupResults.resultJson }).from(setups).leftJoin(setupResults, eq(setupResults.setupId, setups.id)).where(where);
+  const [found] = await db
+    .select({ row: setups, result: setupResults.resultJson })
+    .from(setups)
+    .leftJoin(setupResults, eq(setupResults.setupId, setups.id))
+    .where(where);
   if (!found) return null;
   const payloadRows = await db.select().from(setupPayloads).where(eq(setupPayloads.setupId, id));
   return { row: found.row, draft: draftFromRows(found.row, payloadRows), result: found.result ?? null };
 }
 
 export async function ownsSetup({ id, ownerId }: { id: string; ownerId: string }): Promise<boolean> {
-  const [row] = await getDb().select({ id: setups.id }).from(setups).where(and(eq(setups.id, id), eq(setups.ownerId, ownerId)));
+  const [row] = await getDb()
+    .select({ id: setups.id })
+    .from(setups)
+    .where(and(eq(setups.id, id), eq(setups.ownerId, ownerId)));
   return row !== undefined;
 }
 
@@ -89,7 +104,10 @@ export interface Evaluated {
 /** The stored result and its flag rows, replaced together. */
 async function replaceResult(tx: Tx, setupId: string, result: BalanceResult): Promise<void> {
   const rows = resultRows(setupId, result);
-  await tx.insert(setupResults).values(rows.result).onConflictDoUpdate({ target: setupResults.setupId, set: { resultJson: rows.result.resultJson } });
+  await tx
+    .insert(setupResults)
+    .values(rows.result)
+    .onConflictDoUpdate({ target: setupResults.setupId, set: { resultJson: rows.result.resultJson } });
   await tx.delete(setupFlags).where(eq(setupFlags.setupId, setupId));
   if (rows.flags.length) await tx.insert(setupFlags).values(rows.flags);
 }
@@ -112,10 +130,26 @@ async function readOwnedVersion(tx: Tx, id: string, ownerId: string): Promise<{ 
   return row ?? null;
 }
 
-export async function createSetup({ ownerId, draft, evaluated }: { ownerId: string; draft: SetupDraft; evaluated: Evaluated }): Promise<string> {
+export async function createSetup({
+  ownerId,
+  draft,
+  evaluated,
+}: {
+  ownerId: string;
+  draft: SetupDraft;
+  evaluated: Evaluated;
+}): Promise<string> {
   const id = randomUUID();
   await getDb().transaction(async (tx) => {
-    await tx.insert(setups).values({ id, ownerId, ...columnsFromDraft(draft), ...summaryColumns(draft, evaluated.result), status: "draft", version: 1, worstFlag: evaluated.worstFlag });
+    await tx.insert(setups).values({
+      id,
+      ownerId,
+      ...columnsFromDraft(draft),
+      ...summaryColumns(draft, evaluated.result),
+      status: "draft",
+      version: 1,
+      worstFlag: evaluated.worstFlag,
+    });
     await replaceResult(tx, id, evaluated.result);
     await replacePayloads(tx, id, draft);
     await audit(tx, ownerId, "setup.create", id);
@@ -123,7 +157,8 @@ export async function createSetup({ ownerId, draft, evaluated }: { ownerId: stri
   return id;
 }
 
-export type SaveOutcome = { kind: "saved"; version: number; status: SetupStatus } | { kind: "not_found" } | { kind: "conflict"; currentVersion: number };
+export type SaveOutcome =
+  { kind: "saved"; version: number; status: SetupStatus } | { kind: "not_found" } | { kind: "conflict"; currentVersion: number };
 
 /**
  * Writes a setup only if nobody saved since `expectedVersion` was read (optimistic concurrency).
@@ -209,10 +244,23 @@ export async function markSetupSubmitted({
       .where(eq(setups.id, id))
       .returning({ name: setups.name, modelId: setups.modelId, payloadMassKg: setups.payloadMassKg });
     await replaceResult(tx, id, evaluated.result);
-    await audit(tx, owner.id, "setup.submit", id, { version: expectedVersion + 1, from: current.status, to: verdict.to, worstFlag: evaluated.worstFlag });
+    await audit(tx, owner.id, "setup.submit", id, {
+      version: expectedVersion + 1,
+      from: current.status,
+      to: verdict.to,
+      worstFlag: evaluated.worstFlag,
+    });
     const [model] = await tx.select({ name: envelopeModels.name }).from(envelopeModels).where(eq(envelopeModels.id, updated.modelId));
     const reviewers = await tx.select({ email: user.email }).from(user).where(eq(user.role, "support"));
-    await enqueueMail(tx, mail({ setupName: updated.name, modelName: model?.name ?? "", payloadMassKg: updated.payloadMassKg, reviewerAddresses: reviewers.map((r) => r.email) }));
+    await enqueueMail(
+      tx,
+      mail({
+        setupName: updated.name,
+        modelName: model?.name ?? "",
+        payloadMassKg: updated.payloadMassKg,
+        reviewerAddresses: reviewers.map((r) => r.email),
+      }),
+    );
     return { kind: "submitted", version: expectedVersion + 1 };
   });
 }

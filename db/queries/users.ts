@@ -21,7 +21,13 @@ export async function listUsers(): Promise<UserListItem[]> {
 }
 
 /** A page of accounts by role then name, for the Workshop's people list. */
-export async function listUsersPage({ page, pageSize }: { page: number; pageSize: number }): Promise<{ rows: UserListItem[]; total: number; page: number; pageSize: number }> {
+export async function listUsersPage({
+  page,
+  pageSize,
+}: {
+  page: number;
+  pageSize: number;
+}): Promise<{ rows: UserListItem[]; total: number; page: number; pageSize: number }> {
   const db = getDb();
   const [rows, [totals]] = await Promise.all([
     db

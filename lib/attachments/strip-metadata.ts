@@ -101,7 +101,28 @@ function stripJpeg(bytes: Uint8Array): Uint8Array | null {
 
 const PNG_SIGNATURE = [0x89, 0x50, 0x4e, 0x47, 0x0d, 0x0a, 0x1a, 0x0a];
 /** Critical chunks, the ones that change how the picture looks, and APNG's frames. Text (tEXt, zTXt, iTXt), eXIf and tIME go. */
-const PNG_KEPT = new Set(["IHDR", "PLTE", "IDAT", "IEND", "tRNS", "cHRM", "gAMA", "iCCP", "sBIT", "sRGB", "cICP", "mDCV", "cLLI", "bKGD", "hIST", "pHYs", "sPLT", "acTL", "fcTL", "fdAT"]);
+const PNG_KEPT = new Set([
+  "IHDR",
+  "PLTE",
+  "IDAT",
+  "IEND",
+  "tRNS",
+  "cHRM",
+  "gAMA",
+  "iCCP",
+  "sBIT",
+  "sRGB",
+  "cICP",
+  "mDCV",
+  "cLLI",
+  "bKGD",
+  "hIST",
+  "pHYs",
+  "sPLT",
+  "acTL",
+  "fcTL",
+  "fdAT",
+]);
 
 function stripPng(bytes: Uint8Array): Uint8Array | null {
   if (!PNG_SIGNATURE.every((b, i) => bytes[i] === b)) return null;

@@ -27,8 +27,7 @@ export const ISA_LAPSE_RATE_K_PER_M = -0.0065;
 /** Earth radius used by ISO 2533 for the geopotential conversion. */
 export const ISA_EARTH_RADIUS_M = 6_356_766;
 /** The barometric exponent g0 / (R·|L|) ≈ 5.25588. */
-const PRESSURE_EXPONENT = STANDARD_GRAVITY_MS2 /
-  (SPECIFIC_GAS_CONSTANT_AIR_J_PER_KG_K * -ISA_LAPSE_RATE_K_PER_M);
+const PRESSURE_EXPONENT = STANDARD_GRAVITY_MS2 / (SPECIFIC_GAS_CONSTANT_AIR_J_PER_KG_K * -ISA_LAPSE_RATE_K_PER_M);
 
 /** Specific gas constant of water vapour, J/(kg·K) (R* / 18.015 g/mol; WMO-No. 8). */
 export const SPECIFIC_GAS_CONSTANT_WATER_VAPOUR_J_PER_KG_K = 461.5;
@@ -60,15 +59,16 @@ export function saturationVapourPressurePa(temperatureC: number): number {
 export function moistAirDensityKgM3(pressurePa: number, temperatureK: number, relativeHumidity: number): number {
   if (!(relativeHumidity > 0)) return airDensityKgM3(pressurePa, temperatureK);
   const vapourPa = Math.min(pressurePa, relativeHumidity * saturationVapourPressurePa(kelvinToCelsius(temperatureK)));
-  return (pressurePa - vapourPa) / (SPECIFIC_GAS_CONSTANT_AIR_J_PER_KG_K * temperatureK) +
-    vapourPa / (SPECIFIC_GAS_CONSTANT_WATER_VAPOUR_J_PER_KG_K * temperatureK);
+  return (
+    (pressurePa - vapourPa) / (SPECIFIC_GAS_CONSTANT_AIR_J_PER_KG_K * temperatureK) +
+    vapourPa / (SPECIFIC_GAS_CONSTANT_WATER_VAPOUR_J_PER_KG_K * temperatureK)
+  );
 }
 
 /** ISA at a geopotential altitude (−5 km to 11 km). */
 export function isaAtGeopotentialM(geopotentialAltitudeM: number): AirState {
   const temperatureK = ISA_SEA_LEVEL_TEMPERATURE_K + ISA_LAPSE_RATE_K_PER_M * geopotentialAltitudeM;
-  const pressurePa = ISA_SEA_LEVEL_PRESSURE_PA *
-    Math.pow(temperatureK / ISA_SEA_LEVEL_TEMPERATURE_K, PRESSURE_EXPONENT);
+  const pressurePa = ISA_SEA_LEVEL_PRESSURE_PA * Math.pow(temperatureK / ISA_SEA_LEVEL_TEMPERATURE_K, PRESSURE_EXPONENT);
   return { temperatureK, pressurePa, densityKgM3: airDensityKgM3(pressurePa, temperatureK) };
 }
 
@@ -91,9 +91,7 @@ export interface SiteAirInput {
  */
 export function siteAir(site: SiteAirInput | undefined): AirState {
   const isa = isaAtGeometricM(site?.altitudeM ?? 0);
-  const temperatureK = site?.temperatureC === undefined
-    ? isa.temperatureK
-    : celsiusToKelvin(site.temperatureC);
+  const temperatureK = site?.temperatureC === undefined ? isa.temperatureK : celsiusToKelvin(site.temperatureC);
   const pressurePa = site?.pressurePa ?? isa.pressurePa;
   return { temperatureK, pressurePa, densityKgM3: moistAirDensityKgM3(pressurePa, temperatureK, site?.relativeHumidity ?? 0) };
 }

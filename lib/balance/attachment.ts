@@ -20,9 +20,7 @@ export function tensileStressAreaSquareInches(majorDiameterIn: number, threadsPe
 
 export function threadStressAreaM2(thread: Thread): number {
   const spec = THREAD_SPECS[thread];
-  return squareInchesToSquareMetres(
-    tensileStressAreaSquareInches(spec.majorDiameterIn, spec.threadsPerInch),
-  );
+  return squareInchesToSquareMetres(tensileStressAreaSquareInches(spec.majorDiameterIn, spec.threadsPerInch));
 }
 
 /** Proof load = stress area × proof strength, N. */
@@ -47,19 +45,17 @@ interface Screw {
   readonly payloads: PayloadRef[];
 }
 
-export function attachmentFlags(
-  input: DeepReadonly<BalanceInput>,
-  hangingMassKg: number,
-  limits: Limits,
-  out: Flag[],
-): void {
+export function attachmentFlags(input: DeepReadonly<BalanceInput>, hangingMassKg: number, limits: Limits, out: Flag[]): void {
   const { mount, payloads } = input;
   const proofPa = limits.screwProofStrengthPa;
   const mountCapacityN = threadProofLoadN(mount.thread, proofPa);
   // Utilisation of the most loaded screw: the mount's carries everything that hangs from it.
   let worst: Screw = {
     use: (hangingMassKg * STANDARD_GRAVITY_MS2 * limits.loadFactor) / mountCapacityN,
-    capacityN: mountCapacityN, screw: "mount", thread: mount.thread, payloads: [],
+    capacityN: mountCapacityN,
+    screw: "mount",
+    thread: mount.thread,
+    payloads: [],
   };
   // One flag per distinct finding: identical payloads share theirs.
   const findings = findingsByPayload<ThreadFinding>();
@@ -72,19 +68,27 @@ export function attachmentFlags(
     const adapter = payload.adapter;
     const needsAdapter = attachment !== mount.thread;
     if (adapter) {
-      const bridges = (adapter.from === attachment && adapter.to === mount.thread) ||
-        (adapter.to === attachment && adapter.from === mount.thread);
+      const bridges =
+        (adapter.from === attachment && adapter.to === mount.thread) || (adapter.to === attachment && adapter.from === mount.thread);
       if (!bridges) {
-        findings.add(`adapter|${attachment}|${adapter.from}|${adapter.to}`, ref,
-          { code: "adapter-mismatch", adapterFrom: adapter.from, adapterTo: adapter.to, payloadThread: attachment });
+        findings.add(`adapter|${attachment}|${adapter.from}|${adapter.to}`, ref, {
+          code: "adapter-mismatch",
+          adapterFrom: adapter.from,
+          adapterTo: adapter.to,
+          payloadThread: attachment,
+        });
         continue;
       }
     } else if (needsAdapter) {
       findings.add(`stop|${attachment}`, ref, { code: "thread-mismatch", level: "stop", payloadThread: attachment, viaAdapter: false });
       continue;
     }
-    findings.add(`ok|${attachment}|${adapter ? "adapter" : ""}`, ref,
-      { code: "thread-mismatch", level: "ok", payloadThread: attachment, viaAdapter: adapter !== undefined });
+    findings.add(`ok|${attachment}|${adapter ? "adapter" : ""}`, ref, {
+      code: "thread-mismatch",
+      level: "ok",
+      payloadThread: attachment,
+      viaAdapter: adapter !== undefined,
+    });
     // A bridging adapter joins two threads (a strap plate never reaches here: strap payloads skip).
     const viaAdapter = adapter !== undefined && adapter.from !== "strap";
     const thread = viaAdapter ? weakerThread(adapter.from as Thread, adapter.to) : attachment;
@@ -98,17 +102,24 @@ export function attachmentFlags(
   }
 
   for (const { finding, payloads: refs } of findings.groups()) {
-    out.push(finding.code === "adapter-mismatch"
-      ? makeFlag("adapter-mismatch", "stop", {
-        figures: {},
-        params: { payloadThread: finding.payloadThread, mountThread: mount.thread, adapterFrom: finding.adapterFrom, adapterTo: finding.adapterTo },
-        payloads: refs,
-      })
-      : makeFlag("thread-mismatch", finding.level, {
-        figures: {},
-        params: { payloadThread: finding.payloadThread, mountThread: mount.thread, viaAdapter: finding.viaAdapter },
-        payloads: refs,
-      }));
+    out.push(
+      finding.code === "adapter-mismatch"
+        ? makeFlag("adapter-mismatch", "stop", {
+            figures: {},
+            params: {
+              payloadThread: finding.payloadThread,
+              mountThread: mount.thread,
+              adapterFrom: finding.adapterFrom,
+              adapterTo: finding.adapterTo,
+            },
+            payloads: refs,
+          })
+        : makeFlag("thread-mismatch", finding.level, {
+            figures: {},
+            params: { payloadThread: finding.payloadThread, mountThread: mount.thread, viaAdapter: finding.viaAdapter },
+            payloads: refs,
+          }),
+    );
   }
 
   // Common practice: keep a screw below half its proof load.
@@ -123,13 +134,16 @@ export function attachmentFlags(
   const ratedKg = mount.ratedLoadKg;
   const load = figure("mass", demandKg, ratedKg);
   const params = { loadFactor: limits.loadFactor };
-  out.push(demandKg > ratedKg
-    ? makeFlag("mount-rated-load", "stop", { figures: { load }, params })
-    : demandKg > limits.mountCautionFraction * ratedKg
-      ? makeFlag("mount-rated-load", "caution", {
-        figures: { load, share: figure("ratio", demandKg / ratedKg, limits.mountCautionFraction) }, params,
-      })
-      : makeFlag("mount-rated-load", "ok", { figures: { load }, params }));
+  out.push(
+    demandKg > ratedKg
+      ? makeFlag("mount-rated-load", "stop", { figures: { load }, params })
+      : demandKg > limits.mountCautionFraction * ratedKg
+        ? makeFlag("mount-rated-load", "caution", {
+            figures: { load, share: figure("ratio", demandKg / ratedKg, limits.mountCautionFraction) },
+            params,
+          })
+        : makeFlag("mount-rated-load", "ok", { figures: { load }, params }),
+  );
 
   if (hangingMassKg > 0) {
     const weightN = hangingMassKg * STANDARD_GRAVITY_MS2;
@@ -137,12 +151,15 @@ export function attachmentFlags(
     const gustLoadN = weightN * limits.loadFactor;
     const breakingN = mount.safetyLineBreakingLoadN;
     const lineParams = { loadFactor: limits.loadFactor, safetyLineFactor: limits.safetyLineFactor };
-    out.push(breakingN === undefined
-      ? makeFlag("safety-line", "caution", { figures: { needed: figure("force", wantedN) }, params: lineParams })
-      : breakingN < gustLoadN
-        ? makeFlag("safety-line", "stop", { figures: { breakingLoad: figure("force", breakingN, gustLoadN) }, params: lineParams })
-        : makeFlag("safety-line", breakingN < wantedN ? "caution" : "ok", {
-          figures: { breakingLoad: figure("force", breakingN, wantedN) }, params: lineParams,
-        }));
+    out.push(
+      breakingN === undefined
+        ? makeFlag("safety-line", "caution", { figures: { needed: figure("force", wantedN) }, params: lineParams })
+        : breakingN < gustLoadN
+          ? makeFlag("safety-line", "stop", { figures: { breakingLoad: figure("force", breakingN, gustLoadN) }, params: lineParams })
+          : makeFlag("safety-line", breakingN < wantedN ? "caution" : "ok", {
+              figures: { breakingLoad: figure("force", breakingN, wantedN) },
+              params: lineParams,
+            }),
+    );
   }
 }

@@ -40,22 +40,20 @@ export function hullClearanceM(hull: Readonly<HullParams>, centre: Vec, size: Bo
  * The line leaves the tether point at angle `lineAngleRad` from the body's −z axis towards +x
  * (tether angle from vertical plus trim), for `lengthM`.
  */
-export function tetherClearanceM(
-  tetherPoint: Vec,
-  lineAngleRad: number,
-  lengthM: number,
-  centre: Vec,
-  size: BoxSize | undefined,
-): number {
+export function tetherClearanceM(tetherPoint: Vec, lineAngleRad: number, lengthM: number, centre: Vec, size: BoxSize | undefined): number {
   const halfLength = 0.5 * (size?.lengthM ?? 0);
   const halfHeight = 0.5 * (size?.heightM ?? 0);
-  const x0 = centre.x - halfLength, x1 = centre.x + halfLength;
-  const z0 = centre.z - halfHeight, z1 = centre.z + halfHeight;
+  const x0 = centre.x - halfLength,
+    x1 = centre.x + halfLength;
+  const z0 = centre.z - halfHeight,
+    z1 = centre.z + halfHeight;
   const dx = Math.sin(lineAngleRad) * lengthM;
   const dz = -Math.cos(lineAngleRad) * lengthM;
-  const px = tetherPoint.x, pz = tetherPoint.z;
+  const px = tetherPoint.x,
+    pz = tetherPoint.z;
   // Liang–Barsky clip of the segment against the rectangle: any overlap means contact.
-  let tEnter = 0, tLeave = 1;
+  let tEnter = 0,
+    tLeave = 1;
   const p = [-dx, dx, -dz, dz];
   const q = [px - x0, x1 - px, pz - z0, z1 - pz];
   let inside = true;
@@ -64,21 +62,32 @@ export function tetherClearanceM(
       if (q[k] < 0) inside = false;
     } else {
       const t = q[k] / p[k];
-      if (p[k] < 0) { if (t > tLeave) inside = false; else if (t > tEnter) tEnter = t; }
-      else { if (t < tEnter) inside = false; else if (t < tLeave) tLeave = t; }
+      if (p[k] < 0) {
+        if (t > tLeave) inside = false;
+        else if (t > tEnter) tEnter = t;
+      } else {
+        if (t < tEnter) inside = false;
+        else if (t < tLeave) tLeave = t;
+      }
     }
   }
   if (inside && tEnter <= tLeave) return 0;
   // Otherwise the nearest pair involves a rectangle corner or a segment end.
   const segmentLength2 = dx * dx + dz * dz;
   let best = Infinity;
-  for (const [cx, cz] of [[x0, z0], [x0, z1], [x1, z0], [x1, z1]] as const) {
-    const t = segmentLength2 > 0
-      ? Math.min(1, Math.max(0, ((cx - px) * dx + (cz - pz) * dz) / segmentLength2))
-      : 0;
+  for (const [cx, cz] of [
+    [x0, z0],
+    [x0, z1],
+    [x1, z0],
+    [x1, z1],
+  ] as const) {
+    const t = segmentLength2 > 0 ? Math.min(1, Math.max(0, ((cx - px) * dx + (cz - pz) * dz) / segmentLength2)) : 0;
     best = Math.min(best, Math.hypot(px + t * dx - cx, pz + t * dz - cz));
   }
-  for (const [ex, ez] of [[px, pz], [px + dx, pz + dz]] as const) {
+  for (const [ex, ez] of [
+    [px, pz],
+    [px + dx, pz + dz],
+  ] as const) {
     const ox = ex < x0 ? x0 - ex : ex > x1 ? ex - x1 : 0;
     const oz = ez < z0 ? z0 - ez : ez > z1 ? ez - z1 : 0;
     best = Math.min(best, Math.hypot(ox, oz));

@@ -40,50 +40,68 @@ export function windFlags(outcome: WindOutcome, speedMS: number, airCase: "wind"
   }
   const trimLevel = levelOf(Math.abs(c.trimDeg), limits.cautionTrimDeg, limits.stopTrimDeg);
   const trimLimitDeg = trimLevel === "stop" ? limits.stopTrimDeg : limits.cautionTrimDeg;
-  out.push(makeFlag(trimCode, trimLevel, {
-    figures: { speed, trim: figure("angle", degreesToRadians(c.trimDeg), degreesToRadians(trimLimitDeg)) },
-    params: { case: airCase },
-  }));
+  out.push(
+    makeFlag(trimCode, trimLevel, {
+      figures: { speed, trim: figure("angle", degreesToRadians(c.trimDeg), degreesToRadians(trimLimitDeg)) },
+      params: { case: airCase },
+    }),
+  );
   // The worse of the line's two ends: a heavy, draggy line meets the ground flatter than it
   // leaves the lifter.
   const lifterDeg = c.tetherAngleDeg;
   const anchorDeg = c.line?.anchorAngleDeg;
   const end: LineEnd = anchorDeg !== undefined && anchorDeg > lifterDeg ? "anchor" : "lifter";
-  const worstDeg = end === "anchor" ? anchorDeg ?? lifterDeg : lifterDeg;
+  const worstDeg = end === "anchor" ? (anchorDeg ?? lifterDeg) : lifterDeg;
   const angleLevel = levelOf(worstDeg, limits.cautionTetherAngleDeg, limits.stopTetherAngleDeg);
   const angleLimitDeg = angleLevel === "stop" ? limits.stopTetherAngleDeg : limits.cautionTetherAngleDeg;
   const angle = figure("angle", degreesToRadians(worstDeg), degreesToRadians(angleLimitDeg));
-  out.push(anchorDeg === undefined
-    ? makeFlag(angleCode, angleLevel, { figures: { speed, angle }, params: { case: airCase } })
-    : makeFlag(angleCode, angleLevel, {
-      figures: { speed, angle, otherEnd: figure("angle", degreesToRadians(end === "anchor" ? lifterDeg : anchorDeg)) },
-      params: { case: airCase, end },
-    }));
+  out.push(
+    anchorDeg === undefined
+      ? makeFlag(angleCode, angleLevel, { figures: { speed, angle }, params: { case: airCase } })
+      : makeFlag(angleCode, angleLevel, {
+          figures: { speed, angle, otherEnd: figure("angle", degreesToRadians(end === "anchor" ? lifterDeg : anchorDeg)) },
+          params: { case: airCase, end },
+        }),
+  );
 }
 
 /** The case (wind or gust, in wind) with the most line on the ground says so; calm air is the tether-length flag's. */
 export function lineOnGroundFlag(wind: WindCase | null, gust: WindCase | null, lineOutM: number, out: Flag[]): void {
   let worst: { c: WindCase; airCase: "wind" | "gust" } | null = null;
-  for (const [c, airCase] of [[wind, "wind"], [gust, "gust"]] as const) {
-    if (c && c.speedMS > 0 && c.line && c.line.lengthOnGroundM > 0 &&
-      (!worst || c.line.lengthOnGroundM > (worst.c.line?.lengthOnGroundM ?? 0))) worst = { c, airCase };
+  for (const [c, airCase] of [
+    [wind, "wind"],
+    [gust, "gust"],
+  ] as const) {
+    if (
+      c &&
+      c.speedMS > 0 &&
+      c.line &&
+      c.line.lengthOnGroundM > 0 &&
+      (!worst || c.line.lengthOnGroundM > (worst.c.line?.lengthOnGroundM ?? 0))
+    )
+      worst = { c, airCase };
   }
   if (!worst) return;
-  out.push(makeFlag("tether-on-ground", "caution", {
-    figures: {
-      onGround: figure("distance", worst.c.line?.lengthOnGroundM ?? 0),
-      lineOut: figure("distance", lineOutM),
-      speed: figure("speed", worst.c.speedMS),
-    },
-    params: { case: worst.airCase },
-  }));
+  out.push(
+    makeFlag("tether-on-ground", "caution", {
+      figures: {
+        onGround: figure("distance", worst.c.line?.lengthOnGroundM ?? 0),
+        lineOut: figure("distance", lineOutM),
+        speed: figure("speed", worst.c.speedMS),
+      },
+      params: { case: worst.airCase },
+    }),
+  );
 }
 
 export function freeLiftFlag(freeLiftKg: number, freeLiftRatio: number, limits: Limits): Flag {
   const freeLift = figure("mass", freeLiftKg);
   if (!(freeLiftKg > 0)) return makeFlag("free-lift", "stop", { figures: { freeLift }, params: {} });
   const ratio = figure("ratio", freeLiftRatio, limits.cautionFreeLiftRatio);
-  return makeFlag("free-lift", freeLiftRatio < limits.cautionFreeLiftRatio ? "caution" : "ok", { figures: { freeLift, ratio }, params: {} });
+  return makeFlag("free-lift", freeLiftRatio < limits.cautionFreeLiftRatio ? "caution" : "ok", {
+    figures: { freeLift, ratio },
+    params: {},
+  });
 }
 
 export function railFlag(positionX: number, rail: Input["envelope"]["rail"]): Flag {
@@ -92,7 +110,10 @@ export function railFlag(positionX: number, rail: Input["envelope"]["rail"]): Fl
   const passed = positionX < rail.startX ? rail.startX : positionX > rail.endX ? rail.endX : null;
   return passed === null
     ? makeFlag("mount-off-rail", "ok", { figures: { position: figure("smallLength", positionX), railStart, railEnd }, params: {} })
-    : makeFlag("mount-off-rail", "stop", { figures: { position: figure("smallLength", positionX, passed), railStart, railEnd }, params: {} });
+    : makeFlag("mount-off-rail", "stop", {
+        figures: { position: figure("smallLength", positionX, passed), railStart, railEnd },
+        params: {},
+      });
 }
 
 type GapLevel = "ok" | "caution" | "stop";
@@ -108,8 +129,7 @@ export function clearanceFlags(input: Input, centres: readonly Vec[], flying: Wi
   const hull = envelope.hull;
   const lineLengthM = input.tether?.lengthOutM ?? 100;
   const windMS = input.site?.windMS ?? 0;
-  const level = (gapM: number, touching: boolean): GapLevel =>
-    touching ? "stop" : gapM < limits.clearanceCautionM ? "caution" : "ok";
+  const level = (gapM: number, touching: boolean): GapLevel => (touching ? "stop" : gapM < limits.clearanceCautionM ? "caution" : "ok");
   // Identical payloads at the same place have the same gap: one flag names them all.
   const hullGaps = findingsByPayload<{ gapM: number; level: GapLevel }>();
   const lineGaps = findingsByPayload<{ gapM: number; level: GapLevel }>();
@@ -149,7 +169,10 @@ export interface LargestTension {
 export function largestTension(freeLiftKg: number, wind: WindCase | null, gust: WindCase | null): LargestTension {
   // In calm air the line only loses tension on the way down (its weight): the lifter's end is the larger.
   let largest: LargestTension = { tensionN: Math.max(0, freeLiftKg) * STANDARD_GRAVITY_MS2, case: "calm", end: "lifter" };
-  for (const [c, airCase] of [[wind, "wind"], [gust, "gust"]] as const) {
+  for (const [c, airCase] of [
+    [wind, "wind"],
+    [gust, "gust"],
+  ] as const) {
     if (!c || !(c.speedMS > 0)) continue;
     if (c.tensionN > largest.tensionN) largest = { tensionN: c.tensionN, case: airCase, end: "lifter" };
     const anchorN = c.line?.anchorTensionN ?? 0;

@@ -6,16 +6,19 @@
  */
 import { siteAir } from "./atmosphere";
 import { attachmentFlags } from "./attachment";
-import {
-  calmFlags, clearanceFlags, freeLiftFlag, largestTension, lineOnGroundFlag, railFlag, windFlags,
-} from "./evaluate-flags";
+import { calmFlags, clearanceFlags, freeLiftFlag, largestTension, lineOnGroundFlag, railFlag, windFlags } from "./evaluate-flags";
 import { flightLinePoints, solveFlight, type FlightSpec } from "./flight";
 import { figure, makeFlag, resolveLimits, type Flag } from "./flags";
 import { grossLiftKg as grossLift, liftGasDensityKgM3 } from "./gas";
 import { hullSkinAreaM2 } from "./geometry";
 import {
-  DEFAULT_CYLINDER_CONTENT_M3, DEFAULT_LOSS_PER_DAY_FRACTION, DEFAULT_PERMEABILITY_L_PER_M2_DAY_ATM,
-  heliumBudget, permeationLossPerDayFraction, type HeliumBudget, type LossSource,
+  DEFAULT_CYLINDER_CONTENT_M3,
+  DEFAULT_LOSS_PER_DAY_FRACTION,
+  DEFAULT_PERMEABILITY_L_PER_M2_DAY_ATM,
+  heliumBudget,
+  permeationLossPerDayFraction,
+  type HeliumBudget,
+  type LossSource,
 } from "./helium";
 import { payloadCentre, setupMass } from "./mass";
 import type { BalanceInput, DeepReadonly } from "./schema";
@@ -130,7 +133,13 @@ function prepare(input: Input): Prepared {
   const model = buildWindModel(input, statics, payloadCentres);
   const line = input.tether ? lineSpecFor(input.tether, air.densityKgM3) : null;
   // The lifter flies in the wind at its own height, on its line (flight.ts).
-  const wind: FlightSpec = { model, airDensityKgM3: air.densityKgM3, profile: windProfile(input.site?.windMS ?? 0, input.site), calm, line };
+  const wind: FlightSpec = {
+    model,
+    airDensityKgM3: air.densityKgM3,
+    profile: windProfile(input.site?.windMS ?? 0, input.site),
+    calm,
+    line,
+  };
   const gustMS = input.site?.gustMS;
   const gust = gustMS === undefined ? null : { ...wind, profile: windProfile(gustMS, input.site) };
   return { air, gasTemperatureK, gasDensityKgM3, grossLiftKg, mass, freeLiftKg, calm, payloadCentres, wind, gust };
@@ -203,14 +212,16 @@ export function evaluateBalance(input: Input): BalanceResult {
     cautionFreeLiftRatio: limits.cautionFreeLiftRatio,
   });
   if (helium.daysToTopUp !== null) {
-    flags.push(makeFlag("helium-top-up", "ok", {
-      figures: {
-        topUpAfter: figure("duration", helium.daysToTopUp * SECONDS_PER_DAY),
-        lossPerDay: figure("ratio", helium.lossPerDayFraction),
-        freeLiftRatio: figure("ratio", freeLiftRatio, limits.cautionFreeLiftRatio),
-      },
-      params: { lossSource: helium.lossSource },
-    }));
+    flags.push(
+      makeFlag("helium-top-up", "ok", {
+        figures: {
+          topUpAfter: figure("duration", helium.daysToTopUp * SECONDS_PER_DAY),
+          lossPerDay: figure("ratio", helium.lossPerDayFraction),
+          freeLiftRatio: figure("ratio", freeLiftRatio, limits.cautionFreeLiftRatio),
+        },
+        params: { lossSource: helium.lossSource },
+      }),
+    );
   }
 
   rulesFlags(envelope.gasVolumeM3, envelope.hull ? envelope.hull.maxDiameterM : null, input.tether?.lengthOutM ?? null, flags);

@@ -8,7 +8,13 @@
 import { flagMessage } from "../flag-messages";
 import type { FlagCode, FlagLevel } from "../domain/flags";
 import {
-  FIGURE_SI_UNITS, type FigureQuantity, type Figure, type Flag, type FlagData, type FlagDetails, type PayloadRef,
+  FIGURE_SI_UNITS,
+  type FigureQuantity,
+  type Figure,
+  type Flag,
+  type FlagData,
+  type FlagDetails,
+  type PayloadRef,
 } from "./flag-shape";
 import type { LimitsInput } from "./schema";
 import { ksiToPascals } from "./units-si";

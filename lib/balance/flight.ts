@@ -48,9 +48,8 @@ export function solveFlight(spec: FlightSpec): WindOutcome {
   let previousTrimRad = degreesToRadians(first.case.trimDeg);
   const at = (heightM: number, steps: number): Step => {
     const windMS = windAtHeightMS(profile, heightM);
-    const outcome = windMS === profile.referenceMS
-      ? first
-      : solveWindCase(model, airDensityKgM3, windMS, calm, windMS > 0 ? previousTrimRad : null);
+    const outcome =
+      windMS === profile.referenceMS ? first : solveWindCase(model, airDensityKgM3, windMS, calm, windMS > 0 ? previousTrimRad : null);
     if (!outcome.case) return { outcome, line: null };
     previousTrimRad = degreesToRadians(outcome.case.trimDeg);
     return { outcome, line: integrateLine(line, pullOf(model, outcome.case), profile, heightM, null, steps) };
@@ -77,7 +76,9 @@ export function solveFlight(spec: FlightSpec): WindOutcome {
     // A secant step well inside the last one shows g is as good as linear here: it lands on the
     // fixed point (the error goes as the product of the two residuals), so stop there.
     const done = Math.abs(next - heightB) <= Math.max(toleranceM, 0.02 * Math.abs(heightB - heightA));
-    heightA = heightB; residualA = residualB; heightB = next;
+    heightA = heightB;
+    residualA = residualB;
+    heightB = next;
     if (done) break;
   }
   return withLine(at(heightB, LINE_STEPS), profile);

@@ -12,22 +12,12 @@ export function heliumDensityKgM3(pressurePa: number, temperatureK: number): num
 }
 
 /** ρ_gas = purity·ρ_He + (1 − purity)·ρ_air, both at the gas temperature. */
-export function liftGasDensityKgM3(
-  pressurePa: number,
-  gasTemperatureK: number,
-  purity: number,
-): number {
-  return purity * heliumDensityKgM3(pressurePa, gasTemperatureK) +
-    (1 - purity) * airDensityKgM3(pressurePa, gasTemperatureK);
+export function liftGasDensityKgM3(pressurePa: number, gasTemperatureK: number, purity: number): number {
+  return purity * heliumDensityKgM3(pressurePa, gasTemperatureK) + (1 - purity) * airDensityKgM3(pressurePa, gasTemperatureK);
 }
 
 /** Gross lift expressed as a mass: fill fraction · gas volume · (ρ_air − ρ_gas). */
-export function grossLiftKg(
-  gasVolumeM3: number,
-  fillFraction: number,
-  airDensityKgM3Value: number,
-  gasDensityKgM3Value: number,
-): number {
+export function grossLiftKg(gasVolumeM3: number, fillFraction: number, airDensityKgM3Value: number, gasDensityKgM3Value: number): number {
   return fillFraction * gasVolumeM3 * (airDensityKgM3Value - gasDensityKgM3Value);
 }
 

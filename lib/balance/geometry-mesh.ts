@@ -69,8 +69,12 @@ export function buildRevolutionMesh(
   }
   const startCentre = ringCount * segments;
   const endCentre = startCentre + 1;
-  positions[v++] = x0M; positions[v++] = 0; positions[v++] = 0;
-  positions[v++] = x1M; positions[v++] = 0; positions[v++] = 0;
+  positions[v++] = x0M;
+  positions[v++] = 0;
+  positions[v++] = 0;
+  positions[v++] = x1M;
+  positions[v++] = 0;
+  positions[v++] = 0;
 
   const triangleCount = Math.max(0, ringCount - 1) * segments * 2 + 2 * segments;
   const indices = new Uint32Array(triangleCount * 3);
@@ -81,16 +85,24 @@ export function buildRevolutionMesh(
     for (let j = 0; j < segments; j++) {
       const j1 = (j + 1) % segments;
       // (a, b, c) with a→b around the ring and a→c aft: (b − a) × (c − a) points outward.
-      indices[t++] = base + j; indices[t++] = base + j1; indices[t++] = next + j;
-      indices[t++] = base + j1; indices[t++] = next + j1; indices[t++] = next + j;
+      indices[t++] = base + j;
+      indices[t++] = base + j1;
+      indices[t++] = next + j;
+      indices[t++] = base + j1;
+      indices[t++] = next + j1;
+      indices[t++] = next + j;
     }
   }
   const lastBase = (ringCount - 1) * segments;
   for (let j = 0; j < segments; j++) {
     const j1 = (j + 1) % segments;
     // Forward end faces −x, aft end faces +x.
-    indices[t++] = startCentre; indices[t++] = j1; indices[t++] = j;
-    indices[t++] = endCentre; indices[t++] = lastBase + j; indices[t++] = lastBase + j1;
+    indices[t++] = startCentre;
+    indices[t++] = j1;
+    indices[t++] = j;
+    indices[t++] = endCentre;
+    indices[t++] = lastBase + j;
+    indices[t++] = lastBase + j1;
   }
   return { positions, indices };
 }
@@ -100,10 +112,7 @@ export interface MeshVolume {
   readonly centroid: Vec3;
 }
 
-export function meshVolumeAndCentroid(
-  positions: Float32Array | Float64Array,
-  indices: Uint32Array,
-): MeshVolume {
+export function meshVolumeAndCentroid(positions: Float32Array | Float64Array, indices: Uint32Array): MeshVolume {
   let sixVolume = 0;
   let mx = 0;
   let my = 0;
@@ -112,9 +121,15 @@ export function meshVolumeAndCentroid(
     const a = indices[t] * 3;
     const b = indices[t + 1] * 3;
     const c = indices[t + 2] * 3;
-    const ax = positions[a], ay = positions[a + 1], az = positions[a + 2];
-    const bx = positions[b], by = positions[b + 1], bz = positions[b + 2];
-    const cx = positions[c], cy = positions[c + 1], cz = positions[c + 2];
+    const ax = positions[a],
+      ay = positions[a + 1],
+      az = positions[a + 2];
+    const bx = positions[b],
+      by = positions[b + 1],
+      bz = positions[b + 2];
+    const cx = positions[c],
+      cy = positions[c + 1],
+      cz = positions[c + 2];
     const det = ax * (by * cz - bz * cy) - ay * (bx * cz - bz * cx) + az * (bx * cy - by * cx);
     sixVolume += det;
     mx += det * (ax + bx + cx);
@@ -133,10 +148,7 @@ export interface MeshArea {
 }
 
 /** Total triangle area (both faces of a two-sided panel count) and its area centroid. */
-export function meshSurfaceArea(
-  positions: Float32Array | Float64Array,
-  indices: Uint32Array,
-): MeshArea {
+export function meshSurfaceArea(positions: Float32Array | Float64Array, indices: Uint32Array): MeshArea {
   let twiceArea = 0;
   let mx = 0;
   let my = 0;

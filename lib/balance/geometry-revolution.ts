@@ -54,8 +54,7 @@ export function integrateRevolution(
     const pieceVolume = (Math.PI * h * sumSquares) / 3;
     if (sumSquares > 0) {
       volume += pieceVolume;
-      volumeMoment += pieceVolume *
-        (xa + (h * (ra * ra + 2 * ra * rb + 3 * rb * rb)) / (4 * sumSquares));
+      volumeMoment += pieceVolume * (xa + (h * (ra * ra + 2 * ra * rb + 3 * rb * rb)) / (4 * sumSquares));
     }
     const radiusSum = ra + rb;
     if (radiusSum > 0) {

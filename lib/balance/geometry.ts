@@ -10,34 +10,29 @@
  * Both pieces have zero slope at x_m, so the hull is smooth there.
  */
 import { z } from "zod";
-import {
-  buildRevolutionMesh,
-  DEFAULT_MESH_RESOLUTION,
-  type MeshData,
-  type MeshResolution,
-} from "./geometry-mesh";
+import { buildRevolutionMesh, DEFAULT_MESH_RESOLUTION, type MeshData, type MeshResolution } from "./geometry-mesh";
 import { DEFAULT_PROFILE_STATIONS, integrateRevolution } from "./geometry-revolution";
 import { degreesToRadians } from "./units-si";
 import type { Vec } from "./vec";
 
 const bounded = (label: string, min: number, max: number) =>
-  z.number(`${label} must be a finite number`)
-    .min(min, `${label} must be at least ${min}`)
-    .max(max, `${label} must be at most ${max}`);
+  z.number(`${label} must be a finite number`).min(min, `${label} must be at least ${min}`).max(max, `${label} must be at most ${max}`);
 
-export const finParamsSchema = z.object({
-  count: z.number().int("fin count must be a whole number").min(0).max(8),
-  rootChordM: bounded("fin root chord (m)", 0, 50),
-  tipChordM: bounded("fin tip chord (m)", 0, 50),
-  spanM: bounded("fin span (m)", 0, 20),
-  /** Where the fins' trailing edges sit, as a fraction of the hull length. */
-  trailingEdgeFraction: bounded("fin trailing edge fraction", 0.3, 1),
-  /** Angle of the first fin from +y towards +z; 90 puts it on top. */
-  firstAngleDeg: bounded("first fin angle (deg)", -360, 360).optional(),
-}).refine((fins) => fins.tipChordM <= fins.rootChordM, {
-  message: "fin tip chord must not exceed the root chord",
-  path: ["tipChordM"],
-});
+export const finParamsSchema = z
+  .object({
+    count: z.number().int("fin count must be a whole number").min(0).max(8),
+    rootChordM: bounded("fin root chord (m)", 0, 50),
+    tipChordM: bounded("fin tip chord (m)", 0, 50),
+    spanM: bounded("fin span (m)", 0, 20),
+    /** Where the fins' trailing edges sit, as a fraction of the hull length. */
+    trailingEdgeFraction: bounded("fin trailing edge fraction", 0.3, 1),
+    /** Angle of the first fin from +y towards +z; 90 puts it on top. */
+    firstAngleDeg: bounded("first fin angle (deg)", -360, 360).optional(),
+  })
+  .refine((fins) => fins.tipChordM <= fins.rootChordM, {
+    message: "fin tip chord must not exceed the root chord",
+    path: ["tipChordM"],
+  });
 
 export const hullParamsSchema = z.object({
   lengthM: bounded("hull length (m)", 0.1, 50),
@@ -97,7 +92,10 @@ export function finPanels(params: Readonly<HullParams>): FinPanel[] {
   let area = 0;
   let mx = 0;
   let mr = 0;
-  for (const [i, j] of [[1, 2], [2, 3]] as const) {
+  for (const [i, j] of [
+    [1, 2],
+    [2, 3],
+  ] as const) {
     const [x0, r0] = corners[0];
     const [x1, r1] = corners[i];
     const [x2, r2] = corners[j];
@@ -136,13 +134,8 @@ export interface HullIntegrals {
   readonly hullPlanformCentroidXM: number;
 }
 
-export function integrateHullProfile(
-  params: Readonly<HullParams>,
-  stations: number = DEFAULT_PROFILE_STATIONS,
-): HullIntegrals {
-  const hull = integrateRevolution(
-    (xM) => profileRadiusAt(params, xM), 0, params.lengthM, stations,
-  );
+export function integrateHullProfile(params: Readonly<HullParams>, stations: number = DEFAULT_PROFILE_STATIONS): HullIntegrals {
+  const hull = integrateRevolution((xM) => profileRadiusAt(params, xM), 0, params.lengthM, stations);
   let finArea = 0;
   let finMomentX = 0;
   let finMomentZ = 0;
@@ -164,19 +157,14 @@ export function integrateHullProfile(
     hullSurfaceAreaM2: hull.surfaceAreaM2,
     finAreaM2: finArea,
     fabricMassCentre,
-    fabricMassKg: params.fabricArealDensityKgM2 === undefined
-      ? null
-      : params.fabricArealDensityKgM2 * surfaceAreaM2,
+    fabricMassKg: params.fabricArealDensityKgM2 === undefined ? null : params.fabricArealDensityKgM2 * surfaceAreaM2,
     hullPlanformAreaM2: hull.planformAreaM2,
     hullPlanformCentroidXM: hull.planformCentroidXM,
   };
 }
 
 /** The closed gas hull as a mesh (no fins), outward-wound. */
-export function buildHullMesh(
-  params: Readonly<HullParams>,
-  resolution: MeshResolution = DEFAULT_MESH_RESOLUTION,
-): MeshData {
+export function buildHullMesh(params: Readonly<HullParams>, resolution: MeshResolution = DEFAULT_MESH_RESOLUTION): MeshData {
   return buildRevolutionMesh((xM) => profileRadiusAt(params, xM), 0, params.lengthM, resolution);
 }
 

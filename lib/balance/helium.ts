@@ -42,8 +42,7 @@ export function permeationLossPerDayFraction(
   gasTemperatureK: number,
   fillVolumeM3: number,
 ): number {
-  const fraction = (permeabilityLPerM2DayAtm * surfaceAreaM2 * (gasTemperatureK / ZERO_CELSIUS_K)) /
-    (fillVolumeM3 * LITRES_PER_M3);
+  const fraction = (permeabilityLPerM2DayAtm * surfaceAreaM2 * (gasTemperatureK / ZERO_CELSIUS_K)) / (fillVolumeM3 * LITRES_PER_M3);
   return Number.isFinite(fraction) ? Math.min(0.99, Math.max(0, fraction)) : DEFAULT_LOSS_PER_DAY_FRACTION;
 }
 
@@ -82,8 +81,7 @@ export interface HeliumBudgetInput {
 
 export function heliumBudget(input: HeliumBudgetInput): HeliumBudget {
   const fillVolumeM3 = input.fillFraction * input.gasVolumeM3;
-  const expansion = (STANDARD_ATMOSPHERE_PA / input.pressurePa) *
-    (input.gasTemperatureK / CYLINDER_REFERENCE_TEMPERATURE_K);
+  const expansion = (STANDARD_ATMOSPHERE_PA / input.pressurePa) * (input.gasTemperatureK / CYLINDER_REFERENCE_TEMPERATURE_K);
   const cylinderContentAtSiteM3 = input.cylinderContentM3 * expansion;
   const f = input.lossPerDayFraction;
   const g = input.grossLiftKg;

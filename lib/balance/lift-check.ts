@@ -138,6 +138,7 @@ export function dayLiftCheck(input: DayLiftCheckInput): DayLiftCheckResult {
   const heliumAtGasTemperature = heliumDensityKgM3(air.pressurePa, gasTemperatureK);
   const perCubicMetre = grossLiftKg / (fill * input.gasVolumeM3);
   const purity = (perCubicMetre - (air.densityKgM3 - airAtGasTemperature)) / (airAtGasTemperature - heliumAtGasTemperature);
-  const problem: DayLiftCheckProblem | null = purity > 1 + 1e-9 ? "above-pure-helium" : purity < LIFT_CHECK_MIN_PURITY ? "out-of-range" : null;
+  const problem: DayLiftCheckProblem | null =
+    purity > 1 + 1e-9 ? "above-pure-helium" : purity < LIFT_CHECK_MIN_PURITY ? "out-of-range" : null;
   return { grossLiftKg, solvedFor: "purity", purity, gasVolumeM3: input.gasVolumeM3, problem };
 }

@@ -80,10 +80,12 @@ function pointAt(input: Input, gustFactor: number | null, windMS: number, lineOu
   }
   const line = result.wind?.line ?? null;
   return {
-    windMS, lineOutM,
+    windMS,
+    lineOutM,
     heightAboveGroundM: line ? line.heightAboveGroundM : null,
     blowdownM: line ? line.blowdownM : null,
-    worstLevel, worstCode,
+    worstLevel,
+    worstCode,
   };
 }
 
@@ -99,7 +101,8 @@ function highestWind(winds: readonly number[], good: (windMS: number) => boolean
       let high = winds[i];
       for (let b = 0; b < BISECTIONS; b++) {
         const middle = 0.5 * (low + high);
-        if (good(middle)) low = middle; else high = middle;
+        if (good(middle)) low = middle;
+        else high = middle;
       }
       return low;
     }
@@ -116,21 +119,30 @@ function heightAt(input: Input, gustFactor: number | null, windMS: number, lineO
 
 function targetLineOut(input: Input, gustFactor: number | null, heightM: number, windMS: number, mostM: number): TargetLineOut {
   if (heightAt(input, gustFactor, windMS, mostM) < heightM) return { heightM, windMS, lineOutM: null };
-  let low = 0, high = mostM;
+  let low = 0,
+    high = mostM;
   for (let b = 0; b < BISECTIONS + 6; b++) {
     const middle = 0.5 * (low + high);
-    if (heightAt(input, gustFactor, windMS, middle) >= heightM) high = middle; else low = middle;
+    if (heightAt(input, gustFactor, windMS, middle) >= heightM) high = middle;
+    else low = middle;
   }
   return { heightM, windMS, lineOutM: high };
 }
 
 export function operatingEnvelope(input: Input, options: EnvelopeOptions = {}): OperatingEnvelope {
   const site = input.site;
-  const gustFactor = site?.gustMS !== undefined && (site.windMS ?? 0) > 0 && site.gustMS >= (site.windMS ?? 0)
-    ? site.gustMS / (site.windMS ?? 1) : null;
+  const gustFactor =
+    site?.gustMS !== undefined && (site.windMS ?? 0) > 0 && site.gustMS >= (site.windMS ?? 0) ? site.gustMS / (site.windMS ?? 1) : null;
   const empty = (reason: EnvelopeFailure): OperatingEnvelope => ({
-    reason, windsMS: [], linesOutM: [], points: [], gustFactor, lineOutM: input.tether?.lengthOutM ?? null,
-    highestAllOkWindMS: null, highestWithoutStopWindMS: null, target: null,
+    reason,
+    windsMS: [],
+    linesOutM: [],
+    points: [],
+    gustFactor,
+    lineOutM: input.tether?.lengthOutM ?? null,
+    highestAllOkWindMS: null,
+    highestWithoutStopWindMS: null,
+    target: null,
   });
   if (!input.tether) return empty("no-tether");
   const calm = evaluateBalance(at(input, null, 0, input.tether.lengthOutM));
@@ -163,9 +175,10 @@ export function operatingEnvelope(input: Input, options: EnvelopeOptions = {}): 
     lineOutM: ownLineM,
     highestAllOkWindMS: highestWind(windsMS, (w) => levelAt(w) === "ok"),
     highestWithoutStopWindMS: highestWind(windsMS, (w) => levelAt(w) !== "stop"),
-    target: targetHeightM === undefined
-      ? null
-      : targetLineOut(input, gustFactor, targetHeightM, options.targetWindMS ?? site?.windMS ?? 0, mostM),
+    target:
+      targetHeightM === undefined
+        ? null
+        : targetLineOut(input, gustFactor, targetHeightM, options.targetWindMS ?? site?.windMS ?? 0, mostM),
   };
 }
 
@@ -179,7 +192,10 @@ export interface EnvelopeTableRow {
  * The envelope as a table to print: one row per line out, one column per wind (SI; the reader's
  * units are the printer's). Empty when the envelope has no grid.
  */
-export function operatingEnvelopeTable(envelope: OperatingEnvelope): { readonly windsMS: readonly number[]; readonly rows: readonly EnvelopeTableRow[] } {
+export function operatingEnvelopeTable(envelope: OperatingEnvelope): {
+  readonly windsMS: readonly number[];
+  readonly rows: readonly EnvelopeTableRow[];
+} {
   return {
     windsMS: envelope.windsMS,
     rows: envelope.linesOutM.map((lineOutM, j) => ({ lineOutM, cells: envelope.points.map((column) => column[j]) })),

@@ -14,26 +14,25 @@ export const PART_101_DIAMETER_M = feetToMetres(6);
 export const PART_101_NOTIFY_HEIGHT_M = feetToMetres(150);
 export const UK_ANO_TETHERED_HEIGHT_M = 60;
 
-export function rulesFlags(
-  gasVolumeM3: number,
-  maxDiameterM: number | null,
-  tetherOutM: number | null,
-  out: Flag[],
-): void {
+export function rulesFlags(gasVolumeM3: number, maxDiameterM: number | null, tetherOutM: number | null, out: Flag[]): void {
   const gasVolume = figure("volume", gasVolumeM3, PART_101_GAS_VOLUME_M3);
   const diameter = maxDiameterM === null ? undefined : figure("length", maxDiameterM, PART_101_DIAMETER_M);
   const over = gasVolumeM3 > PART_101_GAS_VOLUME_M3 || (maxDiameterM !== null && maxDiameterM > PART_101_DIAMETER_M);
-  out.push(makeFlag("moored-balloon-rules", over ? "caution" : "ok", {
-    figures: diameter ? { gasVolume, diameter } : { gasVolume },
-    params: {},
-  }));
-  if (tetherOutM !== null && tetherOutM > PART_101_NOTIFY_HEIGHT_M) {
-    out.push(makeFlag("tether-height", "caution", {
-      figures: {
-        usNotice: figure("distance", tetherOutM, PART_101_NOTIFY_HEIGHT_M),
-        ukPermission: figure("distance", tetherOutM, UK_ANO_TETHERED_HEIGHT_M),
-      },
+  out.push(
+    makeFlag("moored-balloon-rules", over ? "caution" : "ok", {
+      figures: diameter ? { gasVolume, diameter } : { gasVolume },
       params: {},
-    }));
+    }),
+  );
+  if (tetherOutM !== null && tetherOutM > PART_101_NOTIFY_HEIGHT_M) {
+    out.push(
+      makeFlag("tether-height", "caution", {
+        figures: {
+          usNotice: figure("distance", tetherOutM, PART_101_NOTIFY_HEIGHT_M),
+          ukPermission: figure("distance", tetherOutM, UK_ANO_TETHERED_HEIGHT_M),
+        },
+        params: {},
+      }),
+    );
   }
 }

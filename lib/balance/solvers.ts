@@ -28,27 +28,22 @@ function withMountAt(input: Input, positionX: number): Input {
   return { ...input, mount: { ...input.mount, positionX } };
 }
 
-const noSolution = (reason: LevelTrimFailure): LevelTrimSolution =>
-  ({ positionX: null, trimDeg: null, withinRail: false, reason });
+const noSolution = (reason: LevelTrimFailure): LevelTrimSolution => ({ positionX: null, trimDeg: null, withinRail: false, reason });
 
 /** No position when there is no free lift, no stable trim, or nothing moves with the mount. */
 export function solveLevelTrimPositionX(input: Input, targetTrimDeg: number = 0): LevelTrimSolution {
   const air = siteAir(input.site);
-  const gasDensity = liftGasDensityKgM3(
-    air.pressurePa, air.temperatureK + (input.gas?.superheatK ?? 0), input.gas?.purity ?? 1,
-  );
+  const gasDensity = liftGasDensityKgM3(air.pressurePa, air.temperatureK + (input.gas?.superheatK ?? 0), input.gas?.purity ?? 1);
   const gross = grossLift(input.envelope.gasVolumeM3, input.gas?.fillFraction ?? 1, air.densityKgM3, gasDensity);
   const mass = setupMass(input);
   if (!(gross - mass.totalMassKg > 0)) return noSolution("no-free-lift");
   const movingKg = input.mount.massKg + mass.hangingMassKg;
   if (!(movingKg > 0)) return noSolution("nothing-moves");
-  const statics = pitchStatics(gross, mass.totalMassKg, input.envelope.buoyancyCentre,
-    mass.centreOfMass, input.envelope.tetherPoint);
+  const statics = pitchStatics(gross, mass.totalMassKg, input.envelope.buoyancyCentre, mass.centreOfMass, input.envelope.tetherPoint);
   const stiffness = calmStiffnessNm(statics);
   // The stiffness does not depend on the mount's x, so no position can make it stable.
   if (!(stiffness < 0)) return noSolution("unstable");
-  const wantedWeightArm = statics.buoyancyN * statics.bx -
-    Math.tan(degreesToRadians(targetTrimDeg)) * stiffness;
+  const wantedWeightArm = statics.buoyancyN * statics.bx - Math.tan(degreesToRadians(targetTrimDeg)) * stiffness;
   const shiftM = (wantedWeightArm - statics.weightN * statics.gx) / (STANDARD_GRAVITY_MS2 * movingKg);
   const positionX = input.mount.positionX + shiftM;
   if (!Number.isFinite(positionX)) return noSolution("nothing-moves");
@@ -81,11 +76,18 @@ export interface MaxPayloadSolution {
 
 function withExtraMass(input: Input, extraKg: number, options: MaxPayloadOptions): Input {
   const index = options.payloadIndex;
-  const payloads = index !== undefined && index >= 0 && index < input.payloads.length
-    ? input.payloads.map((p, i) => (i === index ? { ...p, massKg: p.massKg + extraKg } : p))
-    : [...input.payloads, {
-      name: "extra payload", massKg: extraKg, offset: { x: 0, z: 0 }, attachment: input.mount.thread,
-    }];
+  const payloads =
+    index !== undefined && index >= 0 && index < input.payloads.length
+      ? input.payloads.map((p, i) => (i === index ? { ...p, massKg: p.massKg + extraKg } : p))
+      : [
+          ...input.payloads,
+          {
+            name: "extra payload",
+            massKg: extraKg,
+            offset: { x: 0, z: 0 },
+            attachment: input.mount.thread,
+          },
+        ];
   const loaded: Input = { ...input, payloads };
   if (!options.retrim) return loaded;
   const level = solveLevelTrimPositionX(loaded);
@@ -114,13 +116,22 @@ export function solveMaxPayloadMassKg(input: Input, options: MaxPayloadOptions =
   for (let step = 1; step <= SCAN_STEPS; step++) {
     const candidate = (upperKg * step) / SCAN_STEPS;
     const stop = firstStop(withExtraMass(input, candidate, options));
-    if (stop) { high = candidate; highStop = stop; break; }
+    if (stop) {
+      high = candidate;
+      highStop = stop;
+      break;
+    }
     low = candidate;
   }
   for (let i = 0; i < BISECTIONS && highStop; i++) {
     const middle = 0.5 * (low + high);
     const stop = firstStop(withExtraMass(input, middle, options));
-    if (stop) { high = middle; highStop = stop; } else { low = middle; }
+    if (stop) {
+      high = middle;
+      highStop = stop;
+    } else {
+      low = middle;
+    }
   }
   return { extraMassKg: low, limitingCode: highStop, positionX: withExtraMass(input, low, options).mount.positionX };
 }

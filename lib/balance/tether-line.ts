@@ -82,7 +82,10 @@ interface Loads {
 }
 
 // The derivative's result: module scratch, so that the inner loop allocates nothing.
-let dH = 0, dV = 0, dX = 0, dZ = 0;
+let dH = 0,
+  dV = 0,
+  dX = 0,
+  dZ = 0;
 
 /** The wind at a height on the line (relative z), by the power law of wind-profile.ts. */
 function windAt(loads: Loads, z: number): number {
@@ -122,23 +125,39 @@ function derivative(loads: Loads, h: number, v: number, windMS: number): void {
     fx += normal * n * n + along * c * c;
     fz += -normal * n * c + along * c * n;
   }
-  dH = fx; dV = fz; dX = -c; dZ = -n;
+  dH = fx;
+  dV = fz;
+  dX = -c;
+  dZ = -n;
 }
 
 // One RK4 step's result, and the wind at its end.
-let sH = 0, sV = 0, sX = 0, sZ = 0, sWind = 0;
+let sH = 0,
+  sV = 0,
+  sX = 0,
+  sZ = 0,
+  sWind = 0;
 
 /** One classical RK4 step of length ds from (h, v, x, z), where the wind is `wind`, into sH…sWind. */
 function rk4Step(loads: Loads, h: number, v: number, x: number, z: number, wind: number, ds: number): void {
   derivative(loads, h, v, wind);
-  const h1 = dH, v1 = dV, x1 = dX, z1 = dZ;
+  const h1 = dH,
+    v1 = dV,
+    x1 = dX,
+    z1 = dZ;
   const zb = z + 0.5 * ds * z1;
   const windB = loads.drag ? windAt(loads, zb) : 0;
   derivative(loads, h + 0.5 * ds * h1, v + 0.5 * ds * v1, windB);
-  const h2 = dH, v2 = dV, x2 = dX, z2 = dZ;
+  const h2 = dH,
+    v2 = dV,
+    x2 = dX,
+    z2 = dZ;
   const zc = z + 0.5 * ds * z2;
   derivative(loads, h + 0.5 * ds * h2, v + 0.5 * ds * v2, loads.drag ? windNear(loads, zc, zb, windB) : 0);
-  const h3 = dH, v3 = dV, x3 = dX, z3 = dZ;
+  const h3 = dH,
+    v3 = dV,
+    x3 = dX,
+    z3 = dZ;
   const zd = z + ds * z3;
   const windD = loads.drag ? windAt(loads, zd) : 0;
   derivative(loads, h + ds * h3, v + ds * v3, windD);
@@ -158,7 +177,8 @@ function rk4Step(loads: Loads, h: number, v: number, x: number, z: number, wind:
  * catenary's integrals (Irvine, Cable Structures) about the load's direction.
  */
 function straightLoadPiece(h0: number, v0: number, h1: number, v1: number, lengthM: number): void {
-  const fx = (h1 - h0) / lengthM, fz = (v1 - v0) / lengthM;
+  const fx = (h1 - h0) / lengthM,
+    fz = (v1 - v0) / lengthM;
   const load = Math.hypot(fx, fz);
   const t0 = Math.hypot(h0, v0);
   if (!(load > 0) || !(lengthM > 0)) {
@@ -166,15 +186,17 @@ function straightLoadPiece(h0: number, v0: number, h1: number, v1: number, lengt
     sZ = t0 > 0 ? (-lengthM * v0) / t0 : -lengthM;
     return;
   }
-  const ux = fx / load, uz = fz / load;
-  const ex = -uz, ez = ux;
-  const a0 = h0 * ux + v0 * uz, a1 = h1 * ux + v1 * uz;
+  const ux = fx / load,
+    uz = fz / load;
+  const ex = -uz,
+    ez = ux;
+  const a0 = h0 * ux + v0 * uz,
+    a1 = h1 * ux + v1 * uz;
   const b = h0 * ex + v0 * ez;
   const along = (Math.hypot(h1, v1) - t0) / load;
   // Sideways tension this small bends the piece by b·ln(1/b) → 0, below rounding: none at all.
-  const across = Math.abs(b) <= 1e-12 * (t0 + Math.hypot(h1, v1))
-    ? 0
-    : (b / load) * (Math.asinh(a1 / Math.abs(b)) - Math.asinh(a0 / Math.abs(b)));
+  const across =
+    Math.abs(b) <= 1e-12 * (t0 + Math.hypot(h1, v1)) ? 0 : (b / load) * (Math.asinh(a1 / Math.abs(b)) - Math.asinh(a0 / Math.abs(b)));
   // The line runs against its tension going down: the displacement is minus the integral.
   sX = -(along * ux + across * ex);
   sZ = -(along * uz + across * ez);
@@ -195,11 +217,20 @@ export function integrateLine(
 ): LineSolution {
   const drag = line.normalDragAreaPerMetreM > 0 || line.skinFrictionAreaPerMetreM > 0;
   const loads: Loads = {
-    w: line.weightPerMetreN, normal: line.normalDragAreaPerMetreM, along: line.skinFrictionAreaPerMetreM,
-    halfRho: 0.5 * line.airDensityKgM3, windMS: profile.referenceMS, referenceHeightM: profile.referenceHeightM,
-    exponent: profile.exponent, topHeightM, drag,
+    w: line.weightPerMetreN,
+    normal: line.normalDragAreaPerMetreM,
+    along: line.skinFrictionAreaPerMetreM,
+    halfRho: 0.5 * line.airDensityKgM3,
+    windMS: profile.referenceMS,
+    referenceHeightM: profile.referenceHeightM,
+    exponent: profile.exponent,
+    topHeightM,
+    drag,
   };
-  let h = pull.downwindN, v = pull.upN, x = 0, z = 0;
+  let h = pull.downwindN,
+    v = pull.upN,
+    x = 0,
+    z = 0;
   let wind = drag ? windAt(loads, 0) : 0;
   points?.push({ x: 0, z: 0 });
   const ds = line.lengthM / steps;
@@ -210,11 +241,20 @@ export function integrateLine(
     if (sV <= 0) {
       // The line meets the ground inside this step: find where V = 0 by regula falsi on the
       // step's length (V is close to linear over one step), then stop there.
-      let lowDs = 0, lowV = v, highDs = ds, highV = sV;
+      let lowDs = 0,
+        lowV = v,
+        highDs = ds,
+        highV = sV;
       for (let i = 0; i < 4 && highV !== lowV; i++) {
         const tryDs = lowDs + ((highDs - lowDs) * lowV) / (lowV - highV);
         rk4Step(loads, h, v, x, z, wind, tryDs);
-        if (sV > 0) { lowDs = tryDs; lowV = sV; } else { highDs = tryDs; highV = sV; }
+        if (sV > 0) {
+          lowDs = tryDs;
+          lowV = sV;
+        } else {
+          highDs = tryDs;
+          highV = sV;
+        }
         if (Math.abs(sV) <= small) break;
       }
       const touchDs = Math.abs(lowV) <= Math.abs(highV) ? lowDs : highDs;
@@ -224,11 +264,18 @@ export function integrateLine(
       // load is taken as constant (the step's mean), which makes the piece a catenary about the
       // load's direction, integrated exactly: the tension at both ends is RK4's.
       straightLoadPiece(h, v, sH, 0, touchDs);
-      h = sH; v = 0; x += sX; z += sZ;
+      h = sH;
+      v = 0;
+      x += sX;
+      z += sZ;
       hungM = step * ds + touchDs;
       break;
     }
-    h = sH; v = sV; x = sX; z = sZ; wind = sWind;
+    h = sH;
+    v = sV;
+    x = sX;
+    z = sZ;
+    wind = sWind;
     points?.push({ x, z });
   }
   const onGroundM = Math.max(0, line.lengthM - hungM);
@@ -243,9 +290,7 @@ export function integrateLine(
   return {
     heightAboveGroundM: Math.max(0, -z),
     blowdownM: Math.max(0, -x + laidOutM),
-    anchorAngleDeg: onGroundM > 0
-      ? (anchorDownwindN > 0 ? 90 : 0)
-      : radiansToDegrees(Math.atan2(anchorDownwindN, anchorUpN)),
+    anchorAngleDeg: onGroundM > 0 ? (anchorDownwindN > 0 ? 90 : 0) : radiansToDegrees(Math.atan2(anchorDownwindN, anchorUpN)),
     anchorTensionN: Math.hypot(anchorDownwindN, anchorUpN),
     lengthOnGroundM: onGroundM,
     anchorDownwindN,

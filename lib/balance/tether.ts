@@ -33,15 +33,21 @@ export function tetherFlags(
   // Without free lift the free-lift flag already says it does not fly: no second flag for the line.
   if (freeLiftKg > 0) {
     if (tether.lengthOutM >= maxOutM) {
-      out.push(makeFlag("tether-length", "stop", {
-        figures: { lineOut, lineMass: figure("mass", lineKg), freeLift: figure("mass", freeLiftKg) }, params: {},
-      }));
+      out.push(
+        makeFlag("tether-length", "stop", {
+          figures: { lineOut, lineMass: figure("mass", lineKg), freeLift: figure("mass", freeLiftKg) },
+          params: {},
+        }),
+      );
     } else if (leftRatio < limits.cautionFreeLiftRatio && ratio >= limits.cautionFreeLiftRatio) {
       // A caution only when the line is what takes the margin below the limit; a margin already
       // below it is the free-lift flag's caution, not a second one.
-      out.push(makeFlag("tether-length", "caution", {
-        figures: { lineOut, freeLiftLeft: figure("ratio", leftRatio, limits.cautionFreeLiftRatio) }, params: {},
-      }));
+      out.push(
+        makeFlag("tether-length", "caution", {
+          figures: { lineOut, freeLiftLeft: figure("ratio", leftRatio, limits.cautionFreeLiftRatio) },
+          params: {},
+        }),
+      );
     } else {
       out.push(makeFlag("tether-length", "ok", { figures: { lineOut }, params: {} }));
     }
@@ -51,11 +57,14 @@ export function tetherFlags(
   const tensionN = largestTension.tensionN;
   const breakingLoad = figure("force", breakingN);
   const params = { safetyFactor: limits.tetherSafetyFactor, case: largestTension.case, end: largestTension.end };
-  out.push(tensionN >= breakingN
-    ? makeFlag("tether-strength", "stop", { figures: { tension: figure("force", tensionN, breakingN), breakingLoad }, params })
-    : makeFlag("tether-strength", tensionN * limits.tetherSafetyFactor > breakingN ? "caution" : "ok", {
-      figures: { tension: figure("force", tensionN, breakingN / limits.tetherSafetyFactor), breakingLoad }, params,
-    }));
+  out.push(
+    tensionN >= breakingN
+      ? makeFlag("tether-strength", "stop", { figures: { tension: figure("force", tensionN, breakingN), breakingLoad }, params })
+      : makeFlag("tether-strength", tensionN * limits.tetherSafetyFactor > breakingN ? "caution" : "ok", {
+          figures: { tension: figure("force", tensionN, breakingN / limits.tetherSafetyFactor), breakingLoad },
+          params,
+        }),
+  );
 }
 
 /** Weight of the line out, N (for callers who show it). */

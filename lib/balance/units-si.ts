@@ -17,8 +17,7 @@ export const MOLAR_MASS_HELIUM_KG_PER_KMOL = 4.002602;
  * Specific gas constant of helium, J/(kg·K). Uses the same R* as the atmosphere so that the ratio
  * ρ_He/ρ_air at equal p and T is exactly M_He/M_air.
  */
-export const SPECIFIC_GAS_CONSTANT_HELIUM_J_PER_KG_K =
-  MOLAR_GAS_CONSTANT_ISA_J_PER_KMOL_K / MOLAR_MASS_HELIUM_KG_PER_KMOL;
+export const SPECIFIC_GAS_CONSTANT_HELIUM_J_PER_KG_K = MOLAR_GAS_CONSTANT_ISA_J_PER_KMOL_K / MOLAR_MASS_HELIUM_KG_PER_KMOL;
 
 export const ZERO_CELSIUS_K = 273.15;
 /** One standard atmosphere, Pa. */
@@ -43,17 +42,14 @@ export const poundsToKg = (pounds: number): number => pounds * POUND_KG;
 export const kgToPounds = (kg: number): number => kg / POUND_KG;
 export const cubicFeetToCubicMetres = (cubicFeet: number): number => cubicFeet * CUBIC_FOOT_M3;
 export const cubicMetresToCubicFeet = (cubicMetres: number): number => cubicMetres / CUBIC_FOOT_M3;
-export const squareInchesToSquareMetres = (squareInches: number): number =>
-  squareInches * INCH_M * INCH_M;
-export const squareMetresToSquareInches = (squareMetres: number): number =>
-  squareMetres / (INCH_M * INCH_M);
+export const squareInchesToSquareMetres = (squareInches: number): number => squareInches * INCH_M * INCH_M;
+export const squareMetresToSquareInches = (squareMetres: number): number => squareMetres / (INCH_M * INCH_M);
 export const ksiToPascals = (ksi: number): number => ksi * KSI_PA;
 export const poundsForceToNewtons = (poundsForce: number): number => poundsForce * POUND_FORCE_N;
 export const newtonsToPoundsForce = (newtons: number): number => newtons / POUND_FORCE_N;
 export const inchesOfMercuryToPascals = (inchesHg: number): number => inchesHg * INCH_OF_MERCURY_PA;
 export const celsiusToKelvin = (celsius: number): number => celsius + ZERO_CELSIUS_K;
 export const kelvinToCelsius = (kelvin: number): number => kelvin - ZERO_CELSIUS_K;
-export const fahrenheitToKelvin = (fahrenheit: number): number =>
-  ((fahrenheit - 32) * 5) / 9 + ZERO_CELSIUS_K;
+export const fahrenheitToKelvin = (fahrenheit: number): number => ((fahrenheit - 32) * 5) / 9 + ZERO_CELSIUS_K;
 export const degreesToRadians = (degrees: number): number => (degrees * Math.PI) / 180;
 export const radiansToDegrees = (radians: number): number => (radians * 180) / Math.PI;

@@ -71,9 +71,7 @@ export interface WindCase {
 /** Why a case has no equilibrium: no stable pitch, too little lift, no calm trim, or no free lift. */
 export type WindFailure = "no-equilibrium" | "cannot-fly" | "no-calm-trim" | "no-free-lift";
 
-export type WindOutcome =
-  | { readonly case: WindCase; readonly reason: null }
-  | { readonly case: null; readonly reason: WindFailure };
+export type WindOutcome = { readonly case: WindCase; readonly reason: null } | { readonly case: null; readonly reason: WindFailure };
 
 /** q = ½ρV² (Pa). */
 export function dynamicPressurePa(airDensityKgM3: number, speedMS: number): number {
@@ -91,8 +89,7 @@ export function pitchMomentNm(model: WindModel, dynamicPressure: number, thetaRa
     const liftCoefficient = model.liftSlopePerRad * (thetaRad - model.zeroLiftTrimRad);
     const liftN = qS * liftCoefficient;
     const sailDragN = qS * (model.dragCoefficient + model.inducedDragFactor * liftCoefficient * liftCoefficient);
-    moment += -liftN * (model.cx * cos + model.cz * sin) +
-      sailDragN * (-model.cx * sin + model.cz * cos);
+    moment += -liftN * (model.cx * cos + model.cz * sin) + sailDragN * (-model.cx * sin + model.cz * cos);
     const drag = model.payloadDrag;
     for (let i = 0; i < drag.length; i += 3) {
       moment += dynamicPressure * drag[i] * (-drag[i + 1] * sin + drag[i + 2] * cos);
@@ -106,9 +103,11 @@ const SCAN_HIGH_RAD = degreesToRadians(89);
 const SCAN_STEPS = 60;
 const ROOT_TOLERANCE_RAD = 1e-11;
 
-function refineRoot(model: WindModel, q: number, lowRad: number, highRad: number,
-  lowMoment: number, highMoment: number): number {
-  let a = lowRad, b = highRad, fa = lowMoment, fb = highMoment;
+function refineRoot(model: WindModel, q: number, lowRad: number, highRad: number, lowMoment: number, highMoment: number): number {
+  let a = lowRad,
+    b = highRad,
+    fa = lowMoment,
+    fb = highMoment;
   let side = 0;
   for (let iteration = 0; iteration < 100 && b - a > ROOT_TOLERANCE_RAD; iteration++) {
     let c = (a * fb - b * fa) / (fb - fa);
@@ -116,11 +115,13 @@ function refineRoot(model: WindModel, q: number, lowRad: number, highRad: number
     const fc = pitchMomentNm(model, q, c);
     if (fc === 0) return c;
     if (fc > 0) {
-      a = c; fa = fc;
+      a = c;
+      fa = fc;
       if (side === -1) fb *= 0.5; // Illinois: halve the stale end so it cannot stall.
       side = -1;
     } else {
-      b = c; fb = fc;
+      b = c;
+      fb = fc;
       if (side === 1) fa *= 0.5;
       side = 1;
     }
@@ -193,16 +194,21 @@ export function solveWindCase(
     if (calm.trimDeg === null) return { case: null, reason: "no-calm-trim" };
     return {
       case: {
-        speedMS: 0, windAtLifterMS: 0, trimDeg: calm.trimDeg, tetherAngleDeg: 0, tensionN: freeLiftN,
-        dynamicPressurePa: 0, liftN: 0, dragN: 0, line: null,
+        speedMS: 0,
+        windAtLifterMS: 0,
+        trimDeg: calm.trimDeg,
+        tetherAngleDeg: 0,
+        tensionN: freeLiftN,
+        dynamicPressurePa: 0,
+        liftN: 0,
+        dragN: 0,
+        line: null,
       },
       reason: null,
     };
   }
   const q = dynamicPressurePa(airDensityKgM3, speedMS);
-  const thetaRad = nearRad === null
-    ? solvePitchTrimRad(model, q, calm.trimRad ?? 0)
-    : solvePitchTrimNearRad(model, q, nearRad);
+  const thetaRad = nearRad === null ? solvePitchTrimRad(model, q, calm.trimRad ?? 0) : solvePitchTrimNearRad(model, q, nearRad);
   if (thetaRad === null) return { case: null, reason: "no-equilibrium" };
   const liftN = q * model.sailAreaM2 * model.liftSlopePerRad * (thetaRad - model.zeroLiftTrimRad);
   const dragN = q * dragAreaAtTrimM2(model, thetaRad);

@@ -19,7 +19,10 @@ export const catalogueIdSchema = z.string().min(1).max(64);
 
 export const envelopeModelValuesSchema = z
   .object({
-    slug: z.string().trim().regex(/^[a-z0-9][a-z0-9-]{1,39}$/, "Lower-case letters, digits and dashes, 2 to 40 of them."),
+    slug: z
+      .string()
+      .trim()
+      .regex(/^[a-z0-9][a-z0-9-]{1,39}$/, "Lower-case letters, digits and dashes, 2 to 40 of them."),
     name,
     description,
     hull: hullParamsSchema,
@@ -31,20 +34,31 @@ export const envelopeModelValuesSchema = z
     railStartXM: number("rail start (m)", 0, 60),
     railEndXM: number("rail end (m)", 0, 60),
     railZM: number("rail height (m)", -20, 20),
-    railTabCount: z.number("rail tabs must be a number").int("rail tabs must be a whole number").min(2, "at least 2 rail tabs").max(100, "at most 100 rail tabs"),
+    railTabCount: z
+      .number("rail tabs must be a number")
+      .int("rail tabs must be a whole number")
+      .min(2, "at least 2 rail tabs")
+      .max(100, "at most 100 rail tabs"),
     aero: aeroSchema.nullable(),
     limits: limitsSchema,
   })
   .superRefine((m, ctx) => {
-    if (m.railEndXM <= m.railStartXM) ctx.addIssue({ code: "custom", path: ["railEndXM"], message: "The rail must end aft of where it starts." });
-    if (m.railEndXM > m.hull.lengthM) ctx.addIssue({ code: "custom", path: ["railEndXM"], message: "The rail must end on the hull (not aft of its length)." });
-    if (m.tetherPointZM >= m.railZM) ctx.addIssue({ code: "custom", path: ["tetherPointZM"], message: "The tether point must be below the rail." });
+    if (m.railEndXM <= m.railStartXM)
+      ctx.addIssue({ code: "custom", path: ["railEndXM"], message: "The rail must end aft of where it starts." });
+    if (m.railEndXM > m.hull.lengthM)
+      ctx.addIssue({ code: "custom", path: ["railEndXM"], message: "The rail must end on the hull (not aft of its length)." });
+    if (m.tetherPointZM >= m.railZM)
+      ctx.addIssue({ code: "custom", path: ["tetherPointZM"], message: "The tether point must be below the rail." });
     const { stopTrimDeg, cautionTrimDeg, stopTetherAngleDeg, cautionTetherAngleDeg } = m.limits;
     if (stopTrimDeg !== undefined && cautionTrimDeg !== undefined && stopTrimDeg < cautionTrimDeg) {
       ctx.addIssue({ code: "custom", path: ["limits", "stopTrimDeg"], message: "The stop trim must not be below the caution trim." });
     }
     if (stopTetherAngleDeg !== undefined && cautionTetherAngleDeg !== undefined && stopTetherAngleDeg < cautionTetherAngleDeg) {
-      ctx.addIssue({ code: "custom", path: ["limits", "stopTetherAngleDeg"], message: "The stop tether angle must not be below the caution angle." });
+      ctx.addIssue({
+        code: "custom",
+        path: ["limits", "stopTetherAngleDeg"],
+        message: "The stop tether angle must not be below the caution angle.",
+      });
     }
   });
 export type EnvelopeModelValues = z.infer<typeof envelopeModelValuesSchema>;
@@ -72,7 +86,10 @@ export const payloadTemplateValuesSchema = setupPayloadDraftSchema.omit({ templa
 export type PayloadTemplateValues = z.infer<typeof payloadTemplateValuesSchema>;
 
 export const envelopeUnitValuesSchema = z.object({
-  serial: z.string().trim().regex(/^[A-Za-z0-9][A-Za-z0-9-]{1,39}$/, "Letters, digits and dashes, 2 to 40 of them."),
+  serial: z
+    .string()
+    .trim()
+    .regex(/^[A-Za-z0-9][A-Za-z0-9-]{1,39}$/, "Letters, digits and dashes, 2 to 40 of them."),
   modelId: catalogueIdSchema,
   /** The customer who owns it, by e-mail; empty: the workshop's own (not yet sold). */
   ownerEmail: z.union([z.literal(""), z.email("Give the owner's e-mail, or leave it empty.")]),
@@ -84,7 +101,10 @@ export type EnvelopeUnitValues = z.infer<typeof envelopeUnitValuesSchema>;
 const isoDate = z
   .string()
   .regex(/^\d{4}-\d{2}-\d{2}$/, "A date as yyyy-mm-dd.")
-  .refine((text) => !Number.isNaN(Date.parse(`${text}T00:00:00Z`)) && new Date(`${text}T00:00:00Z`).toISOString().startsWith(text), "Not a calendar date.");
+  .refine(
+    (text) => !Number.isNaN(Date.parse(`${text}T00:00:00Z`)) && new Date(`${text}T00:00:00Z`).toISOString().startsWith(text),
+    "Not a calendar date.",
+  );
 
 export const liftTestValuesSchema = z.object({
   measuredGrossLiftKg: number("measured gross lift (kg)", 0.001, 1000),

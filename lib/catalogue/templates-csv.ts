@@ -50,7 +50,21 @@ export interface TemplateForCsv extends PayloadTemplateValues {
 
 /** Numbers are written as JavaScript prints them (shortest round-trip form), so nothing is lost. */
 export function templatesToCsv(templates: readonly TemplateForCsv[]): string {
-  const data = templates.map((t) => [t.id, t.name, t.description, t.category, t.massKg, t.shape, t.lengthM, t.widthM, t.heightM, t.attachment, t.dragAreaM2, t.offsetXM, t.offsetZM]);
+  const data = templates.map((t) => [
+    t.id,
+    t.name,
+    t.description,
+    t.category,
+    t.massKg,
+    t.shape,
+    t.lengthM,
+    t.widthM,
+    t.heightM,
+    t.attachment,
+    t.dragAreaM2,
+    t.offsetXM,
+    t.offsetZM,
+  ]);
   return Papa.unparse({ fields: [...TEMPLATE_CSV_COLUMNS], data }, { newline: "\r\n" });
 }
 
@@ -64,14 +78,22 @@ export function parseTemplatesCsv(text: string): TemplateCsvParse {
   const problems: CsvProblem[] = [];
   const headers = parsed.meta.fields ?? [];
   for (const column of TEMPLATE_CSV_COLUMNS) {
-    if (column !== "id" && column !== "description" && !headers.includes(column)) problems.push({ row: 1, field: column, problem: "this column is missing from the header" });
+    if (column !== "id" && column !== "description" && !headers.includes(column))
+      problems.push({ row: 1, field: column, problem: "this column is missing from the header" });
   }
   for (const header of headers) {
-    if (!(TEMPLATE_CSV_COLUMNS as readonly string[]).includes(header)) problems.push({ row: 1, field: header, problem: `unknown column; the columns are ${TEMPLATE_CSV_COLUMNS.join(", ")}` });
+    if (!(TEMPLATE_CSV_COLUMNS as readonly string[]).includes(header))
+      problems.push({ row: 1, field: header, problem: `unknown column; the columns are ${TEMPLATE_CSV_COLUMNS.join(", ")}` });
   }
   if (problems.length) return { ok: false, problems };
   if (parsed.data.length === 0) return { ok: false, problems: [{ row: 2, field: "name", problem: "the file has no template rows" }] };
-  if (parsed.data.length > MAX_TEMPLATE_IMPORT_ROWS) return { ok: false, problems: [{ row: MAX_TEMPLATE_IMPORT_ROWS + 2, field: "name", problem: `at most ${MAX_TEMPLATE_IMPORT_ROWS} templates in one file` }] };
+  if (parsed.data.length > MAX_TEMPLATE_IMPORT_ROWS)
+    return {
+      ok: false,
+      problems: [
+        { row: MAX_TEMPLATE_IMPORT_ROWS + 2, field: "name", problem: `at most ${MAX_TEMPLATE_IMPORT_ROWS} templates in one file` },
+      ],
+    };
   for (const error of parsed.errors) {
     problems.push({ row: (error.row ?? 0) + 2, field: "(row)", problem: error.message });
   }
@@ -88,7 +110,8 @@ export function parseTemplatesCsv(text: string): TemplateCsvParse {
         continue;
       }
       const value = Number(raw.replace(",", "."));
-      if (raw === "" || !Number.isFinite(value)) problems.push({ row, field: column, problem: raw === "" ? "empty: give a number in SI units" : `"${raw}" is not a number` });
+      if (raw === "" || !Number.isFinite(value))
+        problems.push({ row, field: column, problem: raw === "" ? "empty: give a number in SI units" : `"${raw}" is not a number` });
       else values[field] = value;
     }
     const checked = payloadTemplateValuesSchema.safeParse(values);

@@ -1,5 +1,15 @@
 import type { BalanceResult } from "@/lib/balance";
-import type { AttachmentView, DecisionOutcome, FlagCode, FlagLevel, PayloadCategory, ReviewReasonCode, Role, SetupStatus, UnitSystem } from "@/lib/domain";
+import type {
+  AttachmentView,
+  DecisionOutcome,
+  FlagCode,
+  FlagLevel,
+  PayloadCategory,
+  ReviewReasonCode,
+  Role,
+  SetupStatus,
+  UnitSystem,
+} from "@/lib/domain";
 import type { AppError } from "@/lib/errors";
 import type { SetupDraft } from "@/lib/setups/setup-draft";
 import { postWithUploadProgress, type UploadProgress } from "./upload-with-progress";
@@ -24,7 +34,8 @@ async function call<T>(method: string, url: string, body?: unknown): Promise<T> 
   });
   if (response.status === 204) return null as T;
   const data = (await response.json().catch(() => ({}))) as T & { error?: AppError };
-  if (!response.ok) throw new ApiError(response.status, data.error ?? { code: "internal", message: `The server answered ${response.status}.` });
+  if (!response.ok)
+    throw new ApiError(response.status, data.error ?? { code: "internal", message: `The server answered ${response.status}.` });
   return data;
 }
 
@@ -43,9 +54,11 @@ export const saveSetupRequest = (id: string, version: number, draft: SetupDraft)
 export const submitSetupRequest = (id: string, version: number, acknowledgeCautions: boolean) =>
   call<{ version: number; status: SetupStatus }>("POST", setupUrl(id, "/submit"), { version, acknowledgeCautions });
 
-export const savePreferencesRequest = (unitSystem: UnitSystem) => call<{ unitSystem: UnitSystem }>("PUT", "/api/me/preferences", { unitSystem });
+export const savePreferencesRequest = (unitSystem: UnitSystem) =>
+  call<{ unitSystem: UnitSystem }>("PUT", "/api/me/preferences", { unitSystem });
 
-export const changeRoleRequest = (userId: string, role: Role) => call<{ id: string; role: Role }>("PUT", `/api/users/${encodeURIComponent(userId)}/role`, { role });
+export const changeRoleRequest = (userId: string, role: Role) =>
+  call<{ id: string; role: Role }>("PUT", `/api/users/${encodeURIComponent(userId)}/role`, { role });
 
 // ---------------------------------------------------------------- the review desk
 
@@ -62,7 +75,8 @@ export interface QueueRowView {
   submittedAt: string | null;
 }
 
-export const fetchReviewQueue = (query: string) => call<{ rows: QueueRowView[]; total: number; page: number; pageSize: number }>("GET", `/api/review/queue?${query}`);
+export const fetchReviewQueue = (query: string) =>
+  call<{ rows: QueueRowView[]; total: number; page: number; pageSize: number }>("GET", `/api/review/queue?${query}`);
 
 export interface ThreadItemView {
   kind: "comment" | "decision";
@@ -82,8 +96,10 @@ export const addCommentRequest = (id: string, body: string) => call<{ id: string
 
 export const markThreadReadRequest = (id: string) => call<null>("PUT", setupUrl(id, "/read"));
 
-export const decideRequest = (id: string, input: { decision: DecisionOutcome; reason: string; reasonCodes: ReviewReasonCode[]; version: number }) =>
-  call<{ id: string; status: SetupStatus; version: number }>("POST", setupUrl(id, "/decision"), input);
+export const decideRequest = (
+  id: string,
+  input: { decision: DecisionOutcome; reason: string; reasonCodes: ReviewReasonCode[]; version: number },
+) => call<{ id: string; status: SetupStatus; version: number }>("POST", setupUrl(id, "/decision"), input);
 
 // ---------------------------------------------------------------- insight
 
@@ -106,7 +122,11 @@ export const fetchAttachments = (setupId: string) => call<{ attachments: Attachm
 export const deleteAttachmentRequest = (id: string) => call<null>("DELETE", `/api/attachments/${encodeURIComponent(id)}`);
 
 /** One file as multipart/form-data, with upload progress; a refusal arrives as an ApiError like any other. */
-export async function uploadAttachmentRequest(setupId: string, file: File, options: { onProgress?: (progress: UploadProgress) => void; signal?: AbortSignal } = {}): Promise<AttachmentView> {
+export async function uploadAttachmentRequest(
+  setupId: string,
+  file: File,
+  options: { onProgress?: (progress: UploadProgress) => void; signal?: AbortSignal } = {},
+): Promise<AttachmentView> {
   const form = new FormData();
   form.append("file", file, file.name);
   const answer = await postWithUploadProgress(setupUrl(setupId, "/attachments"), form, options);
@@ -116,13 +136,15 @@ export async function uploadAttachmentRequest(setupId: string, file: File, optio
   } catch {
     // not JSON (e.g. a proxy's error page): the status speaks
   }
-  if (answer.status < 200 || answer.status >= 300) throw new ApiError(answer.status, data.error ?? { code: "internal", message: `The server answered ${answer.status}.` });
+  if (answer.status < 200 || answer.status >= 300)
+    throw new ApiError(answer.status, data.error ?? { code: "internal", message: `The server answered ${answer.status}.` });
   return data as AttachmentView;
 }
 // ---------------------------------------------------------------- the Workshop (maker)
 
 export type CatalogueKindPath = "models" | "units" | "mounts" | "adapters" | "templates";
-const catalogueUrl = (kind: CatalogueKindPath, id?: string, rest = "") => `/api/catalogue/${kind}${id ? `/${encodeURIComponent(id)}` : ""}${rest}`;
+const catalogueUrl = (kind: CatalogueKindPath, id?: string, rest = "") =>
+  `/api/catalogue/${kind}${id ? `/${encodeURIComponent(id)}` : ""}${rest}`;
 
 /** Adds (id null) or replaces a catalogue item; the body is the kind's values in SI (lib/catalogue/schemas.ts). */
 export const saveCatalogueItemRequest = (kind: CatalogueKindPath, id: string | null, values: unknown) =>
@@ -136,9 +158,11 @@ export const deleteCatalogueItemRequest = (kind: CatalogueKindPath, id: string) 
 export const addLiftTestRequest = (unitId: string, values: unknown) =>
   call<{ id: string; calibrationFactor: number | null }>("POST", catalogueUrl("units", unitId, "/lift-tests"), values);
 
-export const deleteLiftTestRequest = (unitId: string, testId: string) => call<null>("DELETE", catalogueUrl("units", unitId, `/lift-tests/${encodeURIComponent(testId)}`));
+export const deleteLiftTestRequest = (unitId: string, testId: string) =>
+  call<null>("DELETE", catalogueUrl("units", unitId, `/lift-tests/${encodeURIComponent(testId)}`));
 
-export const importTemplatesRequest = (csv: string) => call<{ created: number; updated: number }>("POST", "/api/catalogue/templates/import", { csv });
+export const importTemplatesRequest = (csv: string) =>
+  call<{ created: number; updated: number }>("POST", "/api/catalogue/templates/import", { csv });
 
 /** The preview GLB of hull parameters not yet saved (maker only). */
 export const hullPreviewUrl = (hull: unknown) => `/api/catalogue/hull-preview.glb?hull=${encodeURIComponent(JSON.stringify(hull))}`;

@@ -18,7 +18,11 @@ export class UploadInterrupted extends Error {
   }
 }
 
-export function postWithUploadProgress(url: string, body: FormData, { onProgress, signal }: { onProgress?: (progress: UploadProgress) => void; signal?: AbortSignal } = {}): Promise<UploadAnswer> {
+export function postWithUploadProgress(
+  url: string,
+  body: FormData,
+  { onProgress, signal }: { onProgress?: (progress: UploadProgress) => void; signal?: AbortSignal } = {},
+): Promise<UploadAnswer> {
   return new Promise((resolve, reject) => {
     const xhr = new XMLHttpRequest();
     xhr.open("POST", url);

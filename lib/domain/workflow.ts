@@ -33,22 +33,39 @@ export const REVIEWER_ROLES: readonly Role[] = ["support", "maker"];
 
 export type TransitionVerdict = { ok: true; to: SetupStatus } | { ok: false; reason: "not_allowed" | "wrong_status"; message: string };
 
-const WORDS: Record<SetupStatus, string> = { draft: "a draft", submitted: "submitted", changes_requested: "sent back for changes", approved: "approved" };
+const WORDS: Record<SetupStatus, string> = {
+  draft: "a draft",
+  submitted: "submitted",
+  changes_requested: "sent back for changes",
+  approved: "approved",
+};
 
 /**
  * The status an action leads to, or why it may not be taken: by this person (their relation to the
  * setup and their role) from this status.
  */
-export function nextStatus({ action, from, isOwner, role }: { action: WorkflowAction; from: SetupStatus; isOwner: boolean; role: Role }): TransitionVerdict {
+export function nextStatus({
+  action,
+  from,
+  isOwner,
+  role,
+}: {
+  action: WorkflowAction;
+  from: SetupStatus;
+  isOwner: boolean;
+  role: Role;
+}): TransitionVerdict {
   const rule = WORKFLOW[action];
   if (rule.actor === "owner" && !isOwner) return { ok: false, reason: "not_allowed", message: "Only the setup's owner can do that." };
   if (rule.actor === "reviewer") {
-    if (!REVIEWER_ROLES.includes(role)) return { ok: false, reason: "not_allowed", message: "Only support staff or the maker can decide on a setup." };
+    if (!REVIEWER_ROLES.includes(role))
+      return { ok: false, reason: "not_allowed", message: "Only support staff or the maker can decide on a setup." };
     if (isOwner) return { ok: false, reason: "not_allowed", message: "A setup is reviewed by someone other than its owner." };
   }
   const to = rule.from[from];
   if (!to) {
-    const verb = action === "request_changes" ? "sent back" : action === "approve" ? "approved" : action === "submit" ? "submitted" : "edited";
+    const verb =
+      action === "request_changes" ? "sent back" : action === "approve" ? "approved" : action === "submit" ? "submitted" : "edited";
     return { ok: false, reason: "wrong_status", message: `A setup that is ${WORDS[from]} cannot be ${verb}.` };
   }
   return { ok: true, to };

@@ -47,7 +47,8 @@ export async function receiveSingleFile<H, T>(
   }
   // A declared length already past the cap is refused before a byte of the file is looked at.
   const declared = Number(request.headers.get("content-length") ?? "NaN");
-  if (Number.isFinite(declared) && declared > options.maxBytes + MULTIPART_OVERHEAD_BYTES) return fail("payload_too_large", options.tooLargeMessage);
+  if (Number.isFinite(declared) && declared > options.maxBytes + MULTIPART_OVERHEAD_BYTES)
+    return fail("payload_too_large", options.tooLargeMessage);
 
   const source = Readable.fromWeb(request.body as NodeReadableStream<Uint8Array>);
   const dir = await mkdtemp(path.join(os.tmpdir(), "trimrail-upload-"));
@@ -67,7 +68,11 @@ function streamToFile<H>(source: Readable, contentType: string, filePath: string
   return new Promise((resolve) => {
     let parser: busboy.Busboy;
     try {
-      parser = busboy({ headers: { "content-type": contentType }, limits: { files: 1, fileSize: options.maxBytes, fields: 4, parts: 5 }, defParamCharset: "utf8" });
+      parser = busboy({
+        headers: { "content-type": contentType },
+        limits: { files: 1, fileSize: options.maxBytes, fields: 4, parts: 5 },
+        defParamCharset: "utf8",
+      });
     } catch {
       resolve(fail("bad_request", "The multipart body has no boundary."));
       return;

@@ -2,7 +2,8 @@ import { fail, ok, type Result } from "@/lib/errors";
 
 export const MAX_JSON_BODY_BYTES = 256 * 1024;
 
-const isJson = (contentType: string | null) => contentType !== null && /^application\/(?:[\w.+-]+\+)?json\s*(?:;|$)/i.test(contentType.trim());
+const isJson = (contentType: string | null) =>
+  contentType !== null && /^application\/(?:[\w.+-]+\+)?json\s*(?:;|$)/i.test(contentType.trim());
 
 /**
  * Reads a JSON body with a size cap that holds while it streams: at the cap it stops reading and
@@ -10,7 +11,8 @@ const isJson = (contentType: string | null) => contentType !== null && /^applica
  * malformed JSON a 400. Nothing of a refused body reaches a schema or the database.
  */
 export async function readJsonBody(request: Request, maxBytes = MAX_JSON_BODY_BYTES): Promise<Result<unknown>> {
-  if (!isJson(request.headers.get("content-type"))) return fail("unsupported_media_type", "Send the body as JSON, with Content-Type: application/json.");
+  if (!isJson(request.headers.get("content-type")))
+    return fail("unsupported_media_type", "Send the body as JSON, with Content-Type: application/json.");
   const tooLarge = () => fail("payload_too_large", `The body is larger than ${maxBytes} bytes.`);
   const declared = Number(request.headers.get("content-length") ?? "0");
   if (declared > maxBytes) return tooLarge();

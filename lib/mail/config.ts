@@ -7,10 +7,7 @@ import path from "node:path";
 export const DEFAULT_MAIL_FROM = "Trimrail <no-reply@trimrail.test>";
 export const DEFAULT_MAIL_DIR = path.join("data", "mail");
 
-export type MailRoute =
-  | { kind: "smtp"; url: string }
-  | { kind: "fake"; host: "127.0.0.1"; port: number; dir: string }
-  | { kind: "none" };
+export type MailRoute = { kind: "smtp"; url: string } | { kind: "fake"; host: "127.0.0.1"; port: number; dir: string } | { kind: "none" };
 
 type Env = Record<string, string | undefined>;
 

@@ -69,7 +69,9 @@ export async function deliverDueMail({
         console.error(`[mail] gave up on ${row.kind} ${row.id} to ${row.toAddress} after ${row.attempts} attempts: ${failure}`);
       } else {
         tally.retrying += 1;
-        console.warn(`[mail] ${row.kind} ${row.id} to ${row.toAddress} failed (attempt ${row.attempts} of ${MAIL_MAX_ATTEMPTS}), next try ${retryAt?.toISOString()}: ${failure}`);
+        console.warn(
+          `[mail] ${row.kind} ${row.id} to ${row.toAddress} failed (attempt ${row.attempts} of ${MAIL_MAX_ATTEMPTS}), next try ${retryAt?.toISOString()}: ${failure}`,
+        );
       }
     }
     if (rows.length < BATCH_SIZE) break;

@@ -15,16 +15,41 @@ const escapeHtml = (value: string): string =>
 const SIGN_OFF = "Trimrail — planning estimates only; follow local aviation rules and make a test flight on a safety line.";
 
 /** One layout for every message: a heading, paragraphs, an optional quote, and one link. */
-function render(subject: string, { heading, paragraphs, quote, link }: { heading: string; paragraphs: string[]; quote?: string; link?: { label: string; url: string } }): MailContent {
-  const text = [heading, "", ...paragraphs.flatMap((p) => [p, ""]), ...(quote ? [quote.split("\n").map((l) => `> ${l}`).join("\n"), ""] : []), ...(link ? [`${link.label}: ${link.url}`, ""] : []), "--", SIGN_OFF].join("\n");
+function render(
+  subject: string,
+  { heading, paragraphs, quote, link }: { heading: string; paragraphs: string[]; quote?: string; link?: { label: string; url: string } },
+): MailContent {
+  const text = [
+    heading,
+    "",
+    ...paragraphs.flatMap((p) => [p, ""]),
+    ...(quote
+      ? [
+          quote
+            .split("\n")
+            .map((l) => `> ${l}`)
+            .join("\n"),
+          "",
+        ]
+      : []),
+    ...(link ? [`${link.label}: ${link.url}`, ""] : []),
+    "--",
+    SIGN_OFF,
+  ].join("\n");
   const html = [
     `<!doctype html><html lang="en"><head><meta charset="utf-8"><title>${escapeHtml(subject)}</title></head>`,
     `<body style="font-family:system-ui,sans-serif;color:#14202e;background:#f5f3ee;padding:16px">`,
     `<div style="max-width:560px;margin:auto;background:#fff;border:1px solid #d9d6cf;padding:20px">`,
     `<h1 style="font-size:18px;margin:0 0 12px">${escapeHtml(heading)}</h1>`,
     ...paragraphs.map((p) => `<p style="margin:0 0 12px;line-height:1.5">${escapeHtml(p)}</p>`),
-    ...(quote ? [`<blockquote style="margin:0 0 12px;padding:8px 12px;border-left:3px solid #1d7f7a;white-space:pre-wrap">${escapeHtml(quote)}</blockquote>`] : []),
-    ...(link ? [`<p style="margin:0 0 12px"><a href="${escapeHtml(link.url)}" style="color:#176b66">${escapeHtml(link.label)}</a></p>`] : []),
+    ...(quote
+      ? [
+          `<blockquote style="margin:0 0 12px;padding:8px 12px;border-left:3px solid #1d7f7a;white-space:pre-wrap">${escapeHtml(quote)}</blockquote>`,
+        ]
+      : []),
+    ...(link
+      ? [`<p style="margin:0 0 12px"><a href="${escapeHtml(link.url)}" style="color:#176b66">${escapeHtml(link.label)}</a></p>`]
+      : []),
     `<p style="margin:16px 0 0;font-size:12px;color:#5f6670">${escapeHtml(SIGN_OFF)}</p>`,
     `</div></body></html>`,
   ].join("\n");
@@ -71,7 +96,9 @@ export function decisionMail(f: SetupFacts & { decision: DecisionOutcome; reason
     heading: approved ? `“${f.setupName}” is approved for its first flight` : `“${f.setupName}” needs changes before its first flight`,
     paragraphs: [
       `${f.reviewerName} ${approved ? "approved it" : "sent it back"}. ${factsLine(f)}`,
-      ...(approved ? ["Print the field report and take it to the field; fly it first on a safety line."] : ["Change the setup in the Planner and submit it again."]),
+      ...(approved
+        ? ["Print the field report and take it to the field; fly it first on a safety line."]
+        : ["Change the setup in the Planner and submit it again."]),
     ],
     ...(f.reason ? { quote: f.reason } : {}),
     link: { label: "Open the setup", url: f.url },
@@ -81,7 +108,9 @@ export function decisionMail(f: SetupFacts & { decision: DecisionOutcome; reason
 export function passwordResetMail(f: { name: string; url: string }): MailContent {
   return render("Reset your Trimrail password", {
     heading: `Hello ${f.name}`,
-    paragraphs: ["Someone asked to reset the password of this account. If it was you, choose a new one with the link below within an hour. If it was not, ignore this message: nothing changes."],
+    paragraphs: [
+      "Someone asked to reset the password of this account. If it was you, choose a new one with the link below within an hour. If it was not, ignore this message: nothing changes.",
+    ],
     link: { label: "Choose a new password", url: f.url },
   });
 }

@@ -19,8 +19,7 @@ export const GORE_COUNT = 8;
 /** Seams sit this fraction outside the skin so they never z-fight with it. */
 const SEAM_LIFT_FRACTION = 0.004;
 
-export const BODY_FRAME_NOTE =
-  "Body frame, metres: x aft from the nose tip, y sideways, z up. Convert to y-up before drawing.";
+export const BODY_FRAME_NOTE = "Body frame, metres: x aft from the nose tip, y sideways, z up. Convert to y-up before drawing.";
 
 /** glTF colour factors are linear; our palette is written in sRGB. */
 function srgbHexToLinear(hex: string): [number, number, number, number] {
@@ -35,18 +34,30 @@ function smoothNormals(mesh: MeshData): Float32Array<ArrayBuffer> {
   const { positions, indices } = mesh;
   const normals = new Float32Array(positions.length);
   for (let t = 0; t < indices.length; t += 3) {
-    const a = indices[t] * 3, b = indices[t + 1] * 3, c = indices[t + 2] * 3;
-    const ux = positions[b] - positions[a], uy = positions[b + 1] - positions[a + 1], uz = positions[b + 2] - positions[a + 2];
-    const wx = positions[c] - positions[a], wy = positions[c + 1] - positions[a + 1], wz = positions[c + 2] - positions[a + 2];
+    const a = indices[t] * 3,
+      b = indices[t + 1] * 3,
+      c = indices[t + 2] * 3;
+    const ux = positions[b] - positions[a],
+      uy = positions[b + 1] - positions[a + 1],
+      uz = positions[b + 2] - positions[a + 2];
+    const wx = positions[c] - positions[a],
+      wy = positions[c + 1] - positions[a + 1],
+      wz = positions[c + 2] - positions[a + 2];
     // Area-weighted face normal (not normalised) so that small pole triangles weigh little.
-    const nx = uy * wz - uz * wy, ny = uz * wx - ux * wz, nz = ux * wy - uy * wx;
+    const nx = uy * wz - uz * wy,
+      ny = uz * wx - ux * wz,
+      nz = ux * wy - uy * wx;
     for (const v of [a, b, c]) {
-      normals[v] += nx; normals[v + 1] += ny; normals[v + 2] += nz;
+      normals[v] += nx;
+      normals[v + 1] += ny;
+      normals[v + 2] += nz;
     }
   }
   for (let v = 0; v < normals.length; v += 3) {
     const length = Math.hypot(normals[v], normals[v + 1], normals[v + 2]) || 1;
-    normals[v] /= length; normals[v + 1] /= length; normals[v + 2] /= length;
+    normals[v] /= length;
+    normals[v + 1] /= length;
+    normals[v + 2] /= length;
   }
   return normals;
 }
@@ -59,15 +70,25 @@ function flatFinBuffers(mesh: MeshData): { positions: Float32Array<ArrayBuffer>;
   for (let t = 0; t < indices.length; t += 3) {
     const corners = [indices[t] * 3, indices[t + 1] * 3, indices[t + 2] * 3];
     const [a, b, c] = corners;
-    const ux = source[b] - source[a], uy = source[b + 1] - source[a + 1], uz = source[b + 2] - source[a + 2];
-    const wx = source[c] - source[a], wy = source[c + 1] - source[a + 1], wz = source[c + 2] - source[a + 2];
-    let nx = uy * wz - uz * wy, ny = uz * wx - ux * wz, nz = ux * wy - uy * wx;
+    const ux = source[b] - source[a],
+      uy = source[b + 1] - source[a + 1],
+      uz = source[b + 2] - source[a + 2];
+    const wx = source[c] - source[a],
+      wy = source[c + 1] - source[a + 1],
+      wz = source[c + 2] - source[a + 2];
+    let nx = uy * wz - uz * wy,
+      ny = uz * wx - ux * wz,
+      nz = ux * wy - uy * wx;
     const length = Math.hypot(nx, ny, nz) || 1;
-    nx /= length; ny /= length; nz /= length;
+    nx /= length;
+    ny /= length;
+    nz /= length;
     corners.forEach((corner, k) => {
       const out = (t + k) * 3;
       positions.set(source.subarray(corner, corner + 3), out);
-      normals[out] = nx; normals[out + 1] = ny; normals[out + 2] = nz;
+      normals[out] = nx;
+      normals[out + 1] = ny;
+      normals[out + 2] = nz;
     });
   }
   return { positions, normals };
@@ -115,33 +136,39 @@ export function buildEnvelopeDocument(key: string, params: Readonly<HullParams>)
   };
   const buffer = doc.createBuffer();
   const material = (name: string, hex: string, roughness: number): Material =>
-    doc.createMaterial(name)
-      .setBaseColorFactor(srgbHexToLinear(hex))
-      .setRoughnessFactor(roughness)
-      .setMetallicFactor(0);
+    doc.createMaterial(name).setBaseColorFactor(srgbHexToLinear(hex)).setRoughnessFactor(roughness).setMetallicFactor(0);
 
   const hullMesh = buildHullMesh(params, MODEL_RESOLUTION);
   const hullVertexCount = hullMesh.positions.length / 3;
-  const hullPrimitive = doc.createPrimitive()
-    .setAttribute("POSITION", doc.createAccessor("hull-position").setType("VEC3").setArray(Float32Array.from(hullMesh.positions)).setBuffer(buffer))
+  const hullPrimitive = doc
+    .createPrimitive()
+    .setAttribute(
+      "POSITION",
+      doc.createAccessor("hull-position").setType("VEC3").setArray(Float32Array.from(hullMesh.positions)).setBuffer(buffer),
+    )
     .setAttribute("NORMAL", doc.createAccessor("hull-normal").setType("VEC3").setArray(smoothNormals(hullMesh)).setBuffer(buffer))
-    .setIndices(doc.createAccessor("hull-index").setType("SCALAR").setArray(compactIndices(hullMesh.indices, hullVertexCount)).setBuffer(buffer))
+    .setIndices(
+      doc.createAccessor("hull-index").setType("SCALAR").setArray(compactIndices(hullMesh.indices, hullVertexCount)).setBuffer(buffer),
+    )
     .setMaterial(material("envelope-fabric", "#d9dcdf", 0.9));
 
   const fins = flatFinBuffers(buildFinMesh(params));
-  const finPrimitive = doc.createPrimitive()
+  const finPrimitive = doc
+    .createPrimitive()
     .setAttribute("POSITION", doc.createAccessor("fins-position").setType("VEC3").setArray(fins.positions).setBuffer(buffer))
     .setAttribute("NORMAL", doc.createAccessor("fins-normal").setType("VEC3").setArray(fins.normals).setBuffer(buffer))
     .setMaterial(material("fin-fabric", "#b9bec3", 0.9));
 
   const seams = seamLines(hullMesh, MODEL_RESOLUTION.segments);
-  const seamPrimitive = doc.createPrimitive()
+  const seamPrimitive = doc
+    .createPrimitive()
     .setMode(1) // LINES
     .setAttribute("POSITION", doc.createAccessor("seams-position").setType("VEC3").setArray(seams.positions).setBuffer(buffer))
     .setIndices(doc.createAccessor("seams-index").setType("SCALAR").setArray(seams.indices).setBuffer(buffer))
     .setMaterial(material("seam-tape", "#8e959c", 1));
 
-  const envelope = doc.createNode("envelope_body_frame_x_aft_y_side_z_up")
+  const envelope = doc
+    .createNode("envelope_body_frame_x_aft_y_side_z_up")
     .setExtras({ note: BODY_FRAME_NOTE })
     .addChild(doc.createNode("hull").setMesh(doc.createMesh("hull").addPrimitive(hullPrimitive)))
     .addChild(doc.createNode("fins").setMesh(doc.createMesh("fins").addPrimitive(finPrimitive)))
@@ -149,7 +176,6 @@ export function buildEnvelopeDocument(key: string, params: Readonly<HullParams>)
   doc.createScene(key).addChild(envelope);
   return doc;
 }
-
 
 /** The GLB bytes of a hull. WebIO needs no file system, so it runs in a route handler as in a script. */
 export async function envelopeGlbBytes(key: string, params: Readonly<HullParams>): Promise<Uint8Array> {

@@ -115,7 +115,11 @@ export async function renderFieldReportPdf(report: FieldReport): Promise<Uint8Ar
   w.text(report.title, { size: 18, font: w.bold });
   w.text(report.subtitle, { colour: MUTED, size: 9 });
   w.space(10);
-  w.text(report.review.headline, { size: report.review.state === "approved" ? 20 : 26, font: w.bold, colour: report.review.state === "approved" ? LEVEL_COLOUR.ok : LEVEL_COLOUR.stop });
+  w.text(report.review.headline, {
+    size: report.review.state === "approved" ? 20 : 26,
+    font: w.bold,
+    colour: report.review.state === "approved" ? LEVEL_COLOUR.ok : LEVEL_COLOUR.stop,
+  });
   if (report.review.detail) w.text(report.review.detail);
 
   for (const section of report.sections) {
@@ -126,7 +130,8 @@ export async function renderFieldReportPdf(report: FieldReport): Promise<Uint8Ar
   if (report.payloads.rows.length) w.table(report.payloads);
   else w.text("No payloads.");
   w.heading("Flags");
-  for (const flag of report.flags) w.text(`${flag.level.toUpperCase()}  ${flag.text}`, { colour: flag.level === "ok" ? INK : LEVEL_COLOUR[flag.level] });
+  for (const flag of report.flags)
+    w.text(`${flag.level.toUpperCase()}  ${flag.text}`, { colour: flag.level === "ok" ? INK : LEVEL_COLOUR[flag.level] });
   if (report.envelope) {
     w.heading("Operating envelope");
     w.table(report.envelope);

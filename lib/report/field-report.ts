@@ -61,7 +61,12 @@ const deg = (value: number | null | undefined): string => (value === null || val
 
 function reviewOf(f: FieldReportFacts): ReportReview {
   const d = f.latestDecision;
-  if (!d) return { state: "not_reviewed", headline: "NOT REVIEWED", detail: "Support has not reviewed this setup. Submit it for review before its first flight." };
+  if (!d)
+    return {
+      state: "not_reviewed",
+      headline: "NOT REVIEWED",
+      detail: "Support has not reviewed this setup. Submit it for review before its first flight.",
+    };
   const when = `${d.reviewerName}, ${DAY.format(d.at)}, on version ${d.setupVersion}`;
   if (d.outcome === "approved" && f.status === "approved" && d.setupVersion === f.version) {
     return { state: "approved", headline: "APPROVED FOR FIRST FLIGHT", detail: `${when}.${d.note ? ` “${d.note}”` : ""}` };
@@ -69,7 +74,11 @@ function reviewOf(f: FieldReportFacts): ReportReview {
   if (d.outcome === "changes_requested" && f.status === "changes_requested") {
     return { state: "changes_requested", headline: "CHANGES REQUESTED — NOT APPROVED", detail: `${when}: “${d.note}”` };
   }
-  return { state: "not_reviewed", headline: "NOT REVIEWED", detail: `This version has not been reviewed; the last decision (${d.outcome === "approved" ? "approved" : "changes requested"}) was by ${when}.` };
+  return {
+    state: "not_reviewed",
+    headline: "NOT REVIEWED",
+    detail: `This version has not been reviewed; the last decision (${d.outcome === "approved" ? "approved" : "changes requested"}) was by ${when}.`,
+  };
 }
 
 export function buildFieldReport(f: FieldReportFacts): FieldReport {
@@ -90,7 +99,10 @@ export function buildFieldReport(f: FieldReportFacts): FieldReport {
           { label: "Envelope model", value: f.modelName },
           { label: "Serial unit", value: f.unitText ?? "none: the model's nominal figures" },
           { label: "Mount", value: `${f.mount.name} (${f.mount.thread}, rated ${q("mass", f.mount.ratedLoadKg)})` },
-          { label: "Mount position", value: `${q("length", draft.mountPositionXM, 3)} from the nose (${formatFixed(railFraction * 100, 0)} % along the rail)` },
+          {
+            label: "Mount position",
+            value: `${q("length", draft.mountPositionXM, 3)} from the nose (${formatFixed(railFraction * 100, 0)} % along the rail)`,
+          },
         ],
       },
       {
@@ -98,7 +110,13 @@ export function buildFieldReport(f: FieldReportFacts): FieldReport {
         rows: [
           { label: "Site", value: draft.site.siteName || "not named" },
           { label: "Altitude", value: q("length", draft.site.altitudeM, 0) },
-          { label: "Air temperature", value: draft.site.temperatureC === null ? `standard (${q("temperature", result.airTemperatureK - 273.15)})` : q("temperature", draft.site.temperatureC) },
+          {
+            label: "Air temperature",
+            value:
+              draft.site.temperatureC === null
+                ? `standard (${q("temperature", result.airTemperatureK - 273.15)})`
+                : q("temperature", draft.site.temperatureC),
+          },
           { label: "Wind", value: q("speed", draft.site.windMS) },
           { label: "Gusts", value: draft.site.gustMS === null ? "none given" : q("speed", draft.site.gustMS) },
         ],
@@ -111,7 +129,10 @@ export function buildFieldReport(f: FieldReportFacts): FieldReport {
           { label: "Superheat", value: q("temperatureDifference", draft.gas.superheatK) },
           { label: "Helium to fill", value: q("volume", result.helium.fillVolumeM3) },
           { label: "Cylinders", value: `${result.helium.cylindersNeeded} × ${q("volume", result.helium.cylinderContentM3, 2)}` },
-          { label: "Days to a top-up", value: result.helium.daysToTopUp === null ? "none predicted" : `${formatFixed(result.helium.daysToTopUp, 1)} days` },
+          {
+            label: "Days to a top-up",
+            value: result.helium.daysToTopUp === null ? "none predicted" : `${formatFixed(result.helium.daysToTopUp, 1)} days`,
+          },
         ],
       },
       {
@@ -133,8 +154,18 @@ export function buildFieldReport(f: FieldReportFacts): FieldReport {
           { label: "Free lift", value: q("mass", result.freeLiftKg) },
           { label: "Free-lift ratio", value: q("ratio", result.freeLiftRatio) },
           { label: "Calm trim (nose up +)", value: deg(result.calmTrimDeg) },
-          { label: `Wind ${q("speed", result.wind?.speedMS ?? draft.site.windMS)}`, value: result.wind ? `trim ${deg(result.wind.trimDeg)}, tether ${deg(result.wind.tetherAngleDeg)} from vertical, tension ${q("force", result.wind.tensionN)}` : "none" },
-          { label: `Gusts ${q("speed", result.gust?.speedMS ?? draft.site.gustMS ?? 0)}`, value: result.gust ? `trim ${deg(result.gust.trimDeg)}, tether ${deg(result.gust.tetherAngleDeg)} from vertical, tension ${q("force", result.gust.tensionN)}` : "none" },
+          {
+            label: `Wind ${q("speed", result.wind?.speedMS ?? draft.site.windMS)}`,
+            value: result.wind
+              ? `trim ${deg(result.wind.trimDeg)}, tether ${deg(result.wind.tetherAngleDeg)} from vertical, tension ${q("force", result.wind.tensionN)}`
+              : "none",
+          },
+          {
+            label: `Gusts ${q("speed", result.gust?.speedMS ?? draft.site.gustMS ?? 0)}`,
+            value: result.gust
+              ? `trim ${deg(result.gust.trimDeg)}, tether ${deg(result.gust.tetherAngleDeg)} from vertical, tension ${q("force", result.gust.tensionN)}`
+              : "none",
+          },
         ],
       },
     ],

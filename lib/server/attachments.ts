@@ -41,7 +41,17 @@ function toView(row: AttachmentRow): AttachmentView {
   const contentType = isAttachmentContentType(row.contentType) ? row.contentType : "application/pdf";
   const kind = attachmentKind(contentType);
   const url = `/api/attachments/${encodeURIComponent(row.id)}`;
-  return { id: row.id, setupId: row.setupId, fileName: row.fileName, contentType, kind, sizeBytes: row.sizeBytes, createdAt: row.createdAt.toISOString(), url, thumbnailUrl: kind === "image" ? `${url}/thumbnail` : null };
+  return {
+    id: row.id,
+    setupId: row.setupId,
+    fileName: row.fileName,
+    contentType,
+    kind,
+    sizeBytes: row.sizeBytes,
+    createdAt: row.createdAt.toISOString(),
+    url,
+    thumbnailUrl: kind === "image" ? `${url}/thumbnail` : null,
+  };
 }
 
 const storeMissing = () => fail("unavailable", "Attachments are not set up on this server: no file store is configured (S3_BUCKET).");
@@ -71,7 +81,13 @@ async function readableAttachment(viewer: Viewer, id: string): Promise<Result<At
   return ok(row);
 }
 
-export async function listAttachments({ viewer, setupId }: { viewer: Viewer; setupId: string }): Promise<Result<{ attachments: AttachmentView[] }>> {
+export async function listAttachments({
+  viewer,
+  setupId,
+}: {
+  viewer: Viewer;
+  setupId: string;
+}): Promise<Result<{ attachments: AttachmentView[] }>> {
   const setup = await readableSetup(viewer, setupId);
   if (!setup.ok) return setup;
   return ok({ attachments: (await attachmentsDb.listAttachmentsForSetup({ setupId })).map(toView) });
@@ -80,7 +96,10 @@ export async function listAttachments({ viewer, setupId }: { viewer: Viewer; set
 /** The name kept for display: the last path segment, printable characters only, not too long. */
 export function displayFileName(given: string): string {
   const base = given.split(/[\\/]/).pop() ?? "";
-  const clean = base.replace(/[\u0000-\u001f\u007f]+/g, "").replace(/\s+/g, " ").trim();
+  const clean = base
+    .replace(/[\u0000-\u001f\u007f]+/g, "")
+    .replace(/\s+/g, " ")
+    .trim();
   return clean.slice(-ATTACHMENT_NAME_MAX_LENGTH) || "attachment";
 }
 
@@ -91,7 +110,10 @@ async function checkHead(head: Uint8Array): Promise<Result<AttachmentContentType
   const { contentType, detected } = await sniffAttachmentType(head);
   if (contentType) return ok(contentType);
   const what = detected ? `its content is ${detected}` : "its content is not a format we know (text or HTML, perhaps)";
-  return fail("unsupported_media_type", `Only photos (JPEG, PNG, WebP) and PDF datasheets can be attached: ${what}, whatever its name says.`);
+  return fail(
+    "unsupported_media_type",
+    `Only photos (JPEG, PNG, WebP) and PDF datasheets can be attached: ${what}, whatever its name says.`,
+  );
 }
 
 interface StoredObject {
@@ -119,7 +141,9 @@ async function objectsFor(file: ReceivedFile, contentType: AttachmentContentType
 async function deleteObjectsQuietly(store: ObjectStore, keys: string[], why: string): Promise<void> {
   await Promise.all(
     keys.map((key) =>
-      store.delete(key).catch((error: unknown) => console.error(`[attachments] could not delete object ${key} (${why}); it is left in the store`, error)),
+      store
+        .delete(key)
+        .catch((error: unknown) => console.error(`[attachments] could not delete object ${key} (${why}); it is left in the store`, error)),
     ),
   );
 }
@@ -130,45 +154,69 @@ async function deleteObjectsQuietly(store: ObjectStore, keys: string[], why: str
  * (413) or its first bytes are not an accepted type (415). Writes the objects, then the row; if
  * the row cannot be written the objects are deleted again.
  */
-export async function addAttachment({ viewer, setupId, request }: { viewer: Viewer; setupId: string; request: Request }): Promise<Result<AttachmentView>> {
+export async function addAttachment({
+  viewer,
+  setupId,
+  request,
+}: {
+  viewer: Viewer;
+  setupId: string;
+  request: Request;
+}): Promise<Result<AttachmentView>> {
   const store = getObjectStore();
   if (!store) return storeMissing();
   const setup = await ownSetup(viewer, setupId, () => fail("not_found", SETUP_NOT_FOUND));
   if (!setup.ok) return setup;
   if ((await attachmentsDb.countAttachmentsForSetup({ setupId })) >= ATTACHMENTS_PER_SETUP_MAX) return fail("conflict", FULL);
 
-  return receiveSingleFile(request, { maxBytes: ATTACHMENT_MAX_BYTES, headBytes: SNIFF_BYTES, checkHead, tooLargeMessage: TOO_LARGE }, async (file, contentType) => {
-    const storageKey = newStorageKey();
-    const objects = await objectsFor(file, contentType, storageKey);
-    if (!objects.ok) return objects;
-    const written: string[] = [];
-    try {
-      for (const object of objects.data) {
-        const body = object.body instanceof Uint8Array ? object.body : createReadStream(object.body.path);
-        await store.put({ key: object.key, body, sizeBytes: object.sizeBytes, contentType: object.contentType });
-        written.push(object.key);
+  return receiveSingleFile(
+    request,
+    { maxBytes: ATTACHMENT_MAX_BYTES, headBytes: SNIFF_BYTES, checkHead, tooLargeMessage: TOO_LARGE },
+    async (file, contentType) => {
+      const storageKey = newStorageKey();
+      const objects = await objectsFor(file, contentType, storageKey);
+      if (!objects.ok) return objects;
+      const written: string[] = [];
+      try {
+        for (const object of objects.data) {
+          const body = object.body instanceof Uint8Array ? object.body : createReadStream(object.body.path);
+          await store.put({ key: object.key, body, sizeBytes: object.sizeBytes, contentType: object.contentType });
+          written.push(object.key);
+        }
+      } catch (error) {
+        await deleteObjectsQuietly(store, written, "an upload failed part-way");
+        return storeDown(error, "storing an upload");
       }
-    } catch (error) {
-      await deleteObjectsQuietly(store, written, "an upload failed part-way");
-      return storeDown(error, "storing an upload");
-    }
-    let outcome: attachmentsDb.InsertAttachmentOutcome;
-    try {
-      outcome = await attachmentsDb.insertAttachment({
-        row: { id: randomUUID(), setupId, uploaderId: viewer.id, fileName: displayFileName(file.fileName), contentType, sizeBytes: objects.data[0].sizeBytes, storageKey },
-        cap: ATTACHMENTS_PER_SETUP_MAX,
-      });
-    } catch (error) {
-      await deleteObjectsQuietly(store, written, "its row could not be written");
-      throw error;
-    }
-    if (outcome.kind === "inserted") return ok(toView(outcome.row));
-    await deleteObjectsQuietly(store, written, "its row was refused");
-    return outcome.kind === "full" ? fail("conflict", FULL) : fail("not_found", SETUP_NOT_FOUND);
-  });
+      let outcome: attachmentsDb.InsertAttachmentOutcome;
+      try {
+        outcome = await attachmentsDb.insertAttachment({
+          row: {
+            id: randomUUID(),
+            setupId,
+            uploaderId: viewer.id,
+            fileName: displayFileName(file.fileName),
+            contentType,
+            sizeBytes: objects.data[0].sizeBytes,
+            storageKey,
+          },
+          cap: ATTACHMENTS_PER_SETUP_MAX,
+        });
+      } catch (error) {
+        await deleteObjectsQuietly(store, written, "its row could not be written");
+        throw error;
+      }
+      if (outcome.kind === "inserted") return ok(toView(outcome.row));
+      await deleteObjectsQuietly(store, written, "its row was refused");
+      return outcome.kind === "full" ? fail("conflict", FULL) : fail("not_found", SETUP_NOT_FOUND);
+    },
+  );
 }
 
-async function fileFrom(store: ObjectStore, key: string, what: string): Promise<Result<{ body: ReadableStream<Uint8Array>; sizeBytes: number | null }>> {
+async function fileFrom(
+  store: ObjectStore,
+  key: string,
+  what: string,
+): Promise<Result<{ body: ReadableStream<Uint8Array>; sizeBytes: number | null }>> {
   try {
     const object = await store.get(key);
     if (object) return ok(object);
@@ -191,7 +239,14 @@ export async function getAttachmentFile({ viewer, id }: { viewer: Viewer; id: st
   const file = await fileFrom(store, row.data.storageKey, `attachment ${id}`);
   if (!file.ok) return file;
   const { contentType, fileName } = toView(row.data);
-  return ok({ bytes: file.data.body, sizeBytes: file.data.sizeBytes, contentType, fileName, disposition: contentType === "application/pdf" ? "attachment" : "inline", cacheControl: KEEP_PRIVATELY });
+  return ok({
+    bytes: file.data.body,
+    sizeBytes: file.data.sizeBytes,
+    contentType,
+    fileName,
+    disposition: contentType === "application/pdf" ? "attachment" : "inline",
+    cacheControl: KEEP_PRIVATELY,
+  });
 }
 
 /** A photo's thumbnail (GET /api/attachments/:id/thumbnail); a PDF has none (404). */
@@ -204,7 +259,14 @@ export async function getAttachmentThumbnail({ viewer, id }: { viewer: Viewer; i
   const file = await fileFrom(store, thumbnailKeyFor(row.data.storageKey), `the thumbnail of attachment ${id}`);
   if (!file.ok) return file;
   const name = `${row.data.fileName.replace(/\.[^.]*$/, "")}-thumbnail.webp`;
-  return ok({ bytes: file.data.body, sizeBytes: file.data.sizeBytes, contentType: THUMBNAIL_CONTENT_TYPE, fileName: name, disposition: "inline", cacheControl: KEEP_PRIVATELY });
+  return ok({
+    bytes: file.data.body,
+    sizeBytes: file.data.sizeBytes,
+    contentType: THUMBNAIL_CONTENT_TYPE,
+    fileName: name,
+    disposition: "inline",
+    cacheControl: KEEP_PRIVATELY,
+  });
 }
 
 /**
@@ -235,5 +297,9 @@ export async function deleteStoredAttachmentObjects(storageKeys: string[]): Prom
     console.error(`[attachments] no file store is configured; ${storageKeys.length} deleted attachment(s) are left in the old one`);
     return;
   }
-  await deleteObjectsQuietly(store, storageKeys.flatMap((key) => [key, thumbnailKeyFor(key)]), "its setup was deleted");
+  await deleteObjectsQuietly(
+    store,
+    storageKeys.flatMap((key) => [key, thumbnailKeyFor(key)]),
+    "its setup was deleted",
+  );
 }

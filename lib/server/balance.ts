@@ -1,5 +1,12 @@
 import "server-only";
-import { evaluateBalance, operatingEnvelope, type BalanceInput, type BalanceResult, type OperatingEnvelope, type OperatingEnvelopeRequest } from "@/lib/balance";
+import {
+  evaluateBalance,
+  operatingEnvelope,
+  type BalanceInput,
+  type BalanceResult,
+  type OperatingEnvelope,
+  type OperatingEnvelopeRequest,
+} from "@/lib/balance";
 import { ok, type Result } from "@/lib/errors";
 
 /** One balance evaluation of a validated input; a mount off the rail is a flag in the result, not an error. */

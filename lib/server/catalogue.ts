@@ -27,7 +27,9 @@ type SimpleKind = "mounts" | "adapters" | "templates";
 
 const notFound = (kind: CatalogueKind) => fail("not_found", `No such ${CATALOGUE_KIND_WORDS[kind].one}.`);
 const taken = (kind: CatalogueKind, field: string) =>
-  fail("conflict", `Another ${CATALOGUE_KIND_WORDS[kind].one} already has that ${field}.`, [{ path: field, message: `already used by another ${CATALOGUE_KIND_WORDS[kind].one}` }]);
+  fail("conflict", `Another ${CATALOGUE_KIND_WORDS[kind].one} already has that ${field}.`, [
+    { path: field, message: `already used by another ${CATALOGUE_KIND_WORDS[kind].one}` },
+  ]);
 
 function fromOutcome<T>(kind: CatalogueKind, outcome: writes.WriteOutcome<T>): Result<T> {
   switch (outcome.kind) {
@@ -38,7 +40,10 @@ function fromOutcome<T>(kind: CatalogueKind, outcome: writes.WriteOutcome<T>): R
     case "taken":
       return taken(kind, outcome.field);
     case "in_use":
-      return fail("conflict", `${outcome.setupCount} setup${outcome.setupCount === 1 ? "" : "s"} use this ${CATALOGUE_KIND_WORDS[kind].one}: retire it instead, so those setups keep working.`);
+      return fail(
+        "conflict",
+        `${outcome.setupCount} setup${outcome.setupCount === 1 ? "" : "s"} use this ${CATALOGUE_KIND_WORDS[kind].one}: retire it instead, so those setups keep working.`,
+      );
     case "has_units":
       return fail("conflict", "Serial units of this model exist: retire the model instead, or delete its units first.");
   }
@@ -104,9 +109,20 @@ function modelColumns(values: EnvelopeModelValues, glbPath: string): writes.Mode
 
 const sameHull = (a: HullParams, b: HullParams) => JSON.stringify(a) === JSON.stringify(b);
 
-export async function saveEnvelopeModel({ viewer, id, values }: { viewer: Viewer; id: string | null; values: EnvelopeModelValues }): Promise<Result<{ id: string }>> {
+export async function saveEnvelopeModel({
+  viewer,
+  id,
+  values,
+}: {
+  viewer: Viewer;
+  id: string | null;
+  values: EnvelopeModelValues;
+}): Promise<Result<{ id: string }>> {
   if (id === null) {
-    return fromOutcome("models", await writes.createEnvelopeModel({ actorId: viewer.id, columns: (newId) => modelColumns(values, envelopeGlbRoute(newId)) }));
+    return fromOutcome(
+      "models",
+      await writes.createEnvelopeModel({ actorId: viewer.id, columns: (newId) => modelColumns(values, envelopeGlbRoute(newId)) }),
+    );
   }
   // A model whose hull changed is drawn from the route; an unchanged one keeps its file.
   const outcome = await writes.updateEnvelopeModel({
@@ -119,7 +135,8 @@ export async function saveEnvelopeModel({ viewer, id, values }: { viewer: Viewer
 
 /** Bumped when the GLB builder's output changes, so old ETags stop matching. */
 const GLB_BUILDER_VERSION = "1";
-const etagOfHull = (hull: HullParams): string => `"${createHash("sha256").update(GLB_BUILDER_VERSION).update(JSON.stringify(hull)).digest("base64url").slice(0, 27)}"`;
+const etagOfHull = (hull: HullParams): string =>
+  `"${createHash("sha256").update(GLB_BUILDER_VERSION).update(JSON.stringify(hull)).digest("base64url").slice(0, 27)}"`;
 
 /** A few recent GLBs by ETag: the same hull is asked for by every Planner that opens the model. */
 const glbCache = new Map<string, Uint8Array>();
@@ -135,7 +152,14 @@ async function glbOf(etag: string, name: string, hull: HullParams): Promise<Uint
 
 function glbFile(name: string, hull: HullParams): FileBody {
   const etag = etagOfHull(hull);
-  return { bytes: () => glbOf(etag, name, hull), contentType: "model/gltf-binary", fileName: `${name}.glb`, disposition: "inline", etag, cacheControl: "private, no-cache" };
+  return {
+    bytes: () => glbOf(etag, name, hull),
+    contentType: "model/gltf-binary",
+    fileName: `${name}.glb`,
+    disposition: "inline",
+    etag,
+    cacheControl: "private, no-cache",
+  };
 }
 
 /** A model's envelope as GLB, built from its stored hull: anyone signed in may draw a model. */
@@ -153,21 +177,47 @@ export async function hullPreviewGlb({ hull }: { viewer: Viewer; hull: HullParam
 
 const today = () => new Date().toISOString().slice(0, 10);
 
-export async function saveEnvelopeUnit({ viewer, id, values }: { viewer: Viewer; id: string | null; values: EnvelopeUnitValues }): Promise<Result<{ id: string }>> {
+export async function saveEnvelopeUnit({
+  viewer,
+  id,
+  values,
+}: {
+  viewer: Viewer;
+  id: string | null;
+  values: EnvelopeUnitValues;
+}): Promise<Result<{ id: string }>> {
   const outcome = await writes.saveEnvelopeUnit({ actorId: viewer.id, id, values, today: today() });
-  if (outcome.kind === "bad") return fail("bad_request", `The unit cannot be saved: ${outcome.message}.`, [{ path: outcome.field, message: outcome.message }]);
+  if (outcome.kind === "bad")
+    return fail("bad_request", `The unit cannot be saved: ${outcome.message}.`, [{ path: outcome.field, message: outcome.message }]);
   return fromOutcome("units", outcome);
 }
 
-export async function addUnitLiftTest({ viewer, unitId, values }: { viewer: Viewer; unitId: string; values: LiftTestValues }): Promise<Result<{ id: string; calibrationFactor: number | null }>> {
-  if (values.testedOn > today()) return fail("bad_request", "A lift test cannot be dated in the future.", [{ path: "testedOn", message: "after today" }]);
+export async function addUnitLiftTest({
+  viewer,
+  unitId,
+  values,
+}: {
+  viewer: Viewer;
+  unitId: string;
+  values: LiftTestValues;
+}): Promise<Result<{ id: string; calibrationFactor: number | null }>> {
+  if (values.testedOn > today())
+    return fail("bad_request", "A lift test cannot be dated in the future.", [{ path: "testedOn", message: "after today" }]);
   const outcome = await writes.addLiftTest({ actorId: viewer.id, unitId, values });
   if (outcome.kind !== "ok") return fromOutcome("units", outcome);
   const unit = await catalogueDb.getUnitById({ id: unitId });
   return ok({ id: outcome.data.id, calibrationFactor: unit?.calibrationFactor ?? null });
 }
 
-export async function removeUnitLiftTest({ viewer, unitId, testId }: { viewer: Viewer; unitId: string; testId: string }): Promise<Result<{ id: string }>> {
+export async function removeUnitLiftTest({
+  viewer,
+  unitId,
+  testId,
+}: {
+  viewer: Viewer;
+  unitId: string;
+  testId: string;
+}): Promise<Result<{ id: string }>> {
   const outcome = await writes.deleteLiftTest({ actorId: viewer.id, unitId, testId });
   return outcome.kind === "not_found" ? fail("not_found", "No such lift test on this unit.") : fromOutcome("units", outcome);
 }
@@ -176,15 +226,43 @@ export async function removeUnitLiftTest({ viewer, unitId, testId }: { viewer: V
 
 type ValuesOf<K extends SimpleKind> = K extends "mounts" ? MountValues : K extends "adapters" ? AdapterValues : PayloadTemplateValues;
 
-export async function saveCatalogueItem<K extends SimpleKind>({ viewer, kind, id, values }: { viewer: Viewer; kind: K; id: string | null; values: ValuesOf<K> }): Promise<Result<{ id: string }>> {
+export async function saveCatalogueItem<K extends SimpleKind>({
+  viewer,
+  kind,
+  id,
+  values,
+}: {
+  viewer: Viewer;
+  kind: K;
+  id: string | null;
+  values: ValuesOf<K>;
+}): Promise<Result<{ id: string }>> {
   return fromOutcome(kind, await writes.saveSimpleItem({ actorId: viewer.id, kind, id, values }));
 }
 
-export async function setCatalogueItemActive({ viewer, kind, id, active }: { viewer: Viewer; kind: CatalogueKind; id: string; active: boolean }): Promise<Result<{ id: string; active: boolean }>> {
+export async function setCatalogueItemActive({
+  viewer,
+  kind,
+  id,
+  active,
+}: {
+  viewer: Viewer;
+  kind: CatalogueKind;
+  id: string;
+  active: boolean;
+}): Promise<Result<{ id: string; active: boolean }>> {
   return fromOutcome(kind, await writes.setCatalogueItemActive({ actorId: viewer.id, kind, id, active }));
 }
 
-export async function deleteCatalogueItem({ viewer, kind, id }: { viewer: Viewer; kind: CatalogueKind; id: string }): Promise<Result<{ id: string }>> {
+export async function deleteCatalogueItem({
+  viewer,
+  kind,
+  id,
+}: {
+  viewer: Viewer;
+  kind: CatalogueKind;
+  id: string;
+}): Promise<Result<{ id: string }>> {
   return fromOutcome(kind, await writes.deleteCatalogueItem({ actorId: viewer.id, kind, id }));
 }
 
@@ -197,7 +275,13 @@ export async function exportTemplatesCsv(_: { viewer: Viewer }): Promise<Result<
 }
 
 /** Imports every row or none: any bad row is a 422 naming each row, column and problem, and nothing is written. */
-export async function importTemplatesCsv({ viewer, csv }: { viewer: Viewer; csv: string }): Promise<Result<{ created: number; updated: number }>> {
+export async function importTemplatesCsv({
+  viewer,
+  csv,
+}: {
+  viewer: Viewer;
+  csv: string;
+}): Promise<Result<{ created: number; updated: number }>> {
   const parsed = parseTemplatesCsv(csv);
   const refuse = (problems: CsvProblem[]): Result<never> => ({
     ok: false,

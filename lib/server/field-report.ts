@@ -8,7 +8,6 @@ import { buildFieldReport, type FieldReport } from "@/lib/report/field-report";
 import { formatQuantity } from "@/lib/units";
 import { evaluateDraft, isCurrentResultShape } from "./evaluate-draft";
 
-
 /** The field report of a setup in the viewer's units: its owner's, or review staff's once it was submitted. */
 export async function getFieldReport({ viewer, id }: { viewer: Viewer; id: string }): Promise<Result<FieldReport>> {
   const header = await getSetupHeaderForViewer({ id, viewer });
@@ -21,7 +20,10 @@ export async function getFieldReport({ viewer, id }: { viewer: Viewer; id: strin
     if (!fresh.ok) return fresh;
     result = fresh.data.result;
   }
-  const [catalogue, thread] = await Promise.all([getPlannerCatalogue({ ownerId: header.ownerId, includeIds: catalogueIdsOfDraft(draft) }), listThread({ setupId: id })]);
+  const [catalogue, thread] = await Promise.all([
+    getPlannerCatalogue({ ownerId: header.ownerId, includeIds: catalogueIdsOfDraft(draft) }),
+    listThread({ setupId: id }),
+  ]);
   const model = catalogue.models.find((m) => m.id === draft.modelId);
   const unit = catalogue.units.find((u) => u.id === draft.unitId);
   const mount = catalogue.mounts.find((m) => m.id === draft.mountId);
@@ -42,10 +44,21 @@ export async function getFieldReport({ viewer, id }: { viewer: Viewer; id: strin
           ? `${unit.serial}: weighed ${formatQuantity("mass", unit.measuredMassKg, units)}, gross lift ${formatQuantity("mass", unit.latestTest.measuredGrossLiftKg, units)} on ${unit.latestTest.testedOn} (lift ×${unit.calibrationFactor.toFixed(3)} of the model's)`
           : `${unit.serial}: weighed ${formatQuantity("mass", unit.measuredMassKg, units)}, no lift test (the model's volume)`
         : null,
-      mount: mount ? { name: mount.name, thread: mount.thread, ratedLoadKg: mount.ratedLoadKg } : { name: "unknown mount", thread: "", ratedLoadKg: 0 },
+      mount: mount
+        ? { name: mount.name, thread: mount.thread, ratedLoadKg: mount.ratedLoadKg }
+        : { name: "unknown mount", thread: "", ratedLoadKg: 0 },
       rail: { startXM: model?.railStartXM ?? 0, endXM: model?.railEndXM ?? 1 },
       adapterNames: Object.fromEntries(catalogue.adapters.map((a) => [a.id, a.name])),
-      latestDecision: decision && decision.decision ? { outcome: decision.decision, reviewerName: decision.authorName, at: decision.at, setupVersion: decision.setupVersion ?? 0, note: decision.body } : null,
+      latestDecision:
+        decision && decision.decision
+          ? {
+              outcome: decision.decision,
+              reviewerName: decision.authorName,
+              at: decision.at,
+              setupVersion: decision.setupVersion ?? 0,
+              note: decision.body,
+            }
+          : null,
       generatedAt: new Date(),
       unitSystem: units,
     }),

@@ -15,7 +15,16 @@ export type Insight = {
 
 /** What customers plan and fly, for the maker: every figure an SQL aggregation over the setups. */
 export async function getInsight({ filter }: { filter: insightDb.InsightFilter }): Promise<Result<Insight>> {
-  const [payloadMassHistogram, setupPayloadMassHistogram, templateUsage, railPosition, freeLiftRatio, flagCounts, setupsPerMonth, sendBackReasons] = await Promise.all([
+  const [
+    payloadMassHistogram,
+    setupPayloadMassHistogram,
+    templateUsage,
+    railPosition,
+    freeLiftRatio,
+    flagCounts,
+    setupsPerMonth,
+    sendBackReasons,
+  ] = await Promise.all([
     insightDb.payloadMassHistogram(filter),
     insightDb.setupPayloadMassHistogram(filter),
     insightDb.templateUsage(filter),
@@ -25,5 +34,14 @@ export async function getInsight({ filter }: { filter: insightDb.InsightFilter }
     insightDb.setupsPerMonth(filter),
     insightDb.sendBackReasons(filter),
   ]);
-  return ok({ payloadMassHistogram, setupPayloadMassHistogram, templateUsage, railPosition, freeLiftRatio, flagCounts, setupsPerMonth, sendBackReasons });
+  return ok({
+    payloadMassHistogram,
+    setupPayloadMassHistogram,
+    templateUsage,
+    railPosition,
+    freeLiftRatio,
+    flagCounts,
+    setupsPerMonth,
+    sendBackReasons,
+  });
 }

@@ -19,9 +19,14 @@ async function visibleSetup(viewer: Viewer, id: string): Promise<Result<reviewDb
 }
 
 /** Where a person reads the setup: the owner in the Planner, staff on the review page. */
-const setupPathFor = (recipientId: string, header: reviewDb.SetupHeader) => (recipientId === header.ownerId ? `/setups/${header.id}` : `/review/${header.id}`);
+const setupPathFor = (recipientId: string, header: reviewDb.SetupHeader) =>
+  recipientId === header.ownerId ? `/setups/${header.id}` : `/review/${header.id}`;
 
-export async function listReviewQueue({ filter }: { filter: reviewDb.QueueFilter }): Promise<Result<{ rows: reviewDb.QueueRow[]; total: number; page: number; pageSize: number }>> {
+export async function listReviewQueue({
+  filter,
+}: {
+  filter: reviewDb.QueueFilter;
+}): Promise<Result<{ rows: reviewDb.QueueRow[]; total: number; page: number; pageSize: number }>> {
   const { rows, total } = await reviewDb.listQueue(filter);
   return ok({ rows, total, page: filter.page, pageSize: filter.pageSize });
 }
@@ -70,7 +75,10 @@ export async function decideOnSetup({
   if (outcome.kind === "not_found") return fail("not_found", NOT_FOUND);
   if (outcome.kind === "refused") return fail(outcome.reason === "not_allowed" ? "forbidden" : "conflict", outcome.message);
   if (outcome.kind === "stale") {
-    return fail("conflict", `The customer saved this setup since you opened it (now version ${outcome.currentVersion}); reload it and review what changed.`);
+    return fail(
+      "conflict",
+      `The customer saved this setup since you opened it (now version ${outcome.currentVersion}); reload it and review what changed.`,
+    );
   }
   kickMailDelivery();
   return ok({ id, status: outcome.status, version });
@@ -93,7 +101,12 @@ export async function addComment({ viewer, id, body }: { viewer: Viewer; id: str
       recipients.map((r) => ({
         kind: "setup-comment",
         to: r.email,
-        content: commentAddedMail({ setupName: header.data.name, authorName: viewer.name, body, url: appUrl(setupPathFor(r.id, header.data)) }),
+        content: commentAddedMail({
+          setupName: header.data.name,
+          authorName: viewer.name,
+          body,
+          url: appUrl(setupPathFor(r.id, header.data)),
+        }),
       })),
   });
   kickMailDelivery();

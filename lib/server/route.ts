@@ -90,13 +90,24 @@ function parsed<T>(schema: Schema<T>, value: unknown, error: (issues: ReturnType
 }
 
 /** Parses every part of the request the spec names, in path → query → body order. */
-async function parseRequest<P, Q, B>(spec: RouteSpec<P, Q, B>, request: Request, context: NextRouteContext): Promise<Result<{ params: P; query: Q; body: B }>> {
+async function parseRequest<P, Q, B>(
+  spec: RouteSpec<P, Q, B>,
+  request: Request,
+  context: NextRouteContext,
+): Promise<Result<{ params: P; query: Q; body: B }>> {
   const params = spec.params
-    ? parsed(spec.params, await context.params, () => ({ code: "not_found", message: spec.notFoundMessage ?? "Nothing is at this address." }))
+    ? parsed(spec.params, await context.params, () => ({
+        code: "not_found",
+        message: spec.notFoundMessage ?? "Nothing is at this address.",
+      }))
     : { ok: true as const, data: undefined as P };
   if (!params.ok) return params;
   const query = spec.query
-    ? parsed(spec.query, Object.fromEntries(new URL(request.url).searchParams), (issues) => ({ code: "bad_request", message: "The query string is not valid.", issues }))
+    ? parsed(spec.query, Object.fromEntries(new URL(request.url).searchParams), (issues) => ({
+        code: "bad_request",
+        message: "The query string is not valid.",
+        issues,
+      }))
     : { ok: true as const, data: undefined as Q };
   if (!query.ok) return query;
   let body: Result<B> = { ok: true, data: undefined as B };
@@ -140,4 +151,3 @@ export function route<T, P = undefined, Q = undefined, B = undefined>(
     }
   };
 }
-

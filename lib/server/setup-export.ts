@@ -30,7 +30,7 @@ const COLUMNS = [
 ] as const;
 
 const PAGE = 2000;
-const cell = (value: unknown) => (value instanceof Date ? value.toISOString() : value ?? "");
+const cell = (value: unknown) => (value instanceof Date ? value.toISOString() : (value ?? ""));
 
 /** The export as a stream: pages of rows are read as the download proceeds, never all at once. */
 export async function exportSetupsCsv(): Promise<Result<FileBody>> {
@@ -48,5 +48,10 @@ export async function exportSetupsCsv(): Promise<Result<FileBody>> {
       else afterId = rows[rows.length - 1].id;
     },
   });
-  return ok({ bytes: stream, contentType: "text/csv; charset=utf-8", fileName: `trimrail-setups-${new Date().toISOString().slice(0, 10)}.csv`, disposition: "attachment" });
+  return ok({
+    bytes: stream,
+    contentType: "text/csv; charset=utf-8",
+    fileName: `trimrail-setups-${new Date().toISOString().slice(0, 10)}.csv`,
+    disposition: "attachment",
+  });
 }

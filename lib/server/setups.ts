@@ -28,7 +28,8 @@ const notFound = () => fail("not_found", SETUP_NOT_FOUND);
 async function notYours(viewer: Viewer, id: string): Promise<{ ok: false; error: AppError }> {
   if (isReviewer(viewer.role)) {
     const setup = await setupsDb.getSetupById({ id, ownerId: null });
-    if (setup && setup.row.submittedAt !== null) return fail("forbidden", "Only the customer who owns this setup can change it; comment on it or decide on it instead.");
+    if (setup && setup.row.submittedAt !== null)
+      return fail("forbidden", "Only the customer who owns this setup can change it; comment on it or decide on it instead.");
   }
   return notFound();
 }
@@ -77,7 +78,12 @@ function toView(setup: setupsDb.StoredSetup): SetupView {
   return { id: row.id, version: row.version, status: row.status, draft, result, worstFlag: row.worstFlag };
 }
 
-async function createFromDraft(viewer: Viewer, draft: SetupDraft, path: string, forNewSetup = true): Promise<Result<{ id: string; version: number; result: BalanceResult }>> {
+async function createFromDraft(
+  viewer: Viewer,
+  draft: SetupDraft,
+  path: string,
+  forNewSetup = true,
+): Promise<Result<{ id: string; version: number; result: BalanceResult }>> {
   const evaluated = await evaluateDraft({ draft, ownerId: viewer.id, path, forNewSetup });
   if (!evaluated.ok) return evaluated;
   const id = await setupsDb.createSetup({ ownerId: viewer.id, draft, evaluated: evaluated.data });
@@ -96,11 +102,18 @@ export async function createSetup({
   const catalogue = await getPlannerCatalogue({ ownerId: viewer.id });
   const model = catalogue.models.find((m) => m.id === input.modelId);
   const mount = catalogue.mounts[0];
-  if (!model || !mount) return fail("bad_request", "That envelope model is not in the catalogue.", [{ path: "modelId", message: "unknown envelope model" }]);
+  if (!model || !mount)
+    return fail("bad_request", "That envelope model is not in the catalogue.", [{ path: "modelId", message: "unknown envelope model" }]);
   return createFromDraft(viewer, defaultDraft(model, mount.id), "draft");
 }
 
-export async function duplicateSetup({ viewer, id }: { viewer: Viewer; id: string }): Promise<Result<{ id: string; version: number; result: BalanceResult }>> {
+export async function duplicateSetup({
+  viewer,
+  id,
+}: {
+  viewer: Viewer;
+  id: string;
+}): Promise<Result<{ id: string; version: number; result: BalanceResult }>> {
   const source = await setupsDb.getSetupById({ id, ownerId: viewer.id });
   if (!source) return notYours(viewer, id);
   // A copy of a working setup keeps what it names, retired or not.
@@ -156,7 +169,8 @@ export async function submitSetup({
       stops.map((f) => ({ path: `flags.${f.code}`, message: f.message })),
     );
   }
-  if (evaluated.data.worstFlag === "caution" && !acknowledgeCautions) return fail("unprocessable", "Acknowledge the caution flags before you submit.");
+  if (evaluated.data.worstFlag === "caution" && !acknowledgeCautions)
+    return fail("unprocessable", "Acknowledge the caution flags before you submit.");
   const { result, worstFlag } = evaluated.data;
   const outcome = await setupsDb.markSetupSubmitted({
     id,
@@ -167,7 +181,13 @@ export async function submitSetup({
       facts.reviewerAddresses.map((to) => ({
         kind: "setup-submitted",
         to,
-        content: setupSubmittedMail({ ...facts, customerName: viewer.name, worstFlag, freeLiftRatio: result.freeLiftRatio, url: appUrl(`/review/${id}`) }),
+        content: setupSubmittedMail({
+          ...facts,
+          customerName: viewer.name,
+          worstFlag,
+          freeLiftRatio: result.freeLiftRatio,
+          url: appUrl(`/review/${id}`),
+        }),
       })),
   });
   if (outcome.kind === "not_found") return notYours(viewer, id);

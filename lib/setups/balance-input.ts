@@ -83,7 +83,8 @@ export function liftCheckOf(draft: SetupDraft, planned: BalanceInput): DayLiftCh
   });
 }
 
-const usableFactor = (factor: number | null | undefined): number => (factor !== null && factor !== undefined && Number.isFinite(factor) && factor > 0 ? factor : 1);
+const usableFactor = (factor: number | null | undefined): number =>
+  factor !== null && factor !== undefined && Number.isFinite(factor) && factor > 0 ? factor : 1;
 
 /** The engine's input from the draft as entered, before any lift check. */
 export function plannedBalanceInput(draft: SetupDraft, catalogue: SetupCatalogue): BalanceInput {

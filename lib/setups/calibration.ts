@@ -20,7 +20,8 @@ const recordedAt = (test: LiftTestFacts): number => new Date(test.createdAt).get
 export function latestLiftTest<T extends LiftTestFacts>(tests: readonly T[]): T | null {
   let latest: T | null = null;
   for (const test of tests) {
-    if (!latest || test.testedOn > latest.testedOn || (test.testedOn === latest.testedOn && recordedAt(test) > recordedAt(latest))) latest = test;
+    if (!latest || test.testedOn > latest.testedOn || (test.testedOn === latest.testedOn && recordedAt(test) > recordedAt(latest)))
+      latest = test;
   }
   return latest;
 }

@@ -5,8 +5,28 @@ import { openDatabase } from "../../db/index";
 import { attachments } from "../../db/schema";
 import { storageConfig } from "../../lib/storage/config";
 import { createS3Client } from "../../lib/storage/s3-client";
-import { datasheetPdf, exifHasGps, htmlPage, jpegWithGps, oversizedJpegLike, pixels, plainPng, pngChunkTypes, pngWithText, renamedExecutable, webpWithGps } from "../support/attachment-files";
-import { countAttachmentRows, listObjectKeys, processGroupRssBytes, readObject, streamUpload, uploadFile, type AttachmentBody } from "../support/attachments-api";
+import {
+  datasheetPdf,
+  exifHasGps,
+  htmlPage,
+  jpegWithGps,
+  oversizedJpegLike,
+  pixels,
+  plainPng,
+  pngChunkTypes,
+  pngWithText,
+  renamedExecutable,
+  webpWithGps,
+} from "../support/attachment-files";
+import {
+  countAttachmentRows,
+  listObjectKeys,
+  processGroupRssBytes,
+  readObject,
+  streamUpload,
+  uploadFile,
+  type AttachmentBody,
+} from "../support/attachments-api";
 import { ApiClient } from "../support/http";
 import { readSetupOver, submittedSetup } from "../support/setup-fixtures";
 
@@ -154,7 +174,14 @@ describe("POST /api/setups/:id/attachments and GET /api/attachments/:id", () => 
     const list = await wren.get(`/api/setups/${setupId}/attachments`);
     expect(list.status).toBe(200);
     const { attachments: files } = (await list.json()) as { attachments: AttachmentBody[] };
-    expect(files.map((f) => f.fileName)).toEqual(["camera on the mount.jpg", "mount-close-up.png", "plain.png", "rig.webp", "relay datasheet.pdf", "wide.jpg"]);
+    expect(files.map((f) => f.fileName)).toEqual([
+      "camera on the mount.jpg",
+      "mount-close-up.png",
+      "plain.png",
+      "rig.webp",
+      "relay datasheet.pdf",
+      "wide.jpg",
+    ]);
   });
 });
 
@@ -166,10 +193,31 @@ describe("a refused upload", () => {
   });
 
   const refusals: { name: string; status: number; code: string; send: () => Promise<Response> }[] = [
-    { name: "a renamed executable", status: 415, code: "unsupported_media_type", send: () => uploadFile(wren, setupId, { bytes: renamedExecutable(), name: "photo.jpg", claimedType: "image/jpeg" }) },
-    { name: "an HTML file named .png", status: 415, code: "unsupported_media_type", send: () => uploadFile(wren, setupId, { bytes: htmlPage(), name: "mount.png", claimedType: "image/png" }) },
-    { name: "an 11 MB file", status: 413, code: "payload_too_large", send: async () => uploadFile(wren, setupId, { bytes: oversizedJpegLike(11 * MB, await jpegWithGps()), name: "huge.jpg", claimedType: "image/jpeg" }) },
-    { name: "a body without a file", status: 400, code: "bad_request", send: () => wren.upload(`/api/setups/${setupId}/attachments`, formWithoutFile()) },
+    {
+      name: "a renamed executable",
+      status: 415,
+      code: "unsupported_media_type",
+      send: () => uploadFile(wren, setupId, { bytes: renamedExecutable(), name: "photo.jpg", claimedType: "image/jpeg" }),
+    },
+    {
+      name: "an HTML file named .png",
+      status: 415,
+      code: "unsupported_media_type",
+      send: () => uploadFile(wren, setupId, { bytes: htmlPage(), name: "mount.png", claimedType: "image/png" }),
+    },
+    {
+      name: "an 11 MB file",
+      status: 413,
+      code: "payload_too_large",
+      send: async () =>
+        uploadFile(wren, setupId, { bytes: oversizedJpegLike(11 * MB, await jpegWithGps()), name: "huge.jpg", claimedType: "image/jpeg" }),
+    },
+    {
+      name: "a body without a file",
+      status: 400,
+      code: "bad_request",
+      send: () => wren.upload(`/api/setups/${setupId}/attachments`, formWithoutFile()),
+    },
   ];
 
   for (const refusal of refusals) {
@@ -191,7 +239,11 @@ describe("a refused upload", () => {
   });
 
   it("returns 413 to a 200 MB stream at the 10 MB mark, reads no more of it, and hangs up", async () => {
-    const outcome = await streamUpload(baseURL, wren.cookieHeader(), setupId, { fileBytes: 200 * MB, start: await jpegWithGps(), keepSending: true });
+    const outcome = await streamUpload(baseURL, wren.cookieHeader(), setupId, {
+      fileBytes: 200 * MB,
+      start: await jpegWithGps(),
+      keepSending: true,
+    });
     expect(outcome.status, outcome.error ?? "").toBe(413);
     // 10 MB read, then nothing: all else that got out filled the sockets' buffers, until the server
     // dropped the stalled connection (Node's keep-alive timeout, 5 s by default).
@@ -207,7 +259,10 @@ describe("a refused upload", () => {
     expect(before.rows).toBe(20);
     const response = await uploadFile(wren, full, { bytes: small, name: "tab 21.png" });
     expect(response.status).toBe(409);
-    expect(((await response.json()) as { error: { code: string; message: string } }).error).toMatchObject({ code: "conflict", message: expect.stringMatching(/at most 20 files/) });
+    expect(((await response.json()) as { error: { code: string; message: string } }).error).toMatchObject({
+      code: "conflict",
+      message: expect.stringMatching(/at most 20 files/),
+    });
     expect(await storedCounts(full)).toEqual(before);
   });
 
@@ -302,13 +357,17 @@ describe("server memory while uploads are refused", () => {
         await new Promise((r) => setTimeout(r, 20));
       }
     })();
-    const outcomes = await Promise.all(Array.from({ length: 10 }, () => streamUpload(baseURL, wren.cookieHeader(), setupId, { fileBytes: 11 * MB, start })));
+    const outcomes = await Promise.all(
+      Array.from({ length: 10 }, () => streamUpload(baseURL, wren.cookieHeader(), setupId, { fileBytes: 11 * MB, start })),
+    );
     sampling = false;
     await sampler;
 
     expect(outcomes.map((o) => o.status)).toEqual(Array(10).fill(413));
     const growthMb = (peak - baseline) / MB;
-    console.log(`[memory] next start RSS: baseline ${(baseline / MB).toFixed(1)} MB, peak ${(peak / MB).toFixed(1)} MB, growth ${growthMb.toFixed(1)} MB while ten 11 MB uploads were refused`);
+    console.log(
+      `[memory] next start RSS: baseline ${(baseline / MB).toFixed(1)} MB, peak ${(peak / MB).toFixed(1)} MB, growth ${growthMb.toFixed(1)} MB while ten 11 MB uploads were refused`,
+    );
     expect(growthMb).toBeLessThan(50);
     expect(await countAttachmentRows(database.db, setupId)).toBe(0);
   });

@@ -1,6 +1,13 @@
 import { readFileSync } from "node:fs";
 import { beforeAll, describe, expect, inject, it } from "vitest";
-import { balanceInputSchema, evaluateBalance, operatingEnvelope, type BalanceInput, type BalanceResult, type OperatingEnvelope } from "@/lib/balance";
+import {
+  balanceInputSchema,
+  evaluateBalance,
+  operatingEnvelope,
+  type BalanceInput,
+  type BalanceResult,
+  type OperatingEnvelope,
+} from "@/lib/balance";
 import { ApiClient } from "../support/http";
 
 const baseURL = inject("baseURL");

@@ -16,7 +16,11 @@ async function signedIn(email: string): Promise<ApiClient> {
 async function someKeptMail() {
   const before = await keptMailIds(mailDir);
   const to = `devmail-${Date.now()}@trimrail.test`;
-  const signUp = await new ApiClient(baseURL).request("POST", "/api/auth/sign-up/email", { name: "Per <b>Holm</b>", email: to, password: "a-long-password" });
+  const signUp = await new ApiClient(baseURL).request("POST", "/api/auth/sign-up/email", {
+    name: "Per <b>Holm</b>",
+    email: to,
+    password: "a-long-password",
+  });
   expect(signUp.status).toBe(200);
   return waitForMail({ dir: mailDir, to, except: before });
 }

@@ -25,7 +25,15 @@ describe("GET /api/insight", () => {
     const response = await maker.get("/api/insight");
     expect(response.status).toBe(200);
     const body = (await response.json()) as Record<string, unknown[]>;
-    for (const key of ["payloadMassHistogram", "setupPayloadMassHistogram", "templateUsage", "railPosition", "freeLiftRatio", "flagCounts", "setupsPerMonth"]) {
+    for (const key of [
+      "payloadMassHistogram",
+      "setupPayloadMassHistogram",
+      "templateUsage",
+      "railPosition",
+      "freeLiftRatio",
+      "flagCounts",
+      "setupsPerMonth",
+    ]) {
       expect(Array.isArray(body[key]), key).toBe(true);
     }
     const setups = Number((await database.client.execute("select count(*) as n from setups")).rows[0].n);
@@ -38,10 +46,19 @@ describe("GET /api/insight", () => {
   it("returns only the model's setups when filtered by model, and 400 with the parameter for bad filters", async () => {
     const body = (await (await maker.get("/api/insight?model=mdl-ridge-06")).json()) as { railPosition: Array<{ modelId: string }> };
     expect(body.railPosition.every((r) => r.modelId === "mdl-ridge-06")).toBe(true);
-    for (const [query, param] of [["from=2026-13-01", "from"], ["to=yesterday", "to"], ["from=2026-11-30&to=2026-11-01", "from"], ["colour=red", ""]]) {
+    for (const [query, param] of [
+      ["from=2026-13-01", "from"],
+      ["to=yesterday", "to"],
+      ["from=2026-11-30&to=2026-11-01", "from"],
+      ["colour=red", ""],
+    ]) {
       const response = await maker.get(`/api/insight?${query}`);
       expect(response.status, query).toBe(400);
-      if (param) expect((((await response.json()) as { error: { issues?: { path: string }[] } }).error.issues ?? []).map((i) => i.path), query).toContain(param);
+      if (param)
+        expect(
+          (((await response.json()) as { error: { issues?: { path: string }[] } }).error.issues ?? []).map((i) => i.path),
+          query,
+        ).toContain(param);
     }
   });
 });
@@ -54,7 +71,9 @@ describe("GET /api/insight/setups.csv", () => {
     expect(response.headers.get("content-disposition")).toMatch(/^attachment; filename="trimrail-setups-\d{4}-\d{2}-\d{2}\.csv"$/);
     const parsed = Papa.parse<Record<string, string>>(await response.text(), { header: true, skipEmptyLines: true });
     expect(parsed.errors).toEqual([]);
-    expect(parsed.meta.fields).toEqual(expect.arrayContaining(["id", "mount_position_x_m", "payload_mass_kg", "free_lift_ratio", "wind_m_s", "created_at_utc"]));
+    expect(parsed.meta.fields).toEqual(
+      expect.arrayContaining(["id", "mount_position_x_m", "payload_mass_kg", "free_lift_ratio", "wind_m_s", "created_at_utc"]),
+    );
     const rows = (await database.client.execute("select id, mount_position_x_m, payload_mass_kg, status from setups order by id")).rows;
     expect(parsed.data.map((r) => r.id)).toEqual(rows.map((r) => String(r.id)));
     for (const [i, row] of rows.entries()) {

@@ -108,7 +108,12 @@ describe("address verification through the captured mail", () => {
   it("mails a new account a link that marks its address verified; signing in never waited for it", async () => {
     const email = `verify-${Date.now()}@trimrail.test`;
     const client = new ApiClient(baseURL);
-    const signUp = await client.request("POST", "/api/auth/sign-up/email", { name: "Ilse Varrow", email, password: "a-long-password", callbackURL: "/setups" });
+    const signUp = await client.request("POST", "/api/auth/sign-up/email", {
+      name: "Ilse Varrow",
+      email,
+      password: "a-long-password",
+      callbackURL: "/setups",
+    });
     expect(signUp.status).toBe(200);
     const unverified = (await (await client.get("/api/auth/get-session")).json()) as { user: { emailVerified: boolean } };
     expect(unverified.user.emailVerified).toBe(false);

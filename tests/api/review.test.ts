@@ -10,7 +10,17 @@ interface ErrorBody {
   error: { code: string; message: string; issues?: Array<{ path: string; message: string }> };
 }
 interface QueueBody {
-  rows: Array<{ id: string; name: string; ownerName: string; modelName: string; status: string; payloadMassKg: number; freeLiftRatio: number | null; worstFlag: string; submittedAt: string }>;
+  rows: Array<{
+    id: string;
+    name: string;
+    ownerName: string;
+    modelName: string;
+    status: string;
+    payloadMassKg: number;
+    freeLiftRatio: number | null;
+    worstFlag: string;
+    submittedAt: string;
+  }>;
   total: number;
   page: number;
   pageSize: number;
@@ -39,12 +49,18 @@ beforeAll(async () => {
 afterAll(() => database.client.close());
 
 async function row(id: string): Promise<Record<string, unknown>> {
-  const result = await database.client.execute({ sql: "select status, version, name, mount_position_x_m from setups where id = ?", args: [id] });
+  const result = await database.client.execute({
+    sql: "select status, version, name, mount_position_x_m from setups where id = ?",
+    args: [id],
+  });
   return { ...result.rows[0] };
 }
 
 async function outboxFor(to: string, subjectPart: string): Promise<Array<{ subject: string; text_body: string }>> {
-  const result = await database.client.execute({ sql: "select subject, text_body from mail_outbox where to_address = ? and subject like ? order by created_at", args: [to, `%${subjectPart}%`] });
+  const result = await database.client.execute({
+    sql: "select subject, text_body from mail_outbox where to_address = ? and subject like ? order by created_at",
+    args: [to, `%${subjectPart}%`],
+  });
   return result.rows.map((r) => ({ subject: String(r.subject), text_body: String(r.text_body) }));
 }
 
@@ -67,7 +83,12 @@ describe("the review loop over HTTP", () => {
     expect((await row(setup.id)).status).toBe("submitted");
 
     const reason = "Move the mount 2 cm forward and top the fill up before you fly.";
-    const sentBack = await decide(people.support, setup.id, { decision: "changes_requested", reason, reasonCodes: ["trim-calm", "other"], version: setup.version });
+    const sentBack = await decide(people.support, setup.id, {
+      decision: "changes_requested",
+      reason,
+      reasonCodes: ["trim-calm", "other"],
+      version: setup.version,
+    });
     expect(sentBack.status).toBe(200);
     expect((await row(setup.id)).status).toBe("changes_requested");
     const mails = await outboxFor("customer@trimrail.test", "Review loop camera");
@@ -76,11 +97,19 @@ describe("the review loop over HTTP", () => {
 
     // the owner reads the reason in the thread
     const thread = (await (await people.wren.get(`/api/setups/${setup.id}/comments`)).json()) as ThreadBody;
-    expect(thread.items.at(-1)).toMatchObject({ kind: "decision", decision: "changes_requested", body: reason, authorName: "Sunniva Rook" });
+    expect(thread.items.at(-1)).toMatchObject({
+      kind: "decision",
+      decision: "changes_requested",
+      body: reason,
+      authorName: "Sunniva Rook",
+    });
 
     // the owner fixes: still changes_requested until resubmitted
     const current = await readSetupOver(people.wren, setup.id);
-    const fixed = await people.wren.request("PUT", `/api/setups/${setup.id}`, { version: current.version, draft: { ...current.draft, gas: { ...current.draft.gas, fillFraction: 1 } } });
+    const fixed = await people.wren.request("PUT", `/api/setups/${setup.id}`, {
+      version: current.version,
+      draft: { ...current.draft, gas: { ...current.draft.gas, fillFraction: 1 } },
+    });
     expect(fixed.status).toBe(200);
     expect((await row(setup.id)).status).toBe("changes_requested");
     const afterFix = await readSetupOver(people.wren, setup.id);
@@ -94,14 +123,22 @@ describe("the review loop over HTTP", () => {
     expect(((await stale.json()) as ErrorBody).error.message).toMatch(/saved this setup since you opened it/);
     expect((await row(setup.id)).status).toBe("submitted");
 
-    const approved = await decide(people.orrin, setup.id, { decision: "approved", reason: "Balanced; keep the safety line on.", version: resubmitted.version });
+    const approved = await decide(people.orrin, setup.id, {
+      decision: "approved",
+      reason: "Balanced; keep the safety line on.",
+      version: resubmitted.version,
+    });
     expect(approved.status).toBe(200);
     expect((await row(setup.id)).status).toBe("approved");
     const again = await decide(people.support, setup.id, { decision: "approved", reason: "", version: resubmitted.version });
     expect(again.status).toBe(409);
 
-    const history = (await (await people.wren.get(`/api/setups/${setup.id}/history`)).json()) as { entries: Array<{ action: string; actorName: string; detail: Record<string, unknown> }> };
-    const transitions = history.entries.filter((e) => e.detail.from !== e.detail.to && e.detail.to !== undefined).map((e) => `${e.action}:${String(e.detail.from)}→${String(e.detail.to)}`);
+    const history = (await (await people.wren.get(`/api/setups/${setup.id}/history`)).json()) as {
+      entries: Array<{ action: string; actorName: string; detail: Record<string, unknown> }>;
+    };
+    const transitions = history.entries
+      .filter((e) => e.detail.from !== e.detail.to && e.detail.to !== undefined)
+      .map((e) => `${e.action}:${String(e.detail.from)}→${String(e.detail.to)}`);
     expect(transitions).toEqual([
       "setup.submit:draft→submitted",
       "setup.decision:submitted→changes_requested",
@@ -132,7 +169,14 @@ describe("who may decide, comment and change", () => {
     const setup = await submittedSetup(database.db, people.wren, { from: "set-wren-cam", name: "Staff cannot edit" });
     const before = await row(setup.id);
     for (const client of [people.support, people.maker]) {
-      expect((await client.request("PUT", `/api/setups/${setup.id}`, { version: setup.version, draft: { ...setup.draft, name: "Changed by staff" } })).status).toBe(403);
+      expect(
+        (
+          await client.request("PUT", `/api/setups/${setup.id}`, {
+            version: setup.version,
+            draft: { ...setup.draft, name: "Changed by staff" },
+          })
+        ).status,
+      ).toBe(403);
       expect((await client.request("POST", `/api/setups/${setup.id}/submit`, { version: setup.version })).status).toBe(403);
       expect((await client.request("DELETE", `/api/setups/${setup.id}`)).status).toBe(403);
       expect((await client.request("POST", `/api/setups/${setup.id}/duplicate`)).status).toBe(403);
@@ -153,15 +197,25 @@ describe("who may decide, comment and change", () => {
 
   it("returns 201 for comments by the owner, support and the maker, mails the others, and 400 for an empty or too long body", async () => {
     const setup = await submittedSetup(database.db, people.wren, { from: "set-wren-cam", name: "Comment thread" });
-    expect((await people.support.request("POST", `/api/setups/${setup.id}/comments`, { body: "Which line will you fly it on?" })).status).toBe(201);
-    expect((await people.wren.request("POST", `/api/setups/${setup.id}/comments`, { body: "A 2 mm braided line, 60 m." })).status).toBe(201);
-    expect((await people.maker.request("POST", `/api/setups/${setup.id}/comments`, { body: "That line is fine <b>here</b>." })).status).toBe(201);
+    expect(
+      (await people.support.request("POST", `/api/setups/${setup.id}/comments`, { body: "Which line will you fly it on?" })).status,
+    ).toBe(201);
+    expect((await people.wren.request("POST", `/api/setups/${setup.id}/comments`, { body: "A 2 mm braided line, 60 m." })).status).toBe(
+      201,
+    );
+    expect(
+      (await people.maker.request("POST", `/api/setups/${setup.id}/comments`, { body: "That line is fine <b>here</b>." })).status,
+    ).toBe(201);
     expect((await people.wren.request("POST", `/api/setups/${setup.id}/comments`, { body: "   " })).status).toBe(400);
     expect((await people.wren.request("POST", `/api/setups/${setup.id}/comments`, { body: "x".repeat(4001) })).status).toBe(400);
     expect((await people.stranger.request("POST", `/api/setups/${setup.id}/comments`, { body: "hi" })).status).toBe(401);
 
     const thread = (await (await people.wren.get(`/api/setups/${setup.id}/comments`)).json()) as ThreadBody;
-    expect(thread.items.map((i) => i.body)).toEqual(["Which line will you fly it on?", "A 2 mm braided line, 60 m.", "That line is fine <b>here</b>."]);
+    expect(thread.items.map((i) => i.body)).toEqual([
+      "Which line will you fly it on?",
+      "A 2 mm braided line, 60 m.",
+      "That line is fine <b>here</b>.",
+    ]);
     // the customer heard of both staff comments; support heard of the customer's reply and the maker's comment
     expect((await outboxFor("customer@trimrail.test", "Comment thread")).filter((m) => m.subject.startsWith("New comment")).length).toBe(2);
     expect((await outboxFor("support@trimrail.test", "Comment thread")).filter((m) => m.subject.startsWith("New comment")).length).toBe(2);
@@ -192,10 +246,14 @@ describe("GET /api/review/queue", () => {
   });
 
   it("returns rows in the order asked for, filtered by worst flag and model", async () => {
-    const byMass = (await (await people.support.get("/api/review/queue?status=any&sort=payloadMassKg&dir=desc&pageSize=100")).json()) as QueueBody;
+    const byMass = (await (
+      await people.support.get("/api/review/queue?status=any&sort=payloadMassKg&dir=desc&pageSize=100")
+    ).json()) as QueueBody;
     const masses = byMass.rows.map((r) => r.payloadMassKg);
     expect(masses).toEqual([...masses].sort((a, b) => b - a));
-    const oldestFirst = (await (await people.support.get("/api/review/queue?status=any&sort=waiting&dir=desc&pageSize=100")).json()) as QueueBody;
+    const oldestFirst = (await (
+      await people.support.get("/api/review/queue?status=any&sort=waiting&dir=desc&pageSize=100")
+    ).json()) as QueueBody;
     const times = oldestFirst.rows.map((r) => Date.parse(r.submittedAt));
     expect(times).toEqual([...times].sort((a, b) => a - b));
     const cautions = (await (await people.support.get("/api/review/queue?status=any&worst=caution&pageSize=100")).json()) as QueueBody;
@@ -223,7 +281,11 @@ describe("GET /api/review/queue", () => {
       const response = await people.support.get(`/api/review/queue?${query}`);
       expect(response.status, query).toBe(400);
       const error = ((await response.json()) as ErrorBody).error;
-      if (param) expect(error.issues?.map((i) => i.path), query).toContain(param);
+      if (param)
+        expect(
+          error.issues?.map((i) => i.path),
+          query,
+        ).toContain(param);
     }
   });
 });
@@ -240,7 +302,9 @@ describe("GET /api/setups/:id/report.pdf", () => {
     expect((await people.stranger.get("/api/setups/set-wren-cam/report.pdf")).status).toBe(401);
 
     const setup = await submittedSetup(database.db, people.wren, { from: "set-wren-cam", name: "Report after approval" });
-    expect((await decide(people.support, setup.id, { decision: "approved", reason: "Balanced and light.", version: setup.version })).status).toBe(200);
+    expect(
+      (await decide(people.support, setup.id, { decision: "approved", reason: "Balanced and light.", version: setup.version })).status,
+    ).toBe(200);
     for (const client of [people.wren, people.support, people.maker]) {
       const response = await client.get(`/api/setups/${setup.id}/report.pdf`);
       expect(response.status).toBe(200);

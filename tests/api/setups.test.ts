@@ -40,7 +40,8 @@ async function catalogueFor(draft: SetupDraft): Promise<SetupCatalogue> {
   const [mount] = await db.select().from(mounts).where(eq(mounts.id, draft.mountId));
   const [unitRow] = draft.unitId ? await db.select().from(envelopeUnits).where(eq(envelopeUnits.id, draft.unitId)) : [];
   const tests = unitRow ? await db.select().from(unitLiftTests).where(eq(unitLiftTests.unitId, unitRow.id)) : [];
-  const unit = unitRow && model ? { ...unitRow, calibrationFactor: unitCalibrationFactor(model.gasVolumeM3, latestLiftTest(tests)) } : undefined;
+  const unit =
+    unitRow && model ? { ...unitRow, calibrationFactor: unitCalibrationFactor(model.gasVolumeM3, latestLiftTest(tests)) } : undefined;
   const adapterIds = draft.payloads.map((p) => p.adapterId).filter((id): id is string => id !== null);
   const adapterRows = adapterIds.length ? await db.select().from(adapters).where(inArray(adapters.id, adapterIds)) : [];
   expect(model, `model ${draft.modelId}`).toBeDefined();
@@ -69,7 +70,10 @@ async function storedRow(id: string): Promise<StoredRow | null> {
     sql: "select version, status, name, mount_position_x_m, r.result_json as result_json, worst_flag, updated_at, cautions_acknowledged from setups left join setup_results r on r.setup_id = setups.id where id = ?",
     args: [id],
   });
-  const payloads = await database.client.execute({ sql: "select name, mass_kg, sort_order from setup_payloads where setup_id = ? order by sort_order", args: [id] });
+  const payloads = await database.client.execute({
+    sql: "select name, mass_kg, sort_order from setup_payloads where setup_id = ? order by sort_order",
+    args: [id],
+  });
   const row = rows.rows[0];
   if (!row) return null;
   return {
@@ -170,7 +174,11 @@ describe("saving a setup: the server computes and stores its own balance", () =>
     const created = await createSetup(customer, { ...source.draft, name: "Stale version check" });
     expect(created.version).toBe(1);
 
-    const firstDraft: SetupDraft = { ...source.draft, name: "Stale version check, first save", mountPositionXM: await anotherRailPosition(source.draft) };
+    const firstDraft: SetupDraft = {
+      ...source.draft,
+      name: "Stale version check, first save",
+      mountPositionXM: await anotherRailPosition(source.draft),
+    };
     const first = await customer.request("PUT", `/api/setups/${created.id}`, { version: 1, draft: firstDraft });
     expect(first.status).toBe(200);
     expect(((await first.json()) as { version: number }).version).toBe(2);
@@ -204,7 +212,10 @@ describe("submitting a setup for review", () => {
     expect(stops.length).toBeGreaterThan(0);
     const rowBefore = await storedRow("set-wren-heavy");
 
-    const submit = await customer.request("POST", "/api/setups/set-wren-heavy/submit", { version: heavy.version, acknowledgeCautions: true });
+    const submit = await customer.request("POST", "/api/setups/set-wren-heavy/submit", {
+      version: heavy.version,
+      acknowledgeCautions: true,
+    });
     expect(submit.status).toBe(422);
     const body = (await submit.json()) as ErrorBody;
     expect(body.error.code).toBe("unprocessable");
@@ -222,7 +233,11 @@ describe("submitting a setup for review", () => {
     const { railStartXM, railEndXM } = catalogue.model;
     let okDraft: SetupDraft | null = null;
     for (let step = 0; step <= 40 && !okDraft; step += 1) {
-      const candidate: SetupDraft = { ...cam.draft, name: "Orchard camera, all ok", mountPositionXM: railStartXM + (step / 40) * (railEndXM - railStartXM) };
+      const candidate: SetupDraft = {
+        ...cam.draft,
+        name: "Orchard camera, all ok",
+        mountPositionXM: railStartXM + (step / 40) * (railEndXM - railStartXM),
+      };
       if (worstLevel(evaluateBalance(toBalanceInput(candidate, catalogue)).flags) === "ok") okDraft = candidate;
     }
     expect(okDraft, "no rail position gives an all-ok camera setup").not.toBeNull();
@@ -232,7 +247,10 @@ describe("submitting a setup for review", () => {
     expect(stored.status).toBe("draft");
     expect(stored.worstFlag).toBe("ok");
 
-    const plain = await customer.request("POST", `/api/setups/${created.id}/submit`, { version: stored.version, acknowledgeCautions: false });
+    const plain = await customer.request("POST", `/api/setups/${created.id}/submit`, {
+      version: stored.version,
+      acknowledgeCautions: false,
+    });
     expect(plain.status).toBe(200);
     expect(((await plain.json()) as { status: string }).status).toBe("submitted");
     const row = await storedRow(created.id);
@@ -264,13 +282,19 @@ describe("submitting a setup for review", () => {
     expect(rowBetween?.status).toBe("draft");
     expect(rowBetween?.version).toBe(stored.version);
 
-    const acknowledged = await customer.request("POST", `/api/setups/${created.id}/submit`, { version: stored.version, acknowledgeCautions: true });
+    const acknowledged = await customer.request("POST", `/api/setups/${created.id}/submit`, {
+      version: stored.version,
+      acknowledgeCautions: true,
+    });
     expect(acknowledged.status).toBe(200);
     const row = await storedRow(created.id);
     expect(row?.status).toBe("submitted");
     expect(Number(row?.cautions_acknowledged)).toBe(1);
 
-    const again = await customer.request("POST", `/api/setups/${created.id}/submit`, { version: stored.version + 1, acknowledgeCautions: true });
+    const again = await customer.request("POST", `/api/setups/${created.id}/submit`, {
+      version: stored.version + 1,
+      acknowledgeCautions: true,
+    });
     expect(again.status).toBe(409);
   });
 });
@@ -286,7 +310,9 @@ describe("only the owner reaches a setup", () => {
     expect((await tobin.signIn("tobin@trimrail.test")).status).toBe(200);
     expect((await tobin.get("/api/setups/set-wren-whip")).status).toBe(404);
     expect((await tobin.request("PUT", "/api/setups/set-wren-whip", { version: own.version, draft: otherDraft })).status).toBe(404);
-    expect((await tobin.request("POST", "/api/setups/set-wren-whip/submit", { version: own.version, acknowledgeCautions: true })).status).toBe(404);
+    expect(
+      (await tobin.request("POST", "/api/setups/set-wren-whip/submit", { version: own.version, acknowledgeCautions: true })).status,
+    ).toBe(404);
     expect((await tobin.request("DELETE", "/api/setups/set-wren-whip")).status).toBe(404);
     expect((await tobin.request("POST", "/api/setups/set-wren-whip/duplicate")).status).toBe(404);
     const tobinList = (await (await tobin.get("/api/setups")).json()) as { setups: Array<{ id: string }> };
@@ -323,11 +349,23 @@ describe("bad drafts are refused before anything is written", () => {
     const cases: Array<[string, SetupDraft, string]> = [
       ["unknown model", { ...source.draft, modelId: "mdl-no-such-envelope" }, "draft.modelId"],
       ["unknown mount", { ...source.draft, mountId: "mnt-no-such-mount" }, "draft.mountId"],
-      ["negative payload mass", { ...source.draft, payloads: source.draft.payloads.map((p, i) => (i === 0 ? { ...p, massKg: -0.2 } : p)) }, "draft.payloads[0].massKg"],
+      [
+        "negative payload mass",
+        { ...source.draft, payloads: source.draft.payloads.map((p, i) => (i === 0 ? { ...p, massKg: -0.2 } : p)) },
+        "draft.payloads[0].massKg",
+      ],
       ["someone else's unit", { ...source.draft, unitId: "unit-r11-0023" }, "draft.unitId"],
       ["purity above 1", { ...source.draft, gas: { ...source.draft.gas, purity: 1.5 } }, "draft.gas.purity"],
-      ["unknown payload template", { ...source.draft, payloads: source.draft.payloads.map((p, i) => (i === 0 ? { ...p, templateId: "tpl-no-such-template" } : p)) }, "draft.payloads[0].templateId"],
-      ["unknown adapter", { ...source.draft, payloads: source.draft.payloads.map((p, i) => (i === 0 ? { ...p, adapterId: "adp-no-such-adapter" } : p)) }, "draft.payloads[0].adapterId"],
+      [
+        "unknown payload template",
+        { ...source.draft, payloads: source.draft.payloads.map((p, i) => (i === 0 ? { ...p, templateId: "tpl-no-such-template" } : p)) },
+        "draft.payloads[0].templateId",
+      ],
+      [
+        "unknown adapter",
+        { ...source.draft, payloads: source.draft.payloads.map((p, i) => (i === 0 ? { ...p, adapterId: "adp-no-such-adapter" } : p)) },
+        "draft.payloads[0].adapterId",
+      ],
     ];
     for (const [label, draft, wantedPath] of cases) {
       for (const [method, path, body] of [
@@ -338,7 +376,10 @@ describe("bad drafts are refused before anything is written", () => {
         expect(response.status, `${label}, ${method}`).toBe(400);
         const error = ((await response.json()) as ErrorBody).error;
         expect(error.code).toBe("bad_request");
-        expect((error.issues ?? []).map((i) => i.path), `${label}, ${method}`).toContain(wantedPath);
+        expect(
+          (error.issues ?? []).map((i) => i.path),
+          `${label}, ${method}`,
+        ).toContain(wantedPath);
       }
     }
     const noDraft = await customer.request("POST", "/api/setups", { name: "no draft" });
@@ -403,7 +444,9 @@ describe("PUT /api/me/preferences", () => {
   it("returns 200 and the session shows imperial when a person picks imperial, and 400 for an unknown system", async () => {
     const person = new ApiClient(baseURL);
     const email = `units-${Date.now()}-${Math.floor(Math.random() * 1e6)}@trimrail.test`;
-    expect((await person.request("POST", "/api/auth/sign-up/email", { name: "Ada Unitwell", email, password: "a-long-password" })).status).toBe(200);
+    expect(
+      (await person.request("POST", "/api/auth/sign-up/email", { name: "Ada Unitwell", email, password: "a-long-password" })).status,
+    ).toBe(200);
     const initial = (await (await person.get("/api/auth/get-session")).json()) as { user: { unitSystem: string } };
     expect(initial.user.unitSystem).toBe("metric");
 

@@ -43,8 +43,23 @@ describe("cross-site writes", () => {
     expect((await customer.request("POST", "/api/setups", JSON.stringify({ draft: draft.draft }), evil)).status).toBe(403);
     expect((await maker.request("PUT", "/api/users/usr-support-2/role", JSON.stringify({ role: "customer" }), evil)).status).toBe(403);
     expect((await customer.request("DELETE", "/api/setups/set-wren-whip", undefined, { origin: "http://evil.example" })).status).toBe(403);
-    expect((await customer.request("POST", "/api/setups", JSON.stringify({ modelId: "mdl-ridge-06" }), { origin: baseURL, "sec-fetch-site": "cross-site", "content-type": "application/json" })).status).toBe(403);
-    expect((await customer.request("POST", "/api/setups", JSON.stringify({ modelId: "mdl-ridge-06" }), { "sec-fetch-site": "same-site", "content-type": "application/json" })).status).toBe(403);
+    expect(
+      (
+        await customer.request("POST", "/api/setups", JSON.stringify({ modelId: "mdl-ridge-06" }), {
+          origin: baseURL,
+          "sec-fetch-site": "cross-site",
+          "content-type": "application/json",
+        })
+      ).status,
+    ).toBe(403);
+    expect(
+      (
+        await customer.request("POST", "/api/setups", JSON.stringify({ modelId: "mdl-ridge-06" }), {
+          "sec-fetch-site": "same-site",
+          "content-type": "application/json",
+        })
+      ).status,
+    ).toBe(403);
     expect(await count("setups")).toBe(setupsBefore);
     expect(await count("audit_log")).toBe(auditBefore);
     const role = await database.client.execute("select role from user where id = 'usr-support-2'");
@@ -52,7 +67,9 @@ describe("cross-site writes", () => {
   });
 
   it("returns 415 for a same-site write whose body is not declared as JSON", async () => {
-    const response = await customer.request("POST", "/api/setups", JSON.stringify({ modelId: "mdl-ridge-06" }), { "content-type": "text/plain" });
+    const response = await customer.request("POST", "/api/setups", JSON.stringify({ modelId: "mdl-ridge-06" }), {
+      "content-type": "text/plain",
+    });
     expect(response.status).toBe(415);
   });
 });
@@ -68,7 +85,13 @@ describe("request bodies", () => {
       let peakRss = before;
       let answered = false;
       const request = http.request(
-        { hostname: target.hostname, port: target.port, path: target.pathname, method: "POST", headers: { "content-type": "application/json", origin: baseURL, "transfer-encoding": "chunked", cookie: customer.cookieHeader() } },
+        {
+          hostname: target.hostname,
+          port: target.port,
+          path: target.pathname,
+          method: "POST",
+          headers: { "content-type": "application/json", origin: baseURL, "transfer-encoding": "chunked", cookie: customer.cookieHeader() },
+        },
         (response) => {
           answered = true;
           response.resume();
@@ -93,7 +116,9 @@ describe("request bodies", () => {
     // cap is tested on the wrapper itself (tests/unit/server/route.test.ts). Here: memory stays flat.
     expect(result.sentMB).toBeGreaterThan(0);
     expect(Math.max(result.peakRss, after) - before).toBeLessThan(50 * 1024 * 1024);
-    console.log(`[trust] 200 MB chunked body: ${result.status} after ${result.sentMB} MB written; server RSS ${(before / 2 ** 20).toFixed(0)} → peak ${(Math.max(result.peakRss, after) / 2 ** 20).toFixed(0)} MB`);
+    console.log(
+      `[trust] 200 MB chunked body: ${result.status} after ${result.sentMB} MB written; server RSS ${(before / 2 ** 20).toFixed(0)} → peak ${(Math.max(result.peakRss, after) / 2 ** 20).toFixed(0)} MB`,
+    );
   });
 });
 

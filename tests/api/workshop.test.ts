@@ -56,7 +56,9 @@ describe("bad input", () => {
 
   it("answers 400 for a hull preview that is not JSON or not a hull, never a 500", async () => {
     expect((await maker.get("/api/catalogue/hull-preview.glb?hull=%7Bnope")).status).toBe(400);
-    const tooThin = await maker.get(`/api/catalogue/hull-preview.glb?hull=${encodeURIComponent(JSON.stringify({ lengthM: 2, maxDiameterM: 0.001, maxDiameterAtFraction: 0.4 }))}`);
+    const tooThin = await maker.get(
+      `/api/catalogue/hull-preview.glb?hull=${encodeURIComponent(JSON.stringify({ lengthM: 2, maxDiameterM: 0.001, maxDiameterAtFraction: 0.4 }))}`,
+    );
     expect(tooThin.status).toBe(400);
     const { error } = (await tooThin.json()) as { error: { issues: { path: string }[] } };
     expect(error.issues[0].path).toBe("hull.maxDiameterM");
@@ -71,7 +73,8 @@ describe("bad input", () => {
 
   it("answers 422 to an import with one bad row, naming row and column, and imports nothing", async () => {
     const before = (await (await maker.get("/api/catalogue/templates")).json()) as { total: number };
-    const csv = "name,category,mass_kg,shape,length_m,width_m,height_m,attachment,drag_area_m2,offset_x_m,offset_z_m\nGood,light,0.02,box,0.02,0.02,0.02,strap,0,0,-0.05\nBad,light,0.02,box,0.02,0.02,0.02,glue,0,0,-0.05";
+    const csv =
+      "name,category,mass_kg,shape,length_m,width_m,height_m,attachment,drag_area_m2,offset_x_m,offset_z_m\nGood,light,0.02,box,0.02,0.02,0.02,strap,0,0,-0.05\nBad,light,0.02,box,0.02,0.02,0.02,glue,0,0,-0.05";
     const response = await maker.request("POST", "/api/catalogue/templates/import", { csv });
     expect(response.status).toBe(422);
     const { error } = (await response.json()) as { error: { detail: { problems: { row: number; field: string }[] } } };

@@ -24,7 +24,11 @@ let personCount = 0;
 async function signedIn(email: string, next: string): Promise<Page> {
   // Client addresses of this file's own: sign-in limits count per address and per minute, across files.
   personCount += 1;
-  const context = await browser.newContext({ baseURL, viewport: { width: 1360, height: 900 }, extraHTTPHeaders: { "x-forwarded-for": `10.79.0.${personCount}` } });
+  const context = await browser.newContext({
+    baseURL,
+    viewport: { width: 1360, height: 900 },
+    extraHTTPHeaders: { "x-forwarded-for": `10.79.0.${personCount}` },
+  });
   const page = await context.newPage();
   const signIn = new SignInPage(page);
   await signIn.open(next);
@@ -37,7 +41,12 @@ async function signedIn(email: string, next: string): Promise<Page> {
 async function throttleUploads(page: Page, bytesPerSecond: number | null): Promise<void> {
   const cdp = await page.context().newCDPSession(page);
   await cdp.send("Network.enable");
-  await cdp.send("Network.emulateNetworkConditions", { offline: false, latency: 0, downloadThroughput: -1, uploadThroughput: bytesPerSecond ?? -1 });
+  await cdp.send("Network.emulateNetworkConditions", {
+    offline: false,
+    latency: 0,
+    downloadThroughput: -1,
+    uploadThroughput: bytesPerSecond ?? -1,
+  });
 }
 
 beforeAll(async () => {
@@ -89,7 +98,15 @@ describe("attachments in Chromium", () => {
       { name: "whole flight.jpg", mimeType: "image/jpeg", buffer: Buffer.alloc(11 * 1024 * 1024, 0xff) },
     ]);
     await section.tile(SHEET_NAME).waitFor();
-    await expect.poll(() => section.uploadRow("mount.png").getByTestId("upload-error").innerText().catch(() => "")).toMatch(/Only photos \(JPEG, PNG, WebP\) and PDF datasheets/);
+    await expect
+      .poll(() =>
+        section
+          .uploadRow("mount.png")
+          .getByTestId("upload-error")
+          .innerText()
+          .catch(() => ""),
+      )
+      .toMatch(/Only photos \(JPEG, PNG, WebP\) and PDF datasheets/);
     expect(await section.uploadRow("whole flight.jpg").getByTestId("upload-error").innerText()).toMatch(/at most 10 MB/);
     expect(await section.names()).toEqual([PHOTO_NAME, SHEET_NAME]);
     expect(await section.root.getByTestId("attachment-count").innerText()).toBe("2 of 20");

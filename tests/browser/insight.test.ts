@@ -4,7 +4,16 @@ import { DEMO_PASSWORD } from "../../db/seed-data";
 import { SignInPage, launchBrowser, newPersonContext, screenshot } from "../support/browser";
 
 const baseURL = inject("baseURL");
-const SECTIONS = ["insight-payload-mass", "insight-setup-mass", "insight-templates", "insight-rail", "insight-free-lift", "insight-flags", "insight-months", "insight-reasons"];
+const SECTIONS = [
+  "insight-payload-mass",
+  "insight-setup-mass",
+  "insight-templates",
+  "insight-rail",
+  "insight-free-lift",
+  "insight-flags",
+  "insight-months",
+  "insight-reasons",
+];
 let browser: Browser;
 
 beforeAll(async () => {
@@ -34,7 +43,9 @@ describe("Insight in Chromium", () => {
     await page.getByTestId("insight-model").selectOption({ label: "Ridge 0.6" });
     await page.waitForURL(/model=mdl-ridge-06/);
     await page.getByTestId("insight-rail-toggle").click();
-    await expect.poll(async () => [...new Set(await page.getByTestId("insight-rail-table").locator("tbody tr td:first-child").allInnerTexts())]).toEqual(["Ridge 0.6"]);
+    await expect
+      .poll(async () => [...new Set(await page.getByTestId("insight-rail-table").locator("tbody tr td:first-child").allInnerTexts())])
+      .toEqual(["Ridge 0.6"]);
     await screenshot(page, "insight-2-filtered-tables");
     await context.close();
   });

@@ -20,7 +20,15 @@ describe("forgotten password in Chromium", () => {
   it("asks for a link from the sign-in page, follows the captured mail, sets a new password and signs in with it", async () => {
     // A fresh account, so no other test's password changes.
     const email = `forgot-${Date.now()}@trimrail.test`;
-    expect((await new ApiClient(baseURL).request("POST", "/api/auth/sign-up/email", { name: "Ilse Varrow", email, password: "the-first-password" })).status).toBe(200);
+    expect(
+      (
+        await new ApiClient(baseURL).request("POST", "/api/auth/sign-up/email", {
+          name: "Ilse Varrow",
+          email,
+          password: "the-first-password",
+        })
+      ).status,
+    ).toBe(200);
 
     const context = await newPersonContext(browser, baseURL);
     const page = await context.newPage();
@@ -54,7 +62,15 @@ describe("forgotten password in Chromium", () => {
 
   it("shows the maker the captured message on /dev/mail, its HTML in a sandboxed frame", async () => {
     const email = `seen-${Date.now()}@trimrail.test`;
-    expect((await new ApiClient(baseURL).request("POST", "/api/auth/sign-up/email", { name: "Bram Osterlund", email, password: "a-long-password" })).status).toBe(200);
+    expect(
+      (
+        await new ApiClient(baseURL).request("POST", "/api/auth/sign-up/email", {
+          name: "Bram Osterlund",
+          email,
+          password: "a-long-password",
+        })
+      ).status,
+    ).toBe(200);
     await waitForMail({ dir: mailDir, to: email, subject: /Confirm your e-mail address/ });
 
     const context = await newPersonContext(browser, baseURL);
@@ -67,7 +83,9 @@ describe("forgotten password in Chromium", () => {
     await screenshot(page, "mail-dev-mail-list");
     await captured.openMessage("Confirm your e-mail address for Trimrail", email);
     expect(await page.getByTestId("captured-mail-to").innerText()).toContain(email);
-    expect(await page.getByTestId("captured-mail-text").getByRole("link").first().getAttribute("href")).toContain("/api/auth/verify-email?token=");
+    expect(await page.getByTestId("captured-mail-text").getByRole("link").first().getAttribute("href")).toContain(
+      "/api/auth/verify-email?token=",
+    );
     expect(await page.getByTestId("captured-mail-html").getAttribute("sandbox")).toBe("");
     const frame = page.frameLocator('[data-testid="captured-mail-html"]');
     await expect(frame.getByRole("heading", { name: "Hello Bram Osterlund" }).isVisible()).resolves.toBe(true);

@@ -14,7 +14,8 @@ const EMAIL = "customer@trimrail.test";
 // The chart and the curved tether are drawn by components mounted in planner.tsx and
 // planner-scene.tsx; until those lines are in (see the branch's notes), this test has nothing to open.
 const source = (file: string) => readFileSync(new URL(`../../${file}`, import.meta.url), "utf8");
-const mounted = source("components/planner/planner.tsx").includes("OperatingEnvelopeSection") &&
+const mounted =
+  source("components/planner/planner.tsx").includes("OperatingEnvelopeSection") &&
   source("components/planner/planner-scene.tsx").includes("useSceneTether");
 
 let browser: Browser;
@@ -67,7 +68,8 @@ describe.skipIf(!mounted)("the Planner's operating envelope and curved tether in
     // Step back so the whole line shows, from the tether point down to its anchor on the ground.
     const canvas = await planner.page.getByTestId("lifter-canvas").boundingBox();
     if (canvas) {
-      const x = canvas.x + canvas.width / 2, y = canvas.y + canvas.height / 2;
+      const x = canvas.x + canvas.width / 2,
+        y = canvas.y + canvas.height / 2;
       await planner.page.mouse.move(x, y);
       for (let i = 0; i < 14; i++) {
         await planner.page.mouse.wheel(0, 400);

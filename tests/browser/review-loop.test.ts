@@ -58,7 +58,8 @@ describe("the review loop in Chromium", () => {
     await expect.poll(() => customer.getByTestId("setup-status").innerText()).toBe("submitted for review");
     // Both support staff hear of it by mail, kept by the SMTP fake as .eml files.
     const submitted = /^Review requested: Dune camera, first review$/;
-    for (const to of ["support@trimrail.test", "orrin@trimrail.test"]) expect((await waitForMail({ dir: mailDir, to, subject: submitted })).text).toContain("Kasper Lindqvet");
+    for (const to of ["support@trimrail.test", "orrin@trimrail.test"])
+      expect((await waitForMail({ dir: mailDir, to, subject: submitted })).text).toContain("Kasper Lindqvet");
 
     // Support finds it in the queue and opens it.
     const support = await signedIn("support@trimrail.test", "/review");
@@ -92,7 +93,11 @@ describe("the review loop in Chromium", () => {
     expect(await banner.getAttribute("data-decision")).toBe("changes_requested");
     expect(await customer.getByTestId("decision-reason-text").innerText()).toBe(REASON);
     await screenshot(customer, "review-3-customer-reason");
-    const sentBackMail = await waitForMail({ dir: mailDir, to: "kasper@trimrail.test", subject: /^Changes requested: Dune camera, first review$/ });
+    const sentBackMail = await waitForMail({
+      dir: mailDir,
+      to: "kasper@trimrail.test",
+      subject: /^Changes requested: Dune camera, first review$/,
+    });
     expect(sentBackMail.text).toContain(REASON);
     expect(sentBackMail.text).toMatch(/payload 125 g/); // a figure of the setup
 
@@ -105,7 +110,9 @@ describe("the review loop in Chromium", () => {
     await customer.getByTestId("comment-input").fill("Second line added; first day below 60 m.");
     await customer.getByTestId("comment-send").click();
     await customer.getByTestId("thread-comment").filter({ hasText: "Second line added" }).waitFor();
-    expect((await waitForMail({ dir: mailDir, to: "support@trimrail.test", subject: /^New comment on Dune camera, first review$/ })).text).toContain("Second line added");
+    expect(
+      (await waitForMail({ dir: mailDir, to: "support@trimrail.test", subject: /^New comment on Dune camera, first review$/ })).text,
+    ).toContain("Second line added");
     await customer.getByTestId("submit-setup").click();
     await expect.poll(() => customer.getByTestId("setup-status").innerText()).toBe("submitted for review");
 
@@ -114,7 +121,9 @@ describe("the review loop in Chromium", () => {
     await support.getByTestId("thread-comment").filter({ hasText: "Second line added" }).waitFor();
     await review.approve("Balanced; keep both lines on.");
     expect(await review.status()).toBe("approved");
-    expect((await waitForMail({ dir: mailDir, to: "kasper@trimrail.test", subject: /^Approved: Dune camera, first review$/ })).text).toContain("Balanced; keep both lines on.");
+    expect(
+      (await waitForMail({ dir: mailDir, to: "kasper@trimrail.test", subject: /^Approved: Dune camera, first review$/ })).text,
+    ).toContain("Balanced; keep both lines on.");
 
     // The customer sees "approved" and downloads the report.
     await customer.reload();

@@ -78,12 +78,18 @@ describe("signing in as each demo role in Chromium", () => {
     await signIn.open("/workshop/people");
     await signIn.signIn("maker@trimrail.test", DEMO_PASSWORD);
     await page.waitForURL(/\/workshop\/people$/);
-    const orrin = () => page.getByTestId("workshop-users").getByRole("row", { name: /orrin@trimrail\.test/ }).getByTestId("role-select");
+    const orrin = () =>
+      page
+        .getByTestId("workshop-users")
+        .getByRole("row", { name: /orrin@trimrail\.test/ })
+        .getByTestId("role-select");
     await expect(orrin().getAttribute("data-role")).resolves.toBe("support");
     for (const role of ["customer", "support"] as const) {
       await orrin().getByLabel("Role of Orrin Pell").selectOption(role);
       await orrin().getByRole("button", { name: "Change Orrin Pell's role…" }).click();
-      await orrin().getByRole("button", { name: `Yes, make Orrin Pell ${role}` }).click();
+      await orrin()
+        .getByRole("button", { name: `Yes, make Orrin Pell ${role}` })
+        .click();
       await expect.poll(() => orrin().getByRole("status").innerText()).toBe(`Orrin Pell is now ${role}.`);
       await page.reload();
       await expect(orrin().getAttribute("data-role")).resolves.toBe(role);

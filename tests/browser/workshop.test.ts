@@ -49,26 +49,48 @@ describe("the Workshop in Chromium", () => {
     const maker = await signedIn("maker@trimrail.test", "/workshop");
     const workshop = new WorkshopPage(maker);
     const models = await workshop.rowTexts("models");
-    for (const m of DEMO_MODELS) expect(models.some((row) => row.includes(m.name)), m.name).toBe(true);
+    for (const m of DEMO_MODELS)
+      expect(
+        models.some((row) => row.includes(m.name)),
+        m.name,
+      ).toBe(true);
     await screenshot(maker, "workshop-models");
     await workshop.goTo("Serial units", "units");
     const units = await workshop.rowTexts("units");
-    for (const u of DEMO_UNITS) expect(units.some((row) => row.includes(u.serial)), u.serial).toBe(true);
+    for (const u of DEMO_UNITS)
+      expect(
+        units.some((row) => row.includes(u.serial)),
+        u.serial,
+      ).toBe(true);
     await screenshot(maker, "workshop-units");
     await workshop.goTo("Adapters", "adapters");
     const adapters = await workshop.rowTexts("adapters");
-    for (const a of DEMO_ADAPTERS) expect(adapters.some((row) => row.includes(a.name)), a.name).toBe(true);
+    for (const a of DEMO_ADAPTERS)
+      expect(
+        adapters.some((row) => row.includes(a.name)),
+        a.name,
+      ).toBe(true);
     await workshop.goTo("Payload templates", "templates");
     const templates = await workshop.rowTexts("templates");
-    for (const t of DEMO_TEMPLATES) expect(templates.some((row) => row.includes(t.name)), t.name).toBe(true);
+    for (const t of DEMO_TEMPLATES)
+      expect(
+        templates.some((row) => row.includes(t.name)),
+        t.name,
+      ).toBe(true);
     await screenshot(maker, "workshop-templates");
     await workshop.goTo("Mounts", "mounts");
     const mounts = await workshop.rowTexts("mounts");
-    for (const m of DEMO_MOUNTS) expect(mounts.some((row) => row.includes(m.name)), m.name).toBe(true);
+    for (const m of DEMO_MOUNTS)
+      expect(
+        mounts.some((row) => row.includes(m.name)),
+        m.name,
+      ).toBe(true);
 
     // The maker raises the light slider's rated load from 600 g to 2500 g (metric: grams).
     await workshop.editItem(LIGHT_SLIDER.name, { ratedLoadKg: "2500" });
-    await expect.poll(async () => (await workshop.table("mounts").getByTestId("item-row").filter({ hasText: LIGHT_SLIDER.name }).innerText())).toMatch(/2500 g/);
+    await expect
+      .poll(async () => await workshop.table("mounts").getByTestId("item-row").filter({ hasText: LIGHT_SLIDER.name }).innerText())
+      .toMatch(/2500 g/);
     await screenshot(maker, "workshop-mounts-edited");
 
     // The customer's Planner, opened again, checks the camera against the new rating.
@@ -105,7 +127,7 @@ describe("the Workshop in Chromium", () => {
     await screenshot(maker, "workshop-model-preview");
     await maker.getByTestId("model-save").click();
     await maker.waitForURL((url) => /\/workshop\/models\/(?!new)/.test(url.pathname));
-    await expect.poll(async () => (await maker.getByRole("heading", { level: 1 }).innerText())).toBe("Test lifter 1.6");
+    await expect.poll(async () => await maker.getByRole("heading", { level: 1 }).innerText()).toBe("Test lifter 1.6");
     await workshop.waitForPreview();
     // The saved model is drawn from the hull route and keeps the edited volume.
     expect(await workshop.previewVolumeM3()).toBeCloseTo(edited, 9);
@@ -133,7 +155,11 @@ describe("the Workshop in Chromium", () => {
     await screenshot(maker, "workshop-unit-lift-tests");
     // Remove the test again: the first row is the newest.
     maker.once("dialog", (dialog) => void dialog.accept());
-    await maker.getByTestId("lift-test-row").first().getByRole("button", { name: /Remove the lift test/ }).click();
+    await maker
+      .getByTestId("lift-test-row")
+      .first()
+      .getByRole("button", { name: /Remove the lift test/ })
+      .click();
     await expect.poll(() => workshop.unitFactor()).toBeCloseTo(before!, 4);
     await maker.context().close();
   });
@@ -144,7 +170,10 @@ describe("the Workshop in Chromium", () => {
     const rowsBefore = await workshop.rowTexts("templates");
     const dir = mkdtempSync(path.join(os.tmpdir(), "trimrail-csv-"));
     const file = path.join(dir, "templates.csv");
-    writeFileSync(file, "id,name,description,category,mass_kg,shape,length_m,width_m,height_m,attachment,drag_area_m2,offset_x_m,offset_z_m\n,Blue beacon,,light,0.03,cylinder,0.03,0.03,0.05,1/4-20 UNC,0.002,0,-0.06\n,Bad one,,light,0.03,sphere,0.03,0.03,0.05,1/4-20 UNC,0.002,0,-0.06\n");
+    writeFileSync(
+      file,
+      "id,name,description,category,mass_kg,shape,length_m,width_m,height_m,attachment,drag_area_m2,offset_x_m,offset_z_m\n,Blue beacon,,light,0.03,cylinder,0.03,0.03,0.05,1/4-20 UNC,0.002,0,-0.06\n,Bad one,,light,0.03,sphere,0.03,0.03,0.05,1/4-20 UNC,0.002,0,-0.06\n",
+    );
     await maker.getByTestId("templates-import").setInputFiles(file);
     const problems = maker.getByTestId("templates-import-problems");
     await problems.waitFor();
@@ -178,7 +207,10 @@ describe("the Workshop in Chromium", () => {
     await maker.reload();
     await expect(workshop.roleOf("orrin@trimrail.test").getAttribute("data-role")).resolves.toBe("support");
     // Confirmed, it holds after a reload; then it is put back the same way.
-    for (const [to, from] of [["customer", "support"], ["support", "customer"]] as const) {
+    for (const [to, from] of [
+      ["customer", "support"],
+      ["support", "customer"],
+    ] as const) {
       const row = workshop.roleOf("orrin@trimrail.test");
       await row.getByTestId("role-choice").selectOption(to);
       await row.getByTestId("role-change").click();

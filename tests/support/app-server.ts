@@ -60,7 +60,13 @@ async function waitForServer(url: string, child: ChildProcess, timeoutMs: number
  * (`next build` into TEST_DIST_DIR unless `build` is false) and `next start` on a free port of the
  * loopback address.
  */
-export async function startAppServer({ build, databaseUrl: existingDatabaseUrl }: { build: boolean; databaseUrl?: string }): Promise<AppServer> {
+export async function startAppServer({
+  build,
+  databaseUrl: existingDatabaseUrl,
+}: {
+  build: boolean;
+  databaseUrl?: string;
+}): Promise<AppServer> {
   const dir = mkdtempSync(path.join(os.tmpdir(), "trimrail-app-"));
   // A benchmark brings its own (large) database; the tests get a fresh one with the demo.
   const databaseUrl = existingDatabaseUrl ?? `file:${path.join(dir, "app.db")}`;

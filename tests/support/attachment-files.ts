@@ -24,17 +24,25 @@ export async function jpegTurned(): Promise<Buffer> {
 
 /** A PNG with an eXIf chunk and, added by hand, a tEXt comment. */
 export async function pngWithText(): Promise<Buffer> {
-  const png = await sharp(await testCard(200, 120)).png().withExif({ IFD0: { Make: "Fixture rig" } }).toBuffer();
+  const png = await sharp(await testCard(200, 120))
+    .png()
+    .withExif({ IFD0: { Make: "Fixture rig" } })
+    .toBuffer();
   return insertPngChunk(png, "tEXt", Buffer.from("Comment\0taken behind the workshop", "latin1"));
 }
 
 export async function plainPng(): Promise<Buffer> {
-  return sharp(await testCard(200, 120)).png().toBuffer();
+  return sharp(await testCard(200, 120))
+    .png()
+    .toBuffer();
 }
 
 /** A WebP with EXIF (GPS included): the extended (VP8X) layout with its EXIF flag set. */
 export async function webpWithGps(): Promise<Buffer> {
-  return sharp(await testCard(240, 160)).webp({ quality: 80 }).withExif({ IFD0: { Make: "Fixture rig" }, IFD3: FIXTURE_GPS }).toBuffer();
+  return sharp(await testCard(240, 160))
+    .webp({ quality: 80 })
+    .withExif({ IFD0: { Make: "Fixture rig" }, IFD3: FIXTURE_GPS })
+    .toBuffer();
 }
 
 /** A small valid one-page datasheet. */
@@ -49,12 +57,16 @@ export async function datasheetPdf(title = "Relay box R2 — datasheet"): Promis
 
 /** The start of a Linux executable (ELF header) and some code-like bytes: what a renamed program looks like. */
 export function renamedExecutable(): Buffer {
-  const header = Buffer.from([0x7f, 0x45, 0x4c, 0x46, 0x02, 0x01, 0x01, 0x00, 0, 0, 0, 0, 0, 0, 0, 0, 0x02, 0x00, 0x3e, 0x00, 0x01, 0, 0, 0]);
+  const header = Buffer.from([
+    0x7f, 0x45, 0x4c, 0x46, 0x02, 0x01, 0x01, 0x00, 0, 0, 0, 0, 0, 0, 0, 0, 0x02, 0x00, 0x3e, 0x00, 0x01, 0, 0, 0,
+  ]);
   return Buffer.concat([header, Buffer.alloc(8000, 0x90)]);
 }
 
 export function htmlPage(): Buffer {
-  return Buffer.from("<!doctype html><html><head><title>x</title></head><body><script>alert(document.cookie)</script></body></html>\n".repeat(60));
+  return Buffer.from(
+    "<!doctype html><html><head><title>x</title></head><body><script>alert(document.cookie)</script></body></html>\n".repeat(60),
+  );
 }
 
 /** Bytes of one pattern for a body of `sizeBytes`: a JPEG's first bytes, then filler. */
@@ -98,7 +110,7 @@ export function insertPngChunk(png: Buffer, type: string, data: Buffer): Buffer 
 /** The chunk types of a PNG in order. */
 export function pngChunkTypes(png: Buffer): string[] {
   const types: string[] = [];
-  for (let i = 8; i + 8 <= png.length; ) {
+  for (let i = 8; i + 8 <= png.length;) {
     const length = png.readUInt32BE(i);
     types.push(png.toString("latin1", i + 4, i + 8));
     i += 12 + length;

@@ -19,7 +19,11 @@ export interface AttachmentBody {
 }
 
 /** Uploads one file as a browser form would (fetch: Content-Length set, the type the "browser" claims). */
-export async function uploadFile(client: ApiClient, setupId: string, file: { bytes: Uint8Array; name: string; claimedType?: string }): Promise<Response> {
+export async function uploadFile(
+  client: ApiClient,
+  setupId: string,
+  file: { bytes: Uint8Array; name: string; claimedType?: string },
+): Promise<Response> {
   const form = new FormData();
   form.append("file", new Blob([new Uint8Array(file.bytes)], { type: file.claimedType ?? "application/octet-stream" }), file.name);
   return client.upload(`/api/setups/${setupId}/attachments`, form);
@@ -44,7 +48,12 @@ export function streamUpload(
   baseURL: string,
   cookie: string,
   setupId: string,
-  { fileBytes, start, fileName = "big.jpg", keepSending = false }: { fileBytes: number; start: Buffer; fileName?: string; keepSending?: boolean },
+  {
+    fileBytes,
+    start,
+    fileName = "big.jpg",
+    keepSending = false,
+  }: { fileBytes: number; start: Buffer; fileName?: string; keepSending?: boolean },
 ): Promise<StreamedUploadOutcome> {
   const boundary = "----trimrail-stream-boundary";
   // A keep-alive connection, as browsers use (a client asking for "Connection: close" has the
@@ -81,7 +90,9 @@ export function streamUpload(
     });
     request.on("error", (error) => finish(error.message));
     request.on("close", () => finish(null));
-    request.write(`--${boundary}\r\ncontent-disposition: form-data; name="file"; filename="${fileName}"\r\ncontent-type: image/jpeg\r\n\r\n`);
+    request.write(
+      `--${boundary}\r\ncontent-disposition: form-data; name="file"; filename="${fileName}"\r\ncontent-type: image/jpeg\r\n\r\n`,
+    );
     const first = Buffer.alloc(64 * 1024, 0x5a);
     start.copy(first);
     const filler = Buffer.alloc(64 * 1024, 0x5a);

@@ -31,7 +31,9 @@ export class AttachmentsSection {
   async waitForThumbnail(name: string): Promise<{ naturalWidth: number; src: string }> {
     const image = this.tile(name).getByTestId("attachment-thumbnail");
     await image.waitFor();
-    await image.evaluate((img: HTMLImageElement) => (img.complete && img.naturalWidth > 0 ? undefined : new Promise((resolve) => img.addEventListener("load", resolve, { once: true }))));
+    await image.evaluate((img: HTMLImageElement) =>
+      img.complete && img.naturalWidth > 0 ? undefined : new Promise((resolve) => img.addEventListener("load", resolve, { once: true })),
+    );
     return image.evaluate((img: HTMLImageElement) => ({ naturalWidth: img.naturalWidth, src: img.getAttribute("src") ?? "" }));
   }
 

@@ -16,7 +16,8 @@ export async function catalogueFor(db: Db, draft: SetupDraft): Promise<SetupCata
   const [mount] = await db.select().from(mounts).where(eq(mounts.id, draft.mountId));
   const [unitRow] = draft.unitId ? await db.select().from(envelopeUnits).where(eq(envelopeUnits.id, draft.unitId)) : [];
   const tests = unitRow ? await db.select().from(unitLiftTests).where(eq(unitLiftTests.unitId, unitRow.id)) : [];
-  const unit = unitRow && model ? { ...unitRow, calibrationFactor: unitCalibrationFactor(model.gasVolumeM3, latestLiftTest(tests)) } : undefined;
+  const unit =
+    unitRow && model ? { ...unitRow, calibrationFactor: unitCalibrationFactor(model.gasVolumeM3, latestLiftTest(tests)) } : undefined;
   const adapterIds = draft.payloads.map((p) => p.adapterId).filter((id): id is string => id !== null);
   const adapterRows = adapterIds.length ? await db.select().from(adapters).where(inArray(adapters.id, adapterIds)) : [];
   expect(model, `model ${draft.modelId}`).toBeDefined();

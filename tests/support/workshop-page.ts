@@ -64,7 +64,13 @@ export class WorkshopPage {
     return text ? Number(text) : null;
   }
 
-  async recordLiftTest(values: { grossLift: string; temperature: string; pressure?: string; altitude?: string; purity: string }): Promise<string> {
+  async recordLiftTest(values: {
+    grossLift: string;
+    temperature: string;
+    pressure?: string;
+    altitude?: string;
+    purity: string;
+  }): Promise<string> {
     const form = this.page.getByTestId("lift-test-form");
     await form.getByTestId("test-gross-lift").fill(values.grossLift);
     await form.getByTestId("test-temperature").fill(values.temperature);
@@ -78,6 +84,8 @@ export class WorkshopPage {
   }
 
   roleOf(email: string) {
-    return this.table("people").getByRole("row", { name: new RegExp(email.replace(/[.@]/g, "\\$&")) }).getByTestId("role-select");
+    return this.table("people")
+      .getByRole("row", { name: new RegExp(email.replace(/[.@]/g, "\\$&")) })
+      .getByTestId("role-select");
   }
 }

@@ -21,22 +21,25 @@ function demoWith(change: (setup: BalanceInput) => void): BalanceInput {
 }
 
 /** The sail gives no lift: wind only drags it down. */
-const dragOnly = (windMS: number, gustMS?: number): BalanceInput => demoWith((s) => {
-  s.envelope.aero = { ...s.envelope.aero!, liftSlopePerRad: 0 };
-  s.site = { ...s.site, windMS, gustMS };
-});
+const dragOnly = (windMS: number, gustMS?: number): BalanceInput =>
+  demoWith((s) => {
+    s.envelope.aero = { ...s.envelope.aero!, liftSlopePerRad: 0 };
+    s.site = { ...s.site, windMS, gustMS };
+  });
 
-const heavyWhip = (windMS: number): BalanceInput => demoWith((s) => {
-  s.payloads = [{ ...s.payloads[0], massKg: 0.65 }];
-  s.site = { ...s.site, windMS, gustMS: windMS };
-});
+const heavyWhip = (windMS: number): BalanceInput =>
+  demoWith((s) => {
+    s.payloads = [{ ...s.payloads[0], massKg: 0.65 }];
+    s.site = { ...s.site, windMS, gustMS: windMS };
+  });
 
 /** A big envelope that lifts a heavy load on one payload screw. */
-const bigLoad = (massKg: number): BalanceInput => demoWith((s) => {
-  s.envelope.gasVolumeM3 = 1000;
-  s.mount.ratedLoadKg = 5000;
-  s.payloads = [{ ...s.payloads[0], massKg }];
-});
+const bigLoad = (massKg: number): BalanceInput =>
+  demoWith((s) => {
+    s.envelope.gasVolumeM3 = 1000;
+    s.mount.ratedLoadKg = 5000;
+    s.payloads = [{ ...s.payloads[0], massKg }];
+  });
 
 /** 60 m of a heavy line in 3 m/s: half of it lies on the ground. */
 const heavyLine: BalanceInput = demoWith((s) => {
@@ -45,31 +48,73 @@ const heavyLine: BalanceInput = demoWith((s) => {
 });
 
 /** The demo with its whip hung behind the tether point: the line leaves forward, clear of it. */
-const whipAft = (offsetXM: number): BalanceInput => demoWith((s) => { s.payloads[0].offset.x = offsetXM; });
+const whipAft = (offsetXM: number): BalanceInput =>
+  demoWith((s) => {
+    s.payloads[0].offset.x = offsetXM;
+  });
 
 const CASES: { readonly [C in FlagCode]: readonly Case[] } = {
   "free-lift": [
     { level: "ok", what: "the demo", input: demoSetup() },
-    { level: "caution", what: "a heavy mount", input: demoWith((s) => { s.mount.massKg = 0.2; }) },
+    {
+      level: "caution",
+      what: "a heavy mount",
+      input: demoWith((s) => {
+        s.mount.massKg = 0.2;
+      }),
+    },
     { level: "stop", what: "a 2 kg payload", input: { ...symmetricSetup(), payloads: [{ ...symmetricSetup().payloads[0], massKg: 2 }] } },
   ],
   "trim-calm": [
     { level: "ok", what: "the demo", input: demoSetup() },
-    { level: "caution", what: "the mount far aft", input: demoWith((s) => { s.mount.positionX = 1.25; }) },
-    { level: "caution", what: "the mount far forward", input: demoWith((s) => { s.mount.positionX = 0.65; }) },
+    {
+      level: "caution",
+      what: "the mount far aft",
+      input: demoWith((s) => {
+        s.mount.positionX = 1.25;
+      }),
+    },
+    {
+      level: "caution",
+      what: "the mount far forward",
+      input: demoWith((s) => {
+        s.mount.positionX = 0.65;
+      }),
+    },
   ],
   "trim-unstable": [
-    { level: "stop", what: "a tether point above the axis", input: { ...symmetricSetup(), envelope: { ...symmetricSetup().envelope, tetherPoint: { x: 1, z: 1 } } } },
+    {
+      level: "stop",
+      what: "a tether point above the axis",
+      input: { ...symmetricSetup(), envelope: { ...symmetricSetup().envelope, tetherPoint: { x: 1, z: 1 } } },
+    },
   ],
   "trim-wind": [
     { level: "ok", what: "the demo", input: demoSetup() },
-    { level: "caution", what: "8 m/s", input: demoWith((s) => { s.site = { ...s.site, windMS: 8 }; }) },
-    { level: "stop", what: "a pressure centre far forward", input: demoWith((s) => { s.envelope.aero!.pressureCentre = { x: -1, z: 0 }; s.site = { windMS: 10 }; }) },
+    {
+      level: "caution",
+      what: "8 m/s",
+      input: demoWith((s) => {
+        s.site = { ...s.site, windMS: 8 };
+      }),
+    },
+    {
+      level: "stop",
+      what: "a pressure centre far forward",
+      input: demoWith((s) => {
+        s.envelope.aero!.pressureCentre = { x: -1, z: 0 };
+        s.site = { windMS: 10 };
+      }),
+    },
     { level: "stop", what: "a heavy whip in a breath of wind", input: heavyWhip(0.5) },
-    { level: "stop", what: "drag high above the tether point", input: demoWith((s) => {
-      s.envelope.aero = { ...s.envelope.aero!, liftSlopePerRad: 0, dragCoefficient: 2, pressureCentre: { x: 0.845, z: 3 } };
-      s.site = { windMS: 10 };
-    }) },
+    {
+      level: "stop",
+      what: "drag high above the tether point",
+      input: demoWith((s) => {
+        s.envelope.aero = { ...s.envelope.aero!, liftSlopePerRad: 0, dragCoefficient: 2, pressureCentre: { x: 0.845, z: 3 } };
+        s.site = { windMS: 10 };
+      }),
+    },
   ],
   "trim-gust": [
     { level: "caution", what: "the demo's 7 m/s gust", input: demoSetup() },
@@ -79,10 +124,14 @@ const CASES: { readonly [C in FlagCode]: readonly Case[] } = {
     { level: "ok", what: "the demo (worse at the anchor)", input: demoSetup() },
     { level: "caution", what: "a sail without lift at 3 m/s, the line flatter at the anchor", input: dragOnly(3) },
     { level: "stop", what: "a sail without lift at 8 m/s", input: dragOnly(8) },
-    { level: "caution", what: "a sail without lift at 4 m/s and no tether given (the lifter's end only)", input: demoWith((s) => {
-      Object.assign(s, dragOnly(4));
-      delete s.tether;
-    }) },
+    {
+      level: "caution",
+      what: "a sail without lift at 4 m/s and no tether given (the lifter's end only)",
+      input: demoWith((s) => {
+        Object.assign(s, dragOnly(4));
+        delete s.tether;
+      }),
+    },
     { level: "stop", what: "a heavy line lying on the ground (90° at the anchor)", input: heavyLine },
   ],
   "tether-angle-gust": [
@@ -91,84 +140,232 @@ const CASES: { readonly [C in FlagCode]: readonly Case[] } = {
   ],
   "mount-off-rail": [
     { level: "ok", what: "the demo", input: demoSetup() },
-    { level: "stop", what: "the mount past the rail's aft end", input: demoWith((s) => { s.mount.positionX = s.envelope.rail.endX + 0.01; }) },
-    { level: "stop", what: "the mount ahead of the rail", input: demoWith((s) => { s.mount.positionX = s.envelope.rail.startX - 0.2; }) },
+    {
+      level: "stop",
+      what: "the mount past the rail's aft end",
+      input: demoWith((s) => {
+        s.mount.positionX = s.envelope.rail.endX + 0.01;
+      }),
+    },
+    {
+      level: "stop",
+      what: "the mount ahead of the rail",
+      input: demoWith((s) => {
+        s.mount.positionX = s.envelope.rail.startX - 0.2;
+      }),
+    },
   ],
   "thread-mismatch": [
     { level: "ok", what: "the demo (one direct, one through an adapter)", input: demoSetup() },
-    { level: "stop", what: "a 3/8-16 payload without adapter", input: demoWith((s) => { delete s.payloads[1].adapter; }) },
+    {
+      level: "stop",
+      what: "a 3/8-16 payload without adapter",
+      input: demoWith((s) => {
+        delete s.payloads[1].adapter;
+      }),
+    },
   ],
   "adapter-mismatch": [
-    { level: "stop", what: "an adapter for the wrong thread", input: demoWith((s) => { s.payloads[1].adapter = { massKg: 0.01, from: "1/4-20 UNC", to: "1/4-20 UNC" }; }) },
+    {
+      level: "stop",
+      what: "an adapter for the wrong thread",
+      input: demoWith((s) => {
+        s.payloads[1].adapter = { massKg: 0.01, from: "1/4-20 UNC", to: "1/4-20 UNC" };
+      }),
+    },
   ],
   "mount-rated-load": [
     { level: "ok", what: "the demo", input: demoSetup() },
-    { level: "caution", what: "a mount rated 0.65 kg", input: demoWith((s) => { s.mount.ratedLoadKg = 0.65; }) },
-    { level: "stop", what: "a mount rated 0.5 kg", input: demoWith((s) => { s.mount.ratedLoadKg = 0.5; }) },
+    {
+      level: "caution",
+      what: "a mount rated 0.65 kg",
+      input: demoWith((s) => {
+        s.mount.ratedLoadKg = 0.65;
+      }),
+    },
+    {
+      level: "stop",
+      what: "a mount rated 0.5 kg",
+      input: demoWith((s) => {
+        s.mount.ratedLoadKg = 0.5;
+      }),
+    },
   ],
   "thread-capacity": [
     { level: "ok", what: "the demo", input: demoSetup() },
-    { level: "caution", what: "300 kg on the payload's own screw", input: demoWith((s) => {
-      Object.assign(s, bigLoad(300));
-      s.mount.thread = "3/8-16 UNC";
-      s.payloads[0].adapter = { massKg: 0.01, from: "1/4-20 UNC", to: "3/8-16 UNC" };
-    }) },
+    {
+      level: "caution",
+      what: "300 kg on the payload's own screw",
+      input: demoWith((s) => {
+        Object.assign(s, bigLoad(300));
+        s.mount.thread = "3/8-16 UNC";
+        s.payloads[0].adapter = { massKg: 0.01, from: "1/4-20 UNC", to: "3/8-16 UNC" };
+      }),
+    },
     { level: "stop", what: "500 kg on the mount's screw", input: bigLoad(500) },
   ],
   "safety-line": [
     { level: "ok", what: "the demo", input: demoSetup() },
-    { level: "caution", what: "no safety line", input: demoWith((s) => { delete s.mount.safetyLineBreakingLoadN; }) },
-    { level: "caution", what: "a 20 N line", input: demoWith((s) => { s.mount.safetyLineBreakingLoadN = 20; }) },
-    { level: "stop", what: "a 5 N line", input: demoWith((s) => { s.mount.safetyLineBreakingLoadN = 5; }) },
+    {
+      level: "caution",
+      what: "no safety line",
+      input: demoWith((s) => {
+        delete s.mount.safetyLineBreakingLoadN;
+      }),
+    },
+    {
+      level: "caution",
+      what: "a 20 N line",
+      input: demoWith((s) => {
+        s.mount.safetyLineBreakingLoadN = 20;
+      }),
+    },
+    {
+      level: "stop",
+      what: "a 5 N line",
+      input: demoWith((s) => {
+        s.mount.safetyLineBreakingLoadN = 5;
+      }),
+    },
   ],
   "clearance-hull": [
     { level: "ok", what: "the demo", input: demoSetup() },
-    { level: "caution", what: "the logger 1.5 cm higher", input: demoWith((s) => { s.payloads[1].offset.z += 0.015; }) },
-    { level: "stop", what: "the logger inside the hull", input: demoWith((s) => { s.payloads = [{ ...s.payloads[1], offset: { x: 0, z: 0.02 } }]; }) },
+    {
+      level: "caution",
+      what: "the logger 1.5 cm higher",
+      input: demoWith((s) => {
+        s.payloads[1].offset.z += 0.015;
+      }),
+    },
+    {
+      level: "stop",
+      what: "the logger inside the hull",
+      input: demoWith((s) => {
+        s.payloads = [{ ...s.payloads[1], offset: { x: 0, z: 0.02 } }];
+      }),
+    },
   ],
   "clearance-tether": [
     { level: "stop", what: "the demo: its whip hangs ahead of the tether point, across the line to the anchor", input: demoSetup() },
     { level: "ok", what: "the whip under the mount, aft of the tether point", input: whipAft(0) },
-    { level: "ok", what: "calm air", input: demoWith((s) => { s.site = { ...s.site, windMS: 0 }; }) },
+    {
+      level: "ok",
+      what: "calm air",
+      input: demoWith((s) => {
+        s.site = { ...s.site, windMS: 0 };
+      }),
+    },
     { level: "caution", what: "the whip 2 cm further forward", input: whipAft(-0.17) },
-    { level: "stop", what: "the whip hanging across the line", input: demoWith((s) => {
-      const t = s.envelope.tetherPoint;
-      s.site = { windMS: 0 };
-      s.mount.positionX = t.x;
-      s.payloads = [{ ...s.payloads[0], offset: { x: 0, z: t.z - s.envelope.rail.z - 0.1 } }];
-    }) },
+    {
+      level: "stop",
+      what: "the whip hanging across the line",
+      input: demoWith((s) => {
+        const t = s.envelope.tetherPoint;
+        s.site = { windMS: 0 };
+        s.mount.positionX = t.x;
+        s.payloads = [{ ...s.payloads[0], offset: { x: 0, z: t.z - s.envelope.rail.z - 0.1 } }];
+      }),
+    },
   ],
   "tether-length": [
     { level: "ok", what: "the demo", input: demoSetup() },
-    { level: "caution", what: "60 m out", input: demoWith((s) => { s.tether!.lengthOutM = 60; }) },
-    { level: "stop", what: "200 m out", input: demoWith((s) => { s.tether!.lengthOutM = 200; }) },
+    {
+      level: "caution",
+      what: "60 m out",
+      input: demoWith((s) => {
+        s.tether!.lengthOutM = 60;
+      }),
+    },
+    {
+      level: "stop",
+      what: "200 m out",
+      input: demoWith((s) => {
+        s.tether!.lengthOutM = 200;
+      }),
+    },
   ],
   "tether-strength": [
     { level: "ok", what: "the demo", input: demoSetup() },
-    { level: "caution", what: "a 50 N tether", input: demoWith((s) => { s.tether!.breakingLoadN = 50; }) },
-    { level: "stop", what: "a 5 N tether", input: demoWith((s) => { s.tether!.breakingLoadN = 5; }) },
-    { level: "ok", what: "calm air", input: demoWith((s) => { s.site = { altitudeM: 240 }; }) },
-    { level: "ok", what: "a light, thick line in 12 m/s (largest at the anchor)", input: demoWith((s) => {
-      s.tether = { ...s.tether!, massPerMetreKg: 0.0005, diameterM: 0.004, lengthOutM: 200 };
-      s.site = { ...s.site, windMS: 12, gustMS: undefined };
-    }) },
+    {
+      level: "caution",
+      what: "a 50 N tether",
+      input: demoWith((s) => {
+        s.tether!.breakingLoadN = 50;
+      }),
+    },
+    {
+      level: "stop",
+      what: "a 5 N tether",
+      input: demoWith((s) => {
+        s.tether!.breakingLoadN = 5;
+      }),
+    },
+    {
+      level: "ok",
+      what: "calm air",
+      input: demoWith((s) => {
+        s.site = { altitudeM: 240 };
+      }),
+    },
+    {
+      level: "ok",
+      what: "a light, thick line in 12 m/s (largest at the anchor)",
+      input: demoWith((s) => {
+        s.tether = { ...s.tether!, massPerMetreKg: 0.0005, diameterM: 0.004, lengthOutM: 200 };
+        s.site = { ...s.site, windMS: 12, gustMS: undefined };
+      }),
+    },
   ],
-  "tether-on-ground": [
-    { level: "caution", what: "a heavy line in 3 m/s", input: heavyLine },
-  ],
+  "tether-on-ground": [{ level: "caution", what: "a heavy line in 3 m/s", input: heavyLine }],
   "helium-top-up": [
     { level: "ok", what: "the demo (loss through the fabric)", input: demoSetup() },
-    { level: "ok", what: "a given loss", input: demoWith((s) => { s.gas = { ...s.gas, lossPerDayFraction: 0.01 }; }) },
-    { level: "ok", what: "no hull shape (the flat rule of thumb)", input: demoWith((s) => { delete s.envelope.hull; }) },
+    {
+      level: "ok",
+      what: "a given loss",
+      input: demoWith((s) => {
+        s.gas = { ...s.gas, lossPerDayFraction: 0.01 };
+      }),
+    },
+    {
+      level: "ok",
+      what: "no hull shape (the flat rule of thumb)",
+      input: demoWith((s) => {
+        delete s.envelope.hull;
+      }),
+    },
   ],
   "moored-balloon-rules": [
     { level: "ok", what: "the demo", input: demoSetup() },
-    { level: "caution", what: "3.3 m³ of gas", input: demoWith((s) => { s.envelope.gasVolumeM3 = 3.3; }) },
-    { level: "caution", what: "1.9 m across", input: demoWith((s) => { s.envelope.hull!.maxDiameterM = 1.9; }) },
-    { level: "ok", what: "no hull shape", input: demoWith((s) => { delete s.envelope.hull; }) },
+    {
+      level: "caution",
+      what: "3.3 m³ of gas",
+      input: demoWith((s) => {
+        s.envelope.gasVolumeM3 = 3.3;
+      }),
+    },
+    {
+      level: "caution",
+      what: "1.9 m across",
+      input: demoWith((s) => {
+        s.envelope.hull!.maxDiameterM = 1.9;
+      }),
+    },
+    {
+      level: "ok",
+      what: "no hull shape",
+      input: demoWith((s) => {
+        delete s.envelope.hull;
+      }),
+    },
   ],
   "tether-height": [
-    { level: "caution", what: "70 m out", input: demoWith((s) => { s.tether!.lengthOutM = 70; }) },
+    {
+      level: "caution",
+      what: "70 m out",
+      input: demoWith((s) => {
+        s.tether!.lengthOutM = 70;
+      }),
+    },
   ],
 };
 
@@ -242,7 +439,20 @@ describe("flagMessage", () => {
             expect(metric).toBe(flag.message);
             expect(metric).not.toMatch(IMPERIAL_UNIT);
             for (const [name, f] of figuresOf(flag)) {
-              expect(f.unit, name).toBe({ mass: "kg", force: "N", length: "m", smallLength: "m", distance: "m", speed: "m/s", volume: "m³", angle: "rad", ratio: "1", duration: "s" }[f.quantity]);
+              expect(f.unit, name).toBe(
+                {
+                  mass: "kg",
+                  force: "N",
+                  length: "m",
+                  smallLength: "m",
+                  distance: "m",
+                  speed: "m/s",
+                  volume: "m³",
+                  angle: "rad",
+                  ratio: "1",
+                  duration: "s",
+                }[f.quantity],
+              );
               expect(metric, `${name}.value`).toContain(expectedText(f.quantity, f.unit, f.value, "metric"));
               if (f.limit !== undefined) expect(metric, `${name}.limit`).toContain(expectedText(f.quantity, f.unit, f.limit, "metric"));
             }
@@ -283,7 +493,11 @@ describe("flagMessage", () => {
   });
 
   it("returns tether lengths in whole feet by definition (1 ft = 0.3048 m; NIST SP 811)", () => {
-    const flag = evaluateBalance(demoWith((s) => { s.tether!.lengthOutM = 70; })).flags.find((f) => f.code === "tether-height");
+    const flag = evaluateBalance(
+      demoWith((s) => {
+        s.tether!.lengthOutM = 70;
+      }),
+    ).flags.find((f) => f.code === "tether-height");
     expect(flagMessage(flag!, "imperial")).toContain(`With ${(70 / 0.3048).toFixed(0)} ft of tether out it can fly higher than 150 ft`);
     expect(flagMessage(flag!, "imperial")).toContain(`higher than ${(60 / 0.3048).toFixed(0)} ft needs permission`);
   });
@@ -304,7 +518,10 @@ describe("flagMessage", () => {
   });
 
   it("returns words without a gap for flags stored before their newer parameters existed", () => {
-    const stored = JSON.parse(JSON.stringify(evaluateBalance(demoSetup()).flags)) as Array<{ code: string; params: Record<string, unknown> }>;
+    const stored = JSON.parse(JSON.stringify(evaluateBalance(demoSetup()).flags)) as Array<{
+      code: string;
+      params: Record<string, unknown>;
+    }>;
     for (const flag of stored) {
       // What a result saved before the tether line had: no line end, no loss source.
       delete flag.params.end;

@@ -33,7 +33,23 @@ describe("toDisplay / fromDisplay", () => {
   });
 
   it("round-trips every quantity in both systems", () => {
-    const quantities = ["mass", "itemMass", "length", "smallLength", "distance", "volume", "speed", "temperature", "temperatureDifference", "force", "massPerLength", "area", "angle", "ratio", "duration"] as const;
+    const quantities = [
+      "mass",
+      "itemMass",
+      "length",
+      "smallLength",
+      "distance",
+      "volume",
+      "speed",
+      "temperature",
+      "temperatureDifference",
+      "force",
+      "massPerLength",
+      "area",
+      "angle",
+      "ratio",
+      "duration",
+    ] as const;
     for (const system of ["metric", "imperial"] as const) {
       for (const q of quantities) {
         for (const si of [-12.5, 0, 0.001, 3.7, 1234]) expect(fromDisplay(q, toDisplay(q, si, system), system)).toBeCloseTo(si, 9);

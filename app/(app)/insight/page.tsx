@@ -19,9 +19,20 @@ export default async function InsightPage() {
           </a>
         )}
       </div>
-      <p className="text-sm text-muted">What customers plan and fly, counted from their saved setups: to size the next batch and the next envelope.</p>
-      <Suspense fallback={<p role="status" className="text-sm text-muted">Loading…</p>}>
-        <InsightView models={models.map((m) => ({ id: m.id, name: m.name, railStartXM: m.railStartXM, railEndXM: m.railEndXM }))} unitSystem={viewer.unitSystem} />
+      <p className="text-sm text-muted">
+        What customers plan and fly, counted from their saved setups: to size the next batch and the next envelope.
+      </p>
+      <Suspense
+        fallback={
+          <p role="status" className="text-sm text-muted">
+            Loading…
+          </p>
+        }
+      >
+        <InsightView
+          models={models.map((m) => ({ id: m.id, name: m.name, railStartXM: m.railStartXM, railEndXM: m.railEndXM }))}
+          unitSystem={viewer.unitSystem}
+        />
       </Suspense>
     </section>
   );

@@ -12,8 +12,17 @@ export default async function ReviewDeskPage() {
   return (
     <section className="space-y-4">
       <h1 className="text-2xl">Review desk</h1>
-      <p className="text-sm text-muted">Setups customers have submitted before a first flight. Open one to read its balance report, discuss it, and approve it or send it back.</p>
-      <Suspense fallback={<p role="status" className="text-sm text-muted">Loading the queue…</p>}>
+      <p className="text-sm text-muted">
+        Setups customers have submitted before a first flight. Open one to read its balance report, discuss it, and approve it or send it
+        back.
+      </p>
+      <Suspense
+        fallback={
+          <p role="status" className="text-sm text-muted">
+            Loading the queue…
+          </p>
+        }
+      >
         <ReviewQueue models={models.map((m) => ({ id: m.id, name: m.name }))} unitSystem={viewer.unitSystem} />
       </Suspense>
     </section>

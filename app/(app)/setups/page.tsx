@@ -17,7 +17,10 @@ export default async function SetupsPage({ searchParams }: PageProps<"/setups">)
   const viewer = await requirePageViewer(undefined, "/setups");
   const asked = Number((await searchParams).page);
   const page = Number.isInteger(asked) && asked >= 1 && asked <= 1_000_000 ? asked : 1;
-  const [{ rows, total }, models] = await Promise.all([listSetupsForOwner({ ownerId: viewer.id, page, pageSize: PAGE_SIZE }), listActiveEnvelopeModels()]);
+  const [{ rows, total }, models] = await Promise.all([
+    listSetupsForOwner({ ownerId: viewer.id, page, pageSize: PAGE_SIZE }),
+    listActiveEnvelopeModels(),
+  ]);
   const unread = await countUnreadComments({ setupIds: rows.map((r) => r.id), userId: viewer.id });
   return (
     <section className="space-y-4">
@@ -27,13 +30,25 @@ export default async function SetupsPage({ searchParams }: PageProps<"/setups">)
       </div>
       {total === 0 ? (
         <EmptyState title="No setups yet">
-          A setup is one payload configuration on one envelope: the mount&apos;s place on the belly rail, the payloads, the
-          site, the gas and the tether. Start one with “New setup”; it will be listed here with its status and worst flag.
+          A setup is one payload configuration on one envelope: the mount&apos;s place on the belly rail, the payloads, the site, the gas
+          and the tether. Start one with “New setup”; it will be listed here with its status and worst flag.
         </EmptyState>
       ) : (
         <>
-          <SetupTable rows={rows} hrefFor={(row) => `/setups/${row.id}`} actionsFor={(row) => <SetupRowActions id={row.id} name={row.name} />} unread={unread} />
-          {rows.length === 0 && <p className="text-sm text-muted">No setups on this page. <Link href="/setups" className="text-accent underline">Back to the first page</Link></p>}
+          <SetupTable
+            rows={rows}
+            hrefFor={(row) => `/setups/${row.id}`}
+            actionsFor={(row) => <SetupRowActions id={row.id} name={row.name} />}
+            unread={unread}
+          />
+          {rows.length === 0 && (
+            <p className="text-sm text-muted">
+              No setups on this page.{" "}
+              <Link href="/setups" className="text-accent underline">
+                Back to the first page
+              </Link>
+            </p>
+          )}
           <Pager page={page} pageSize={PAGE_SIZE} total={total} hrefFor={(n) => `/setups?page=${n}`} label="Setup pages" />
         </>
       )}

@@ -19,25 +19,53 @@ export default async function WorkshopModelsPage({ searchParams }: PageProps<"/w
   const units = viewer.unitSystem;
   return (
     <section className="space-y-4">
-      <WorkshopNav current="models" title="Workshop" intro="The catalogue customers plan with. An item that setups use is retired rather than deleted, so those setups keep working." />
+      <WorkshopNav
+        current="models"
+        title="Workshop"
+        intro="The catalogue customers plan with. An item that setups use is retired rather than deleted, so those setups keep working."
+      />
       <div className="flex items-center justify-between">
         <h2 className="text-lg">Envelope models</h2>
-        <Link href="/workshop/models/new" className="rounded bg-accent px-3 py-1.5 text-sm text-white" data-testid="new-model">New model</Link>
+        <Link href="/workshop/models/new" className="rounded bg-accent px-3 py-1.5 text-sm text-white" data-testid="new-model">
+          New model
+        </Link>
       </div>
       <table className="panel w-full border-separate border-spacing-0 text-sm" data-testid="workshop-models">
         <thead className="text-left text-muted">
-          <tr><th className="px-3 py-2">Model</th><th className="px-3 py-2">Gas volume</th><th className="px-3 py-2">Mass</th><th className="px-3 py-2">Rail</th><th className="px-3 py-2">Used by</th><th className="px-3 py-2">State</th><th className="px-3 py-2"><span className="sr-only">Actions</span></th></tr>
+          <tr>
+            <th className="px-3 py-2">Model</th>
+            <th className="px-3 py-2">Gas volume</th>
+            <th className="px-3 py-2">Mass</th>
+            <th className="px-3 py-2">Rail</th>
+            <th className="px-3 py-2">Used by</th>
+            <th className="px-3 py-2">State</th>
+            <th className="px-3 py-2">
+              <span className="sr-only">Actions</span>
+            </th>
+          </tr>
         </thead>
         <tbody>
           {list.rows.map((m) => (
             <tr key={m.id} data-testid="model-row" data-model-id={m.id}>
-              <td className={cell}><Link href={`/workshop/models/${m.id}`} className="text-accent-dark underline">{m.name}</Link></td>
+              <td className={cell}>
+                <Link href={`/workshop/models/${m.id}`} className="text-accent-dark underline">
+                  {m.name}
+                </Link>
+              </td>
               <td className={`${cell} figure`}>{formatQuantity("volume", m.gasVolumeM3, units)}</td>
               <td className={`${cell} figure`}>{formatQuantity("mass", m.nominalMassKg, units)}</td>
-              <td className={`${cell} figure`}>{formatQuantity("length", m.railStartXM, units)} – {formatQuantity("length", m.railEndXM, units)}</td>
-              <td className={`${cell} figure`}>{m.setupCount} setup{m.setupCount === 1 ? "" : "s"}</td>
-              <td className={cell}><ActiveBadge active={m.active} /></td>
-              <td className={cell}><ItemActions kind="models" id={m.id} name={m.name} active={m.active} setupCount={m.setupCount} /></td>
+              <td className={`${cell} figure`}>
+                {formatQuantity("length", m.railStartXM, units)} – {formatQuantity("length", m.railEndXM, units)}
+              </td>
+              <td className={`${cell} figure`}>
+                {m.setupCount} setup{m.setupCount === 1 ? "" : "s"}
+              </td>
+              <td className={cell}>
+                <ActiveBadge active={m.active} />
+              </td>
+              <td className={cell}>
+                <ItemActions kind="models" id={m.id} name={m.name} active={m.active} setupCount={m.setupCount} />
+              </td>
             </tr>
           ))}
         </tbody>

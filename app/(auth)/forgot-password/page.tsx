@@ -10,7 +10,10 @@ export default function ForgotPasswordPage() {
       <p className="mb-4 text-sm text-muted">Give the e-mail address of your account and we send a link to choose a new one.</p>
       <ForgotPasswordForm />
       <p className="mt-4 text-sm text-muted">
-        Remembered it? <Link href="/sign-in" className="text-accent underline">Sign in</Link>
+        Remembered it?{" "}
+        <Link href="/sign-in" className="text-accent underline">
+          Sign in
+        </Link>
       </p>
     </>
   );

@@ -9,7 +9,10 @@ export default function SignUpPage() {
       <h1 className="mb-4 text-2xl">Create an account</h1>
       <AuthForm mode="sign-up" />
       <p className="mt-4 text-sm text-muted">
-        Already have one? <Link href="/sign-in" className="text-accent underline">Sign in</Link>
+        Already have one?{" "}
+        <Link href="/sign-in" className="text-accent underline">
+          Sign in
+        </Link>
       </p>
     </>
   );

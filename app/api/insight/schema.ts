@@ -4,7 +4,10 @@ const day = (name: string) =>
   z
     .string()
     .regex(/^\d{4}-\d{2}-\d{2}$/, `${name} must be a date written yyyy-mm-dd`)
-    .refine((text) => !Number.isNaN(Date.parse(`${text}T00:00:00Z`)) && new Date(`${text}T00:00:00Z`).toISOString().startsWith(text), `${name} is not a calendar date`)
+    .refine(
+      (text) => !Number.isNaN(Date.parse(`${text}T00:00:00Z`)) && new Date(`${text}T00:00:00Z`).toISOString().startsWith(text),
+      `${name} is not a calendar date`,
+    )
     .optional();
 
 /** Insight's filters: an envelope model, and a range of days the setups were created in (both ends included). */

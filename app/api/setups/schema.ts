@@ -11,20 +11,32 @@ export const setupParamsSchema = z.object({ id });
 export const pageQuerySchema = z
   .object({
     page: z.coerce.number("page must be a number").int("page must be a whole number").min(1, "page starts at 1").max(1_000_000).default(1),
-    pageSize: z.coerce.number("pageSize must be a number").int("pageSize must be a whole number").min(1).max(100, "pageSize is at most 100").default(25),
+    pageSize: z.coerce
+      .number("pageSize must be a number")
+      .int("pageSize must be a whole number")
+      .min(1)
+      .max(100, "pageSize is at most 100")
+      .default(25),
   })
   .strict();
 
 /** A new setup: a whole draft, or the neutral start on one envelope model. */
 export const createSetupBodySchema = z
   .object({ draft: setupDraftSchema.optional(), modelId: id.optional() })
-  .refine((body) => (body.draft === undefined) !== (body.modelId === undefined), { message: "Send either a draft or a modelId.", path: ["draft"] })
+  .refine((body) => (body.draft === undefined) !== (body.modelId === undefined), {
+    message: "Send either a draft or a modelId.",
+    path: ["draft"],
+  })
   .transform((body) => (body.draft ? { draft: body.draft } : { modelId: body.modelId as string }));
 export const saveSetupBodySchema = z.object({ version, draft: setupDraftSchema });
 export const submitSetupBodySchema = z.object({ version, acknowledgeCautions: z.boolean().default(false) });
 
 export const commentBodySchema = z.object({
-  body: z.string("body must be text").trim().min(1, "Write something first.").max(COMMENT_MAX_LENGTH, `At most ${COMMENT_MAX_LENGTH} characters.`),
+  body: z
+    .string("body must be text")
+    .trim()
+    .min(1, "Write something first.")
+    .max(COMMENT_MAX_LENGTH, `At most ${COMMENT_MAX_LENGTH} characters.`),
 });
 
 const wordCount = (text: string) => text.split(/\s+/).filter(Boolean).length;
@@ -33,7 +45,10 @@ export const decisionBodySchema = z
   .object({
     decision: z.enum(DECISION_OUTCOMES, { message: "decision must be approved or changes_requested" }),
     reason: z.string("reason must be text").trim().max(COMMENT_MAX_LENGTH, `At most ${COMMENT_MAX_LENGTH} characters.`).default(""),
-    reasonCodes: z.array(z.enum(REVIEW_REASON_CODES, { message: "unknown reason code" })).max(REVIEW_REASON_CODES.length).default([]),
+    reasonCodes: z
+      .array(z.enum(REVIEW_REASON_CODES, { message: "unknown reason code" }))
+      .max(REVIEW_REASON_CODES.length)
+      .default([]),
     version,
   })
   .superRefine((body, ctx) => {

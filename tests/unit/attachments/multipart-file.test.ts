@@ -18,7 +18,9 @@ interface CountingBody {
 
 /** A multipart body of one file of `fileBytes` bytes (first bytes `start`), produced only as it is read. */
 function countingMultipart(fileBytes: number, start: Buffer, fileName = "photo.jpg", holdAfterBytes = Infinity): CountingBody {
-  const head = Buffer.from(`--${BOUNDARY}\r\ncontent-disposition: form-data; name="file"; filename="${fileName}"\r\ncontent-type: image/jpeg\r\n\r\n`);
+  const head = Buffer.from(
+    `--${BOUNDARY}\r\ncontent-disposition: form-data; name="file"; filename="${fileName}"\r\ncontent-type: image/jpeg\r\n\r\n`,
+  );
   const tail = Buffer.from(`\r\n--${BOUNDARY}--\r\n`);
   let pulled = 0;
   let fileSent = 0;
@@ -56,7 +58,12 @@ function countingMultipart(fileBytes: number, start: Buffer, fileName = "photo.j
 }
 
 const requestWith = (body: ReadableStream<Uint8Array>) =>
-  new Request("http://test.invalid/upload", { method: "POST", body, headers: { "content-type": `multipart/form-data; boundary=${BOUNDARY}` }, duplex: "half" } as RequestInit);
+  new Request("http://test.invalid/upload", {
+    method: "POST",
+    body,
+    headers: { "content-type": `multipart/form-data; boundary=${BOUNDARY}` },
+    duplex: "half",
+  } as RequestInit);
 
 const JPEG_START = Buffer.from([0xff, 0xd8, 0xff, 0xe0, 0x00, 0x10, 0x4a, 0x46, 0x49, 0x46, 0x00]);
 const options = {
@@ -69,7 +76,9 @@ const options = {
 describe("receiveSingleFile", () => {
   it("returns the file as written to a temporary file, with its name and size", async () => {
     const { body } = countingMultipart(200_000, JPEG_START, "field day.jpg");
-    const result = await receiveSingleFile(requestWith(body), options, async (file, verdict) => ok({ ...file, verdict, bytes: await readFile(file.path) }));
+    const result = await receiveSingleFile(requestWith(body), options, async (file, verdict) =>
+      ok({ ...file, verdict, bytes: await readFile(file.path) }),
+    );
     expect(result.ok).toBe(true);
     if (!result.ok) return;
     expect(result.data.fileName).toBe("field day.jpg");
@@ -108,14 +117,24 @@ describe("receiveSingleFile", () => {
       headers: { "content-type": `multipart/form-data; boundary=${BOUNDARY}`, "content-length": String(2 * MAX_BYTES) },
       duplex: "half",
     } as RequestInit);
-    expect(await receiveSingleFile(request, options, async () => ok(null))).toMatchObject({ ok: false, error: { code: "payload_too_large" } });
+    expect(await receiveSingleFile(request, options, async () => ok(null))).toMatchObject({
+      ok: false,
+      error: { code: "payload_too_large" },
+    });
     expect(counting.pulledBytes()).toBeLessThan(64 * 1024);
   });
 
   it("returns 400 for a body that is not multipart or holds no file", async () => {
     const json = new Request("http://test.invalid/upload", { method: "POST", body: "{}", headers: { "content-type": "application/json" } });
     expect(await receiveSingleFile(json, options, async () => ok(null))).toMatchObject({ ok: false, error: { code: "bad_request" } });
-    const empty = new Request("http://test.invalid/upload", { method: "POST", body: `--${BOUNDARY}--\r\n`, headers: { "content-type": `multipart/form-data; boundary=${BOUNDARY}` } });
-    expect(await receiveSingleFile(empty, options, async () => ok(null))).toMatchObject({ ok: false, error: { code: "bad_request", message: "The body holds no file." } });
+    const empty = new Request("http://test.invalid/upload", {
+      method: "POST",
+      body: `--${BOUNDARY}--\r\n`,
+      headers: { "content-type": `multipart/form-data; boundary=${BOUNDARY}` },
+    });
+    expect(await receiveSingleFile(empty, options, async () => ok(null))).toMatchObject({
+      ok: false,
+      error: { code: "bad_request", message: "The body holds no file." },
+    });
   });
 });

@@ -3,7 +3,16 @@ import sharp from "sharp";
 import { describe, expect, it } from "vitest";
 import { prepareImage, THUMBNAIL_SIZE_PX } from "@/lib/attachments/images";
 import { stripImageMetadata } from "@/lib/attachments/strip-metadata";
-import { exifHasGps, jpegTurned, jpegWithGps, pixels, plainPng, pngChunkTypes, pngWithText, webpWithGps } from "../../support/attachment-files";
+import {
+  exifHasGps,
+  jpegTurned,
+  jpegWithGps,
+  pixels,
+  plainPng,
+  pngChunkTypes,
+  pngWithText,
+  webpWithGps,
+} from "../../support/attachment-files";
 
 const toBuffer = (bytes: Uint8Array | null) => Buffer.from(bytes ?? new Uint8Array());
 
@@ -65,7 +74,11 @@ describe("stripImageMetadata", () => {
   });
 
   it("returns null or bytes, never throws, whatever follows a valid signature", () => {
-    const starts = { "image/jpeg": [0xff, 0xd8], "image/png": [0x89, 0x50, 0x4e, 0x47, 0x0d, 0x0a, 0x1a, 0x0a], "image/webp": [...Buffer.from("RIFF\x10\0\0\0WEBP", "latin1")] } as const;
+    const starts = {
+      "image/jpeg": [0xff, 0xd8],
+      "image/png": [0x89, 0x50, 0x4e, 0x47, 0x0d, 0x0a, 0x1a, 0x0a],
+      "image/webp": [...Buffer.from("RIFF\x10\0\0\0WEBP", "latin1")],
+    } as const;
     fc.assert(
       fc.property(fc.constantFrom(...(Object.keys(starts) as (keyof typeof starts)[])), fc.uint8Array({ maxLength: 300 }), (type, tail) => {
         const out = stripImageMetadata(new Uint8Array([...starts[type], ...tail]), type);

@@ -30,7 +30,10 @@ function cipm2007DensityKgM3(pressurePa: number, temperatureC: number, relativeH
   const f = 1.00062 + 3.14e-8 * pressurePa + 5.6e-7 * temperatureC * temperatureC;
   const xv = (relativeHumidity * f * psv) / pressurePa;
   const t = temperatureC;
-  const Z = 1 - (pressurePa / T) * (1.58123e-6 - 2.9331e-8 * t + 1.1043e-10 * t * t + (5.707e-6 - 2.051e-8 * t) * xv + (1.9898e-4 - 2.376e-6 * t) * xv * xv) +
+  const Z =
+    1 -
+    (pressurePa / T) *
+      (1.58123e-6 - 2.9331e-8 * t + 1.1043e-10 * t * t + (5.707e-6 - 2.051e-8 * t) * xv + (1.9898e-4 - 2.376e-6 * t) * xv * xv) +
     ((pressurePa * pressurePa) / (T * T)) * (1.83e-11 - 0.765e-8 * xv * xv);
   return ((pressurePa * Ma) / (Z * R * T)) * (1 - xv * (1 - Mv / Ma));
 }

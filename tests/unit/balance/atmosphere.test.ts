@@ -1,10 +1,5 @@
 import { describe, expect, it } from "vitest";
-import {
-  geopotentialFromGeometricM,
-  isaAtGeometricM,
-  isaAtGeopotentialM,
-  siteAir,
-} from "@/lib/balance";
+import { geopotentialFromGeometricM, isaAtGeometricM, isaAtGeopotentialM, siteAir } from "@/lib/balance";
 
 // Check values: references.md, "Standard atmosphere — ISO 2533:1975 / ICAO Doc 7488/3
 // (= US Standard Atmosphere 1976 below 32 km)".

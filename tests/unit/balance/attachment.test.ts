@@ -54,17 +54,23 @@ describe("evaluateBalance attachment flags", () => {
 
   it("accepts a mismatch bridged by an adapter and adds the adapter's mass", () => {
     const bare = evaluateBalance(withPayload({}));
-    const adapted = evaluateBalance(withPayload({
-      attachment: "3/8-16 UNC", adapter: { massKg: 0.01, from: "3/8-16 UNC", to: "1/4-20 UNC" },
-    }));
+    const adapted = evaluateBalance(
+      withPayload({
+        attachment: "3/8-16 UNC",
+        adapter: { massKg: 0.01, from: "3/8-16 UNC", to: "1/4-20 UNC" },
+      }),
+    );
     expect(flagLevels(adapted, "thread-mismatch")).toEqual(["ok"]);
     expect(adapted.totalMassKg - bare.totalMassKg).toBeCloseTo(0.01, 12);
   });
 
   it("stops an adapter that does not bridge the payload and the mount", () => {
-    const result = evaluateBalance(withPayload({
-      attachment: "3/8-16 UNC", adapter: { massKg: 0.01, from: "1/4-20 UNC", to: "1/4-20 UNC" },
-    }));
+    const result = evaluateBalance(
+      withPayload({
+        attachment: "3/8-16 UNC",
+        adapter: { massKg: 0.01, from: "1/4-20 UNC", to: "1/4-20 UNC" },
+      }),
+    );
     expect(flagLevels(result, "adapter-mismatch")).toEqual(["stop"]);
   });
 
@@ -74,7 +80,10 @@ describe("evaluateBalance attachment flags", () => {
     const twins = evaluateBalance({ ...setup, payloads: [logger, logger] });
     const fits = twins.flags.filter((f) => f.code === "thread-mismatch");
     expect(fits.map((f) => f.level)).toEqual(["ok"]);
-    expect(fits[0].payloads).toEqual([{ index: 0, name: logger.name }, { index: 1, name: logger.name }]);
+    expect(fits[0].payloads).toEqual([
+      { index: 0, name: logger.name },
+      { index: 1, name: logger.name },
+    ]);
 
     const { adapter: _none, ...bare } = logger;
     const mismatched = evaluateBalance({ ...setup, payloads: [bare, bare, setup.payloads[0]] });

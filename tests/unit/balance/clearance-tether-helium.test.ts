@@ -20,8 +20,7 @@ describe("hullClearanceM", () => {
   const x = 1;
   const belly = -profileRadiusAt(hull, x);
   it("is the vertical gap under the belly for a small box", () => {
-    expect(hullClearanceM(hull, { x, z: belly - 0.1 }, { lengthM: 0, widthM: 0.05, heightM: 0.1 }))
-      .toBeCloseTo(0.05, 9);
+    expect(hullClearanceM(hull, { x, z: belly - 0.1 }, { lengthM: 0, widthM: 0.05, heightM: 0.1 })).toBeCloseTo(0.05, 9);
   });
 
   it("is negative when the box reaches into the hull", () => {
@@ -66,7 +65,10 @@ describe("evaluateBalance tether clearance, with the line on its upwind side", (
     const aheadM = setup.envelope.tetherPoint.x - (setup.mount.positionX + setup.payloads[0].offset.x);
     const mirrored: BalanceInput = {
       ...setup,
-      payloads: [{ ...setup.payloads[0], offset: { ...setup.payloads[0].offset, x: setup.payloads[0].offset.x + 2 * aheadM } }, setup.payloads[1]],
+      payloads: [
+        { ...setup.payloads[0], offset: { ...setup.payloads[0].offset, x: setup.payloads[0].offset.x + 2 * aheadM } },
+        setup.payloads[1],
+      ],
     };
     const whip = evaluateBalance(mirrored).flags.find((f) => f.code === "clearance-tether" && f.payloads?.[0].index === 0);
     expect(whip?.level).toBe("ok");
@@ -80,17 +82,31 @@ describe("evaluateBalance tether clearance, with the line on its upwind side", (
     // Calm air, nose up: the line hangs straight down in the world, i.e. θ aft of the body's −z.
     // A small logger placed on that line (its own mass moves the trim a little: place it twice).
     const onLine = (thetaRad: number): BalanceInput => ({
-      ...setup, site: { windMS: 0 },
+      ...setup,
+      site: { windMS: 0 },
       // The envelope's own mass well aft of its buoyancy: it floats nose up.
       envelope: { ...setup.envelope, massCentre: { x: 1.3, z: -0.04 } },
-      payloads: [{ ...setup.payloads[1], offset: { x: t.x + depthM * Math.tan(thetaRad) - setup.mount.positionX, z: t.z - depthM - setup.envelope.rail.z } }],
+      payloads: [
+        {
+          ...setup.payloads[1],
+          offset: { x: t.x + depthM * Math.tan(thetaRad) - setup.mount.positionX, z: t.z - depthM - setup.envelope.rail.z },
+        },
+      ],
     });
     let input = onLine(0);
     for (let i = 0; i < 8; i++) input = onLine((evaluateBalance(input).calmTrimDeg! * Math.PI) / 180);
     expect(evaluateBalance(input).calmTrimDeg).toBeGreaterThan(2);
     expect(flagLevels(evaluateBalance(input), "clearance-tether")).toEqual(["stop"]);
     // The same logger as far forward of the tether point is clear.
-    const ahead: BalanceInput = { ...input, payloads: [{ ...input.payloads[0], offset: { ...input.payloads[0].offset, x: input.payloads[0].offset.x - 2 * depthM * Math.tan(0.05) - 0.1 } }] };
+    const ahead: BalanceInput = {
+      ...input,
+      payloads: [
+        {
+          ...input.payloads[0],
+          offset: { ...input.payloads[0].offset, x: input.payloads[0].offset.x - 2 * depthM * Math.tan(0.05) - 0.1 },
+        },
+      ],
+    };
     expect(flagLevels(evaluateBalance(ahead), "clearance-tether")).toEqual(["ok"]);
   });
 });
@@ -136,7 +152,10 @@ describe("helium budget", () => {
     const given = evaluateBalance({ ...setup, gas: { ...setup.gas, lossPerDayFraction: 0.02 } }).helium;
     expect(given).toMatchObject({ lossPerDayFraction: 0.02, lossSource: "given" });
     const { hull: _omit, ...noHull } = setup.envelope;
-    expect(evaluateBalance({ ...setup, envelope: noHull }).helium).toMatchObject({ lossPerDayFraction: DEFAULT_LOSS_PER_DAY_FRACTION, lossSource: "default" });
+    expect(evaluateBalance({ ...setup, envelope: noHull }).helium).toMatchObject({
+      lossPerDayFraction: DEFAULT_LOSS_PER_DAY_FRACTION,
+      lossSource: "default",
+    });
     expect(evaluateBalance({ ...setup, envelope: { ...noHull, surfaceAreaM2: 5 } }).helium.lossSource).toBe("fabric");
   });
 

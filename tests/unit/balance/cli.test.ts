@@ -12,8 +12,19 @@ const FIXTURE_PATH = "tests/fixtures/demo-setup.json";
 const fixtureText = readFileSync(`${root}${FIXTURE_PATH}`, "utf8");
 const fixture = (): BalanceInput => JSON.parse(fixtureText) as BalanceInput;
 const CONTRACT_FIELDS = [
-  "airDensityKgM3", "gasDensityKgM3", "grossLiftKg", "totalMassKg", "freeLiftKg", "freeLiftRatio",
-  "centreOfMass", "calmTrimDeg", "wind", "gust", "maxTetherOutM", "helium", "flags",
+  "airDensityKgM3",
+  "gasDensityKgM3",
+  "grossLiftKg",
+  "totalMassKg",
+  "freeLiftKg",
+  "freeLiftRatio",
+  "centreOfMass",
+  "calmTrimDeg",
+  "wind",
+  "gust",
+  "maxTetherOutM",
+  "helium",
+  "flags",
 ];
 
 /** What the CLI prints: the engine's result as JSON would carry it. */

@@ -92,16 +92,18 @@ describe("grossLiftKg", () => {
   });
 
   it("is linear in gas volume and in fill fraction", () => {
-    fc.assert(fc.property(
-      fc.double({ min: 0.01, max: 100, noNaN: true }),
-      fc.double({ min: 0.01, max: 100, noNaN: true }),
-      fc.double({ min: 0.05, max: 1, noNaN: true }),
-      (volume, factor, fill) => {
-        const one = grossLiftKg(volume, fill, seaLevel.densityKgM3, pureHe);
-        const scaled = grossLiftKg(volume * factor, fill, seaLevel.densityKgM3, pureHe);
-        expect(scaled).toBeCloseTo(one * factor, 9);
-      },
-    ));
+    fc.assert(
+      fc.property(
+        fc.double({ min: 0.01, max: 100, noNaN: true }),
+        fc.double({ min: 0.01, max: 100, noNaN: true }),
+        fc.double({ min: 0.05, max: 1, noNaN: true }),
+        (volume, factor, fill) => {
+          const one = grossLiftKg(volume, fill, seaLevel.densityKgM3, pureHe);
+          const scaled = grossLiftKg(volume * factor, fill, seaLevel.densityKgM3, pureHe);
+          expect(scaled).toBeCloseTo(one * factor, 9);
+        },
+      ),
+    );
   });
 
   it("lifts about 1 g per litre (Aber, Marzolff & Ries, Small-Format Aerial Photography, 2010)", () => {

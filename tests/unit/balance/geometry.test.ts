@@ -37,18 +37,28 @@ const capH = 0.5;
 const SOLIDS: Solid[] = [
   {
     // CRC: hemisphere 2/3·π·r³, centroid 3r/8 from the flat face (flat face at x = 0)
-    name: "hemisphere", radiusAt: (x) => Math.sqrt(Math.max(0, r * r - x * x)), x0: 0, x1: r,
-    volume: (2 / 3) * Math.PI * r ** 3, centroidX: (3 * r) / 8,
+    name: "hemisphere",
+    radiusAt: (x) => Math.sqrt(Math.max(0, r * r - x * x)),
+    x0: 0,
+    x1: r,
+    volume: (2 / 3) * Math.PI * r ** 3,
+    centroidX: (3 * r) / 8,
   },
   {
     // CRC: cone π·r²·h/3, centroid h/4 above the base (base at x = 0)
-    name: "cone", radiusAt: (x) => r * (1 - x / h), x0: 0, x1: h,
-    volume: (Math.PI * r * r * h) / 3, centroidX: h / 4,
+    name: "cone",
+    radiusAt: (x) => r * (1 - x / h),
+    x0: 0,
+    x1: h,
+    volume: (Math.PI * r * r * h) / 3,
+    centroidX: h / 4,
   },
   {
     // CRC: spherical cap π·h²·(3R − h)/3, centroid 3(2R − h)²/(4(3R − h)) above the sphere's centre
-    name: "spherical cap (R = 1, h = 0.5)", radiusAt: (x) => Math.sqrt(Math.max(0, R * R - x * x)),
-    x0: R - capH, x1: R,
+    name: "spherical cap (R = 1, h = 0.5)",
+    radiusAt: (x) => Math.sqrt(Math.max(0, R * R - x * x)),
+    x0: R - capH,
+    x1: R,
     volume: (Math.PI * capH ** 2 * (3 * R - capH)) / 3,
     centroidX: (3 * (2 * R - capH) ** 2) / (4 * (3 * R - capH)),
   },
@@ -88,8 +98,10 @@ describe("integrateRevolution and meshVolumeAndCentroid against CRC solids", () 
     const mesh = buildRevolutionMesh(SOLIDS[1].radiusAt, 0, h, { segments: 32, rings: 16 });
     const reversed = Uint32Array.from(mesh.indices);
     for (let t = 0; t < reversed.length; t += 3) [reversed[t + 1], reversed[t + 2]] = [reversed[t + 2], reversed[t + 1]];
-    expect(meshVolumeAndCentroid(mesh.positions, reversed).volumeM3)
-      .toBeCloseTo(-meshVolumeAndCentroid(mesh.positions, mesh.indices).volumeM3, 9);
+    expect(meshVolumeAndCentroid(mesh.positions, reversed).volumeM3).toBeCloseTo(
+      -meshVolumeAndCentroid(mesh.positions, mesh.indices).volumeM3,
+      9,
+    );
   });
 });
 
@@ -112,21 +124,30 @@ describe("integrateHullProfile against buildHullMesh", () => {
   it("agrees within 0.5 % for any valid hull", () => {
     const num = (min: number, max: number) => fc.double({ min, max, noNaN: true });
     const hullArb = fc.record({
-      lengthM: num(0.1, 50), maxDiameterM: num(0.02, 20), maxDiameterAtFraction: num(0.15, 0.85),
-      noseShape: num(0.3, 0.7), tailShape: num(0.5, 2),
+      lengthM: num(0.1, 50),
+      maxDiameterM: num(0.02, 20),
+      maxDiameterAtFraction: num(0.15, 0.85),
+      noseShape: num(0.3, 0.7),
+      tailShape: num(0.5, 2),
       fins: fc.record({
-        count: fc.integer({ min: 0, max: 8 }), rootChordM: num(0, 5), tipChordM: num(0, 0), spanM: num(0, 5),
+        count: fc.integer({ min: 0, max: 8 }),
+        rootChordM: num(0, 5),
+        tipChordM: num(0, 0),
+        spanM: num(0, 5),
         trailingEdgeFraction: num(0.3, 1),
       }),
     });
-    fc.assert(fc.property(hullArb, (params) => {
-      expect(hullParamsSchema.safeParse(params).success).toBe(true);
-      const profile = integrateHullProfile(params);
-      const hull = buildHullMesh(params, { segments: 64, rings: 200 });
-      expect(relative(meshVolumeAndCentroid(hull.positions, hull.indices).volumeM3, profile.gasVolumeM3)).toBeLessThan(0.005);
-      const all = mergeMeshes([hull, buildFinMesh(params)]);
-      expect(relative(meshSurfaceArea(all.positions, all.indices).areaM2, profile.surfaceAreaM2)).toBeLessThan(0.005);
-    }), { numRuns: 50 });
+    fc.assert(
+      fc.property(hullArb, (params) => {
+        expect(hullParamsSchema.safeParse(params).success).toBe(true);
+        const profile = integrateHullProfile(params);
+        const hull = buildHullMesh(params, { segments: 64, rings: 200 });
+        expect(relative(meshVolumeAndCentroid(hull.positions, hull.indices).volumeM3, profile.gasVolumeM3)).toBeLessThan(0.005);
+        const all = mergeMeshes([hull, buildFinMesh(params)]);
+        expect(relative(meshSurfaceArea(all.positions, all.indices).areaM2, profile.surfaceAreaM2)).toBeLessThan(0.005);
+      }),
+      { numRuns: 50 },
+    );
   });
 
   it("puts fins' fabric above the axis when there is one fin, on top", () => {

@@ -40,7 +40,12 @@ describe("operatingEnvelope", () => {
   });
 
   it("returns at each point the evaluation's own height, blowdown and worst flag", () => {
-    for (const [i, j] of [[0, 0], [4, 6], [15, 19], [9, 12]]) {
+    for (const [i, j] of [
+      [0, 0],
+      [4, 6],
+      [15, 19],
+      [9, 12],
+    ]) {
       const point = envelope.points[i][j];
       const result = evaluateBalance({
         ...setup,
@@ -59,7 +64,8 @@ describe("operatingEnvelope", () => {
   it("returns the wind up to which every flag stays ok at the setup's line out, with a flag past it", () => {
     const highest = envelope.highestAllOkWindMS;
     expect(highest).not.toBeNull();
-    const at = (windMS: number) => worstLevel(evaluateBalance({ ...setup, site: { ...setup.site, windMS, gustMS: (7 / 4) * windMS } }).flags);
+    const at = (windMS: number) =>
+      worstLevel(evaluateBalance({ ...setup, site: { ...setup.site, windMS, gustMS: (7 / 4) * windMS } }).flags);
     expect(at(highest!)).toBe("ok");
     expect(at(highest! + 0.01)).not.toBe("ok");
     expect(envelope.highestWithoutStopWindMS!).toBeGreaterThanOrEqual(highest!);
@@ -69,7 +75,8 @@ describe("operatingEnvelope", () => {
     const target = envelope.target!;
     expect(target.windMS).toBe(setup.site!.windMS);
     expect(target.lineOutM).not.toBeNull();
-    const reached = evaluateBalance({ ...setup, tether: { ...setup.tether!, lengthOutM: target.lineOutM! } }).wind!.line!.heightAboveGroundM;
+    const reached = evaluateBalance({ ...setup, tether: { ...setup.tether!, lengthOutM: target.lineOutM! } }).wind!.line!
+      .heightAboveGroundM;
     expect(reached).toBeCloseTo(30, 2);
     expect(target.lineOutM!).toBeGreaterThan(30); // the line leans and sags: more line than height
     // Out of reach: no line it can lift puts it that high.

@@ -1,11 +1,5 @@
 import { describe, expect, it } from "vitest";
-import {
-  PART_101_DIAMETER_M,
-  PART_101_GAS_VOLUME_M3,
-  THREADS,
-  cubicMetresToCubicFeet,
-  evaluateBalance,
-} from "@/lib/balance";
+import { PART_101_DIAMETER_M, PART_101_GAS_VOLUME_M3, THREADS, cubicMetresToCubicFeet, evaluateBalance } from "@/lib/balance";
 import { demoSetup, flagLevels } from "./setups";
 
 describe("moored-balloon rule flags", () => {

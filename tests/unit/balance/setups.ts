@@ -22,9 +22,7 @@ export function symmetricSetup(x = 1): BalanceInput {
       rail: { startX: x - 0.3, endX: x + 0.3, z: -0.5 },
     },
     mount: { positionX: x, massKg: 0.04, thread: "1/4-20 UNC", ratedLoadKg: 2 },
-    payloads: [
-      { name: "logger", massKg: 0.2, offset: { x: 0, z: -0.06 }, attachment: "1/4-20 UNC" },
-    ],
+    payloads: [{ name: "logger", massKg: 0.2, offset: { x: 0, z: -0.06 }, attachment: "1/4-20 UNC" }],
   };
 }
 

@@ -9,26 +9,28 @@ const calmTrimAt = (input: BalanceInput, positionX: number): number | null =>
 
 describe("solveLevelTrimPositionX", () => {
   it("returns a position whose calm trim is level within 1e-6° for any demo-like loading", () => {
-    fc.assert(fc.property(
-      fc.double({ min: 0.65, max: 1.25, noNaN: true }),
-      fc.double({ min: 0.02, max: 0.25, noNaN: true }),
-      fc.double({ min: -0.1, max: 0.1, noNaN: true }),
-      (positionX, whipKg, whipOffsetX) => {
-        const setup = demoSetup();
-        const input: BalanceInput = {
-          ...setup,
-          mount: { ...setup.mount, positionX },
-          payloads: [{ ...setup.payloads[0], massKg: whipKg, offset: { x: whipOffsetX, z: -0.3 } }, setup.payloads[1]],
-        };
-        const solution = solveLevelTrimPositionX(input);
-        expect(solution.reason).toBeNull();
-        if (solution.positionX === null) return; // unreachable after the line above; narrows the type
-        expect(Math.abs(solution.trimDeg)).toBeLessThan(1e-6);
-        const trim = calmTrimAt(input, solution.positionX);
-        expect(trim).not.toBeNull();
-        expect(Math.abs(trim!)).toBeLessThan(1e-6);
-      },
-    ));
+    fc.assert(
+      fc.property(
+        fc.double({ min: 0.65, max: 1.25, noNaN: true }),
+        fc.double({ min: 0.02, max: 0.25, noNaN: true }),
+        fc.double({ min: -0.1, max: 0.1, noNaN: true }),
+        (positionX, whipKg, whipOffsetX) => {
+          const setup = demoSetup();
+          const input: BalanceInput = {
+            ...setup,
+            mount: { ...setup.mount, positionX },
+            payloads: [{ ...setup.payloads[0], massKg: whipKg, offset: { x: whipOffsetX, z: -0.3 } }, setup.payloads[1]],
+          };
+          const solution = solveLevelTrimPositionX(input);
+          expect(solution.reason).toBeNull();
+          if (solution.positionX === null) return; // unreachable after the line above; narrows the type
+          expect(Math.abs(solution.trimDeg)).toBeLessThan(1e-6);
+          const trim = calmTrimAt(input, solution.positionX);
+          expect(trim).not.toBeNull();
+          expect(Math.abs(trim!)).toBeLessThan(1e-6);
+        },
+      ),
+    );
   });
 
   it("returns the target trim on the rail for 5° and off the rail for 80°, and says which", () => {
@@ -71,7 +73,10 @@ describe("solveMaxPayloadMassKg", () => {
   it("returns the largest extra mass with no stop flag: 1 g more brings one", () => {
     // The demo's whip touches the tether at 4 m/s; hung under the mount it is clear.
     const demo = demoSetup();
-    const setup: BalanceInput = { ...demo, payloads: [{ ...demo.payloads[0], offset: { ...demo.payloads[0].offset, x: 0 } }, demo.payloads[1]] };
+    const setup: BalanceInput = {
+      ...demo,
+      payloads: [{ ...demo.payloads[0], offset: { ...demo.payloads[0].offset, x: 0 } }, demo.payloads[1]],
+    };
     const solution = solveMaxPayloadMassKg(setup);
     expect(solution.extraMassKg).not.toBeNull();
     const extra = solution.extraMassKg!;

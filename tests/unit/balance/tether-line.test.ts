@@ -23,7 +23,12 @@ const W = 0.0025 * g;
 const still: WindProfile = { referenceMS: 0, referenceHeightM: 10, exponent: 0 };
 const uniform = (windMS: number): WindProfile => ({ referenceMS: windMS, referenceHeightM: 10, exponent: 0 });
 const line = (over: Partial<LineSpec> = {}): LineSpec => ({
-  lengthM: 100, weightPerMetreN: W, normalDragAreaPerMetreM: 0, skinFrictionAreaPerMetreM: 0, airDensityKgM3: 1.225, ...over,
+  lengthM: 100,
+  weightPerMetreN: W,
+  normalDragAreaPerMetreM: 0,
+  skinFrictionAreaPerMetreM: 0,
+  airDensityKgM3: 1.225,
+  ...over,
 });
 /** 2 mm line, C_n = 1.2 (Hoerner), C_f = 0.01 (common practice). */
 const DRAG_2MM = { normalDragAreaPerMetreM: 0.002 * 1.2, skinFrictionAreaPerMetreM: Math.PI * 0.002 * 0.01 };
@@ -52,7 +57,12 @@ function catenary(horizontalN: number, topVerticalN: number, lengthM: number, w:
  *   height = (T/k)·(asinh(c_a) − asinh(c_t)),  blowdown = (T/k)·(√(1 + c_a²) − √(1 + c_t²)),
  * c = cot φ at the top (t) and the anchor (a = t + k·L/T).
  */
-function dragOnlyLine(downwindN: number, upN: number, lengthM: number, k: number): { heightM: number; blowdownM: number; anchorAngleDeg: number } {
+function dragOnlyLine(
+  downwindN: number,
+  upN: number,
+  lengthM: number,
+  k: number,
+): { heightM: number; blowdownM: number; anchorAngleDeg: number } {
   const tensionN = Math.hypot(downwindN, upN);
   const top = downwindN / upN;
   const anchor = top + (k * lengthM) / tensionN;
@@ -72,21 +82,25 @@ describe("integrateLine", () => {
     [3, 6],
     [1.5, 4],
     [6, 3],
-  ])("returns the elastic-free catenary (Irvine, Cable Structures) to 1e-6 when the line has weight and no drag (H = %d N, V = %d N)", (h, v) => {
-    const shape = integrateLine(line(), { downwindN: h, upN: v }, still, 80);
-    const exact = catenary(h, v, 100, W);
-    expect(relative(shape.heightAboveGroundM, exact.heightM)).toBeLessThan(1e-6);
-    expect(relative(shape.blowdownM, exact.blowdownM)).toBeLessThan(1e-6);
-    // The ends: horizontal tension is the same all along; the vertical loses the line's weight.
-    expect(shape.anchorDownwindN).toBeCloseTo(h, 9);
-    expect(shape.anchorUpN).toBeCloseTo(v - W * 100, 9);
-    expect(shape.anchorAngleDeg).toBeCloseTo((Math.atan2(h, v - W * 100) * 180) / Math.PI, 9);
-    expect(shape.lengthOnGroundM).toBe(0);
-  });
+  ])(
+    "returns the elastic-free catenary (Irvine, Cable Structures) to 1e-6 when the line has weight and no drag (H = %d N, V = %d N)",
+    (h, v) => {
+      const shape = integrateLine(line(), { downwindN: h, upN: v }, still, 80);
+      const exact = catenary(h, v, 100, W);
+      expect(relative(shape.heightAboveGroundM, exact.heightM)).toBeLessThan(1e-6);
+      expect(relative(shape.blowdownM, exact.blowdownM)).toBeLessThan(1e-6);
+      // The ends: horizontal tension is the same all along; the vertical loses the line's weight.
+      expect(shape.anchorDownwindN).toBeCloseTo(h, 9);
+      expect(shape.anchorUpN).toBeCloseTo(v - W * 100, 9);
+      expect(shape.anchorAngleDeg).toBeCloseTo((Math.atan2(h, v - W * 100) * 180) / Math.PI, 9);
+      expect(shape.lengthOnGroundM).toBe(0);
+    },
+  );
 
   it("returns the catenary down to the touchdown and the rest laid on the ground when the line is heavier than the lift", () => {
     // 2 N up holds 81.6 m of a 2.5 g/m line; the rest lies on the ground, pulled straight downwind.
-    const h = 1, v = 2;
+    const h = 1,
+      v = 2;
     const shape = integrateLine(line(), { downwindN: h, upN: v }, still, 50);
     const hungM = v / W;
     const exact = catenary(h, v, hungM, W);
@@ -149,21 +163,33 @@ describe("integrateLine", () => {
     const topHeightM = 70;
     const shape = integrateLine(spec, pull, profile, topHeightM);
     const loadAt = (h: number, v: number, z: number): [number, number] => {
-      const t = Math.hypot(h, v), c = h / t, n = v / t;
+      const t = Math.hypot(h, v),
+        c = h / t,
+        n = v / t;
       const windMS = windAtHeightMS(profile, topHeightM + z);
       const q = 0.5 * spec.airDensityKgM3 * windMS * windMS;
       const normal = q * spec.normalDragAreaPerMetreM * Math.abs(n);
       const along = q * spec.skinFrictionAreaPerMetreM * Math.abs(c);
       return [normal * n * n + along * c * c, -spec.weightPerMetreN - normal * n * c + along * c * n];
     };
-    let h = pull.downwindN, v = pull.upN, z = 0, sumX = 0, sumZ = 0;
-    const steps = 20_000, ds = spec.lengthM / steps;
+    let h = pull.downwindN,
+      v = pull.upN,
+      z = 0,
+      sumX = 0,
+      sumZ = 0;
+    const steps = 20_000,
+      ds = spec.lengthM / steps;
     for (let i = 0; i < steps; i++) {
       const [fx, fz] = loadAt(h, v, z);
-      const hm = h + 0.5 * ds * fx, vm = v + 0.5 * ds * fz, zm = z - 0.5 * ds * (v / Math.hypot(h, v));
+      const hm = h + 0.5 * ds * fx,
+        vm = v + 0.5 * ds * fz,
+        zm = z - 0.5 * ds * (v / Math.hypot(h, v));
       const [mx, mz] = loadAt(hm, vm, zm);
-      sumX += mx * ds; sumZ += mz * ds;
-      h += mx * ds; v += mz * ds; z -= ds * (vm / Math.hypot(hm, vm));
+      sumX += mx * ds;
+      sumZ += mz * ds;
+      h += mx * ds;
+      v += mz * ds;
+      z -= ds * (vm / Math.hypot(hm, vm));
     }
     expect(shape.anchorDownwindN).toBeCloseTo(pull.downwindN + sumX, 5);
     expect(shape.anchorUpN).toBeCloseTo(pull.upN + sumZ, 5);
@@ -178,7 +204,13 @@ describe("evaluateBalance with a tether line", () => {
     const result = evaluateBalance(demoSetup());
     for (const c of [result.wind, result.gust]) {
       expect(c?.line).toBeDefined();
-      expect(Object.keys(c!.line!).sort()).toEqual(["anchorAngleDeg", "anchorTensionN", "blowdownM", "heightAboveGroundM", "lengthOnGroundM"]);
+      expect(Object.keys(c!.line!).sort()).toEqual([
+        "anchorAngleDeg",
+        "anchorTensionN",
+        "blowdownM",
+        "heightAboveGroundM",
+        "lengthOnGroundM",
+      ]);
       // The lifter's figures stay those at the lifter; the heavy line meets the ground flatter.
       expect(c!.line!.anchorAngleDeg).toBeGreaterThan(c!.tetherAngleDeg);
       expect(c!.line!.heightAboveGroundM).toBeLessThan(demoSetup().tether!.lengthOutM);
@@ -238,7 +270,11 @@ describe("evaluateBalance with a tether line", () => {
 
   it("returns a tether-on-ground caution and a 90° anchor angle when a heavy line lies partly on the ground", () => {
     const setup = demoSetup();
-    const heavy: BalanceInput = { ...setup, tether: { ...setup.tether!, massPerMetreKg: 0.02, lengthOutM: 60 }, site: { ...setup.site, windMS: 3 } };
+    const heavy: BalanceInput = {
+      ...setup,
+      tether: { ...setup.tether!, massPerMetreKg: 0.02, lengthOutM: 60 },
+      site: { ...setup.site, windMS: 3 },
+    };
     const result = evaluateBalance(heavy);
     expect(result.wind!.line!.lengthOnGroundM).toBeGreaterThan(0);
     expect(result.wind!.line!.anchorAngleDeg).toBe(90);
@@ -274,23 +310,31 @@ const demoAt = (windMS: number, lineOutM: number): BalanceInput => {
 
 describe("the line's shape over winds and lengths (fast-check)", () => {
   it("returns a calm height never above the line out, and never lower for more line out", () => {
-    fc.assert(fc.property(fc.double({ min: 0, max: 300, noNaN: true }), fc.double({ min: 0, max: 300, noNaN: true }), (a, b) => {
-      const [short, long] = a <= b ? [a, b] : [b, a];
-      const heightOf = (lineOutM: number) => evaluateBalance(demoAt(0, lineOutM)).wind!.line!.heightAboveGroundM;
-      expect(heightOf(long)).toBeLessThanOrEqual(long + 1e-9);
-      expect(heightOf(long)).toBeGreaterThanOrEqual(heightOf(short) - 1e-9);
-    }), { numRuns: 200 });
+    fc.assert(
+      fc.property(fc.double({ min: 0, max: 300, noNaN: true }), fc.double({ min: 0, max: 300, noNaN: true }), (a, b) => {
+        const [short, long] = a <= b ? [a, b] : [b, a];
+        const heightOf = (lineOutM: number) => evaluateBalance(demoAt(0, lineOutM)).wind!.line!.heightAboveGroundM;
+        expect(heightOf(long)).toBeLessThanOrEqual(long + 1e-9);
+        expect(heightOf(long)).toBeGreaterThanOrEqual(heightOf(short) - 1e-9);
+      }),
+      { numRuns: 200 },
+    );
   });
 
   it("returns a blowdown that more wind never lowers", () => {
-    fc.assert(fc.property(
-      fc.double({ min: 10, max: 110, noNaN: true }),
-      fc.array(fc.double({ min: 0, max: 15, noNaN: true }), { minLength: 2, maxLength: 5 }),
-      (lineOutM, winds) => {
-        const blowdowns = [...winds].sort((x, y) => x - y).map((w) => evaluateBalance(demoAt(w, lineOutM)).wind?.line?.blowdownM ?? Infinity);
-        // The height and the wind are solved together to 1e-6 of the line out: monotone to that.
-        for (let i = 1; i < blowdowns.length; i++) expect(blowdowns[i]).toBeGreaterThanOrEqual(blowdowns[i - 1] - 1e-5 * lineOutM);
-      },
-    ), { numRuns: 150 });
+    fc.assert(
+      fc.property(
+        fc.double({ min: 10, max: 110, noNaN: true }),
+        fc.array(fc.double({ min: 0, max: 15, noNaN: true }), { minLength: 2, maxLength: 5 }),
+        (lineOutM, winds) => {
+          const blowdowns = [...winds]
+            .sort((x, y) => x - y)
+            .map((w) => evaluateBalance(demoAt(w, lineOutM)).wind?.line?.blowdownM ?? Infinity);
+          // The height and the wind are solved together to 1e-6 of the line out: monotone to that.
+          for (let i = 1; i < blowdowns.length; i++) expect(blowdowns[i]).toBeGreaterThanOrEqual(blowdowns[i - 1] - 1e-5 * lineOutM);
+        },
+      ),
+      { numRuns: 150 },
+    );
   });
 });

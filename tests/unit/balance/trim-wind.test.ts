@@ -1,19 +1,13 @@
 import fc from "fast-check";
 import { describe, expect, it } from "vitest";
-import {
-  calmTrim,
-  dynamicPressurePa,
-  evaluateBalance,
-  isaAtGeometricM,
-  pitchStatics,
-  type BalanceInput,
-} from "@/lib/balance";
+import { calmTrim, dynamicPressurePa, evaluateBalance, isaAtGeometricM, pitchStatics, type BalanceInput } from "@/lib/balance";
 import { demoSetup, flagLevels, symmetricSetup } from "./setups";
 
 describe("calmTrim", () => {
   it("solves tanθ = (B·b_x − W·g_x)/(W·g_z − B·b_z) (design.md item 5)", () => {
     const statics = pitchStatics(1.2, 1.0, { x: 1, z: 0 }, { x: 1.1, z: -0.3 }, { x: 1, z: -0.9 });
-    const B = 1.2 * 9.80665, W = 1.0 * 9.80665;
+    const B = 1.2 * 9.80665,
+      W = 1.0 * 9.80665;
     const expected = Math.atan((B * 0 - W * 0.1) / (W * 0.6 - B * 0.9)) * (180 / Math.PI);
     const trim = calmTrim(statics, 0.2);
     expect(trim.trimDeg).toBeCloseTo(expected, 12);
@@ -40,22 +34,24 @@ describe("calmTrim", () => {
   });
 
   it("trims level for any symmetric setup", () => {
-    fc.assert(fc.property(
-      fc.double({ min: 0.3, max: 3, noNaN: true }),
-      fc.double({ min: 0, max: 0.6, noNaN: true }),
-      fc.double({ min: 0, max: 0.3, noNaN: true }),
-      fc.double({ min: -0.4, max: 0, noNaN: true }),
-      (x, envelopeKg, payloadKg, payloadZ) => {
-        const setup = symmetricSetup(x);
-        const result = evaluateBalance({
-          ...setup,
-          envelope: { ...setup.envelope, massKg: envelopeKg },
-          payloads: [{ ...setup.payloads[0], massKg: payloadKg, offset: { x: 0, z: payloadZ } }],
-        });
-        expect(result.calmTrimDeg).not.toBeNull();
-        expect(Math.abs(result.calmTrimDeg ?? 1)).toBeLessThan(1e-9);
-      },
-    ));
+    fc.assert(
+      fc.property(
+        fc.double({ min: 0.3, max: 3, noNaN: true }),
+        fc.double({ min: 0, max: 0.6, noNaN: true }),
+        fc.double({ min: 0, max: 0.3, noNaN: true }),
+        fc.double({ min: -0.4, max: 0, noNaN: true }),
+        (x, envelopeKg, payloadKg, payloadZ) => {
+          const setup = symmetricSetup(x);
+          const result = evaluateBalance({
+            ...setup,
+            envelope: { ...setup.envelope, massKg: envelopeKg },
+            payloads: [{ ...setup.payloads[0], massKg: payloadKg, offset: { x: 0, z: payloadZ } }],
+          });
+          expect(result.calmTrimDeg).not.toBeNull();
+          expect(Math.abs(result.calmTrimDeg ?? 1)).toBeLessThan(1e-9);
+        },
+      ),
+    );
   });
 
   it("noses down when the mount slides forward", () => {
@@ -79,31 +75,38 @@ describe("dynamicPressurePa", () => {
 });
 
 /** Demo-like setups: the mount anywhere on the rail, different payload masses and sails. */
-const flyingSetup = fc.record({
-  positionX: fc.double({ min: 0.65, max: 1.25, noNaN: true }),
-  whipKg: fc.double({ min: 0.02, max: 0.2, noNaN: true }),
-  loggerKg: fc.double({ min: 0.02, max: 0.2, noNaN: true }),
-  sailAreaM2: fc.double({ min: 0.5, max: 2.5, noNaN: true }),
-  pressureCentreX: fc.double({ min: 1.0, max: 1.3, noNaN: true }),
-}).map(({ positionX, whipKg, loggerKg, sailAreaM2, pressureCentreX }): BalanceInput => {
-  const setup = demoSetup();
-  const aero = setup.envelope.aero!;
-  return {
-    ...setup,
-    envelope: { ...setup.envelope, aero: { ...aero, sailAreaM2, pressureCentre: { x: pressureCentreX, z: 0 } } },
-    mount: { ...setup.mount, positionX },
-    payloads: [{ ...setup.payloads[0], massKg: whipKg }, { ...setup.payloads[1], massKg: loggerKg }],
-  };
-});
+const flyingSetup = fc
+  .record({
+    positionX: fc.double({ min: 0.65, max: 1.25, noNaN: true }),
+    whipKg: fc.double({ min: 0.02, max: 0.2, noNaN: true }),
+    loggerKg: fc.double({ min: 0.02, max: 0.2, noNaN: true }),
+    sailAreaM2: fc.double({ min: 0.5, max: 2.5, noNaN: true }),
+    pressureCentreX: fc.double({ min: 1.0, max: 1.3, noNaN: true }),
+  })
+  .map(({ positionX, whipKg, loggerKg, sailAreaM2, pressureCentreX }): BalanceInput => {
+    const setup = demoSetup();
+    const aero = setup.envelope.aero!;
+    return {
+      ...setup,
+      envelope: { ...setup.envelope, aero: { ...aero, sailAreaM2, pressureCentre: { x: pressureCentreX, z: 0 } } },
+      mount: { ...setup.mount, positionX },
+      payloads: [
+        { ...setup.payloads[0], massKg: whipKg },
+        { ...setup.payloads[1], massKg: loggerKg },
+      ],
+    };
+  });
 
 describe("evaluateBalance in wind", () => {
   it("equals the calm case at zero wind", () => {
-    fc.assert(fc.property(flyingSetup, (setup) => {
-      const result = evaluateBalance({ ...setup, site: { ...setup.site, windMS: 0 } });
-      expect(result.wind?.trimDeg).toBe(result.calmTrimDeg);
-      expect(result.wind?.tetherAngleDeg).toBe(0);
-      expect(result.wind?.tensionN).toBeCloseTo(result.freeLiftKg * 9.80665, 12);
-    }));
+    fc.assert(
+      fc.property(flyingSetup, (setup) => {
+        const result = evaluateBalance({ ...setup, site: { ...setup.site, windMS: 0 } });
+        expect(result.wind?.trimDeg).toBe(result.calmTrimDeg);
+        expect(result.wind?.tetherAngleDeg).toBe(0);
+        expect(result.wind?.tensionN).toBeCloseTo(result.freeLiftKg * 9.80665, 12);
+      }),
+    );
   });
 
   it("approaches the calm trim as the wind dies", () => {
@@ -113,17 +116,17 @@ describe("evaluateBalance in wind", () => {
   });
 
   it("never lowers the tether angle as the wind rises", () => {
-    fc.assert(fc.property(
-      flyingSetup,
-      fc.array(fc.double({ min: 0, max: 15, noNaN: true }), { minLength: 2, maxLength: 6 }),
-      (setup, speeds) => {
-        const angles = [...speeds].sort((a, b) => a - b).map((windMS) =>
-          evaluateBalance({ ...setup, site: { ...setup.site, windMS } }).wind?.tetherAngleDeg ?? 90);
+    fc.assert(
+      fc.property(flyingSetup, fc.array(fc.double({ min: 0, max: 15, noNaN: true }), { minLength: 2, maxLength: 6 }), (setup, speeds) => {
+        const angles = [...speeds]
+          .sort((a, b) => a - b)
+          .map((windMS) => evaluateBalance({ ...setup, site: { ...setup.site, windMS } }).wind?.tetherAngleDeg ?? 90);
         // The trim is solved to 1e-11 rad; the tether angle inherits a few 1e-9° of that, so
         // "never lowers" is checked to 1e-7°.
         for (let i = 1; i < angles.length; i++) expect(angles[i]).toBeGreaterThanOrEqual(angles[i - 1] - 1e-7);
-      },
-    ), { numRuns: 300 });
+      }),
+      { numRuns: 300 },
+    );
   });
 
   it("balances the pitch moment about the tether point at the solved trim", () => {
@@ -172,14 +175,17 @@ describe("evaluateBalance with induced drag", () => {
     const plain = evaluateBalance(setup).wind!;
     const withAr = evaluateBalance({ ...setup, envelope: { ...setup.envelope, aero: { ...aero, aspectRatio: 1.5 } } }).wind!;
     const q = withAr.dynamicPressurePa;
-    const cl = aero.liftSlopePerRad * ((withAr.trimDeg - aero.zeroLiftTrimDeg) * Math.PI) / 180;
+    const cl = (aero.liftSlopePerRad * ((withAr.trimDeg - aero.zeroLiftTrimDeg) * Math.PI)) / 180;
     const payloadAreaM2 = (setup.payloads[0].dragAreaM2 ?? 0) + 1.05 * setup.payloads[1].size!.widthM * setup.payloads[1].size!.heightM;
     const expectedN = q * (aero.sailAreaM2 * (aero.dragCoefficient + (cl * cl) / (Math.PI * 0.7 * 1.5)) + payloadAreaM2);
     expect(withAr.dragN).toBeCloseTo(expectedN, 9);
     expect(withAr.dragN).toBeGreaterThan(plain.dragN);
     expect(withAr.tetherAngleDeg).toBeGreaterThan(plain.tetherAngleDeg);
     // A stated span efficiency replaces the default: e = 1 (elliptic loading) drags least.
-    const elliptic = evaluateBalance({ ...setup, envelope: { ...setup.envelope, aero: { ...aero, aspectRatio: 1.5, spanEfficiency: 1 } } }).wind!;
+    const elliptic = evaluateBalance({
+      ...setup,
+      envelope: { ...setup.envelope, aero: { ...aero, aspectRatio: 1.5, spanEfficiency: 1 } },
+    }).wind!;
     expect(elliptic.dragN).toBeLessThan(withAr.dragN);
   });
 });

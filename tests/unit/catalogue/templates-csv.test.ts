@@ -35,11 +35,19 @@ describe("templatesToCsv → parseTemplatesCsv", () => {
 describe("parseTemplatesCsv", () => {
   it("returns a new row (no id) from a hand-written file with a byte-order mark", () => {
     const parsed = parseTemplatesCsv(`\uFEFF${HEADER}\n${GOOD_ROW}\n`);
-    expect(parsed.ok && parsed.rows).toEqual([expect.objectContaining({ row: 2, id: null, values: expect.objectContaining({ name: "Tiny beacon", massKg: 0.02 }) })]);
+    expect(parsed.ok && parsed.rows).toEqual([
+      expect.objectContaining({ row: 2, id: null, values: expect.objectContaining({ name: "Tiny beacon", massKg: 0.02 }) }),
+    ]);
   });
 
   it("returns every problem with its row, column and what is wrong, and no rows", () => {
-    const text = [HEADER, GOOD_ROW, ",Bad mass,,light,heavy,box,0.1,0.1,0.1,1/4-20 UNC,0,0,-0.1", ",Bad kind,,toaster,0.1,box,0.1,0.1,0.1,1/4-20 UNC,0,0,-0.1", ",Tiny beacon,,light,0.02,cylinder,0.02,0.02,0.04,1/4-20 UNC,0.001,0,-0.05"].join("\n");
+    const text = [
+      HEADER,
+      GOOD_ROW,
+      ",Bad mass,,light,heavy,box,0.1,0.1,0.1,1/4-20 UNC,0,0,-0.1",
+      ",Bad kind,,toaster,0.1,box,0.1,0.1,0.1,1/4-20 UNC,0,0,-0.1",
+      ",Tiny beacon,,light,0.02,cylinder,0.02,0.02,0.04,1/4-20 UNC,0.001,0,-0.05",
+    ].join("\n");
     const parsed = parseTemplatesCsv(text);
     expect(parsed.ok).toBe(false);
     if (parsed.ok) return;
@@ -63,6 +71,9 @@ describe("parseTemplatesCsv", () => {
   });
 
   it("returns a problem for a file with a header and no rows", () => {
-    expect(parseTemplatesCsv(`${HEADER}\n`)).toEqual({ ok: false, problems: [{ row: 2, field: "name", problem: "the file has no template rows" }] });
+    expect(parseTemplatesCsv(`${HEADER}\n`)).toEqual({
+      ok: false,
+      problems: [{ row: 2, field: "name", problem: "the file has no template rows" }],
+    });
   });
 });

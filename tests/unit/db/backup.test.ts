@@ -11,7 +11,11 @@ const dir = mkdtempSync(path.join(os.tmpdir(), "trimrail-backup-"));
 afterAll(() => rmSync(dir, { recursive: true, force: true }));
 
 const run = (script: string, args: string[], databaseUrl: string) =>
-  spawnSync("npx", ["tsx", `scripts/${script}.ts`, ...args], { encoding: "utf8", env: { ...process.env, DATABASE_URL: databaseUrl }, timeout: 60_000 });
+  spawnSync("npx", ["tsx", `scripts/${script}.ts`, ...args], {
+    encoding: "utf8",
+    env: { ...process.env, DATABASE_URL: databaseUrl },
+    timeout: 60_000,
+  });
 
 async function names(url: string): Promise<string[]> {
   const { client } = openDatabase(url);

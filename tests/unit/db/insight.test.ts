@@ -34,31 +34,68 @@ beforeAll(async () => {
   const { db, client } = openDatabase(url);
   await migrateDatabase(db);
   await seedDemo(db);
-  rows = (await client.execute("select s.*, m.rail_start_x_m, m.rail_end_x_m from setups s join envelope_models m on m.id = s.model_id")).rows as unknown as Row[];
-  payloads = (await client.execute("select p.setup_id, p.mass_kg, p.category, p.template_id, t.name as template_name from setup_payloads p left join payload_templates t on t.id = p.template_id")).rows as unknown as typeof payloads;
-  results = new Map((await client.execute("select setup_id, result_json from setup_results")).rows.map((r) => [String(r.setup_id), JSON.parse(String(r.result_json))]));
+  rows = (await client.execute("select s.*, m.rail_start_x_m, m.rail_end_x_m from setups s join envelope_models m on m.id = s.model_id"))
+    .rows as unknown as Row[];
+  payloads = (
+    await client.execute(
+      "select p.setup_id, p.mass_kg, p.category, p.template_id, t.name as template_name from setup_payloads p left join payload_templates t on t.id = p.template_id",
+    )
+  ).rows as unknown as typeof payloads;
+  results = new Map(
+    (await client.execute("select setup_id, result_json from setup_results")).rows.map((r) => [
+      String(r.setup_id),
+      JSON.parse(String(r.result_json)),
+    ]),
+  );
   decisions = (await client.execute("select setup_id, outcome, reasons_json from decisions")).rows as unknown as typeof decisions;
   client.close();
 });
 afterAll(() => rmSync(dir, { recursive: true, force: true }));
 
-const countBy = <T>(items: T[], key: (item: T) => string) => items.reduce<Record<string, number>>((acc, item) => ({ ...acc, [key(item)]: (acc[key(item)] ?? 0) + 1 }), {});
-const asCounts = <T extends { count: number }>(items: T[], key: (item: T) => string) => Object.fromEntries(items.map((i) => [key(i), i.count]));
+const countBy = <T>(items: T[], key: (item: T) => string) =>
+  items.reduce<Record<string, number>>((acc, item) => ({ ...acc, [key(item)]: (acc[key(item)] ?? 0) + 1 }), {});
+const asCounts = <T extends { count: number }>(items: T[], key: (item: T) => string) =>
+  Object.fromEntries(items.map((i) => [key(i), i.count]));
 const bin = (value: number, width: number) => Math.floor(value / width);
 
 function reference(filter: InsightFilter) {
-  const keep = rows.filter((r) => (!filter.modelId || r.model_id === filter.modelId) && (!filter.from || r.created_at >= filter.from.getTime()) && (!filter.to || r.created_at < filter.to.getTime()));
+  const keep = rows.filter(
+    (r) =>
+      (!filter.modelId || r.model_id === filter.modelId) &&
+      (!filter.from || r.created_at >= filter.from.getTime()) &&
+      (!filter.to || r.created_at < filter.to.getTime()),
+  );
   const ids = new Set(keep.map((r) => r.id));
   const items = payloads.filter((p) => ids.has(p.setup_id));
   return {
     payloadMass: countBy(items, (p) => `${bin(p.mass_kg, 0.05)}:${p.category}`),
     setupPayloadMass: countBy(keep, (r) => String(bin(r.payload_mass_kg, 0.1))),
-    templates: countBy(items.filter((p) => p.template_id), (p) => `${p.template_id}:${p.template_name}`),
-    rail: countBy(keep, (r) => `${r.model_id}:${Math.max(0, Math.min(9, Math.floor(((r.mount_position_x_m - r.rail_start_x_m) / (r.rail_end_x_m - r.rail_start_x_m)) * 10)))}`),
-    freeLift: countBy(keep.filter((r) => r.free_lift_ratio !== null), (r) => String(bin(r.free_lift_ratio as number, 0.05))),
-    flags: countBy(keep.flatMap((r) => [...new Set((results.get(r.id)?.flags ?? []).filter((f) => f.level !== "ok").map((f) => `${f.code}:${f.level}`))]), (k) => k),
+    templates: countBy(
+      items.filter((p) => p.template_id),
+      (p) => `${p.template_id}:${p.template_name}`,
+    ),
+    rail: countBy(
+      keep,
+      (r) =>
+        `${r.model_id}:${Math.max(0, Math.min(9, Math.floor(((r.mount_position_x_m - r.rail_start_x_m) / (r.rail_end_x_m - r.rail_start_x_m)) * 10)))}`,
+    ),
+    freeLift: countBy(
+      keep.filter((r) => r.free_lift_ratio !== null),
+      (r) => String(bin(r.free_lift_ratio as number, 0.05)),
+    ),
+    flags: countBy(
+      keep.flatMap((r) => [
+        ...new Set((results.get(r.id)?.flags ?? []).filter((f) => f.level !== "ok").map((f) => `${f.code}:${f.level}`)),
+      ]),
+      (k) => k,
+    ),
     months: countBy(keep, (r) => `${new Date(r.created_at).toISOString().slice(0, 7)}:${r.status}`),
-    reasons: countBy(decisions.filter((d) => ids.has(d.setup_id) && d.outcome === "changes_requested").flatMap((d) => JSON.parse(d.reasons_json) as string[]), (c) => c),
+    reasons: countBy(
+      decisions
+        .filter((d) => ids.has(d.setup_id) && d.outcome === "changes_requested")
+        .flatMap((d) => JSON.parse(d.reasons_json) as string[]),
+      (c) => c,
+    ),
   };
 }
 
@@ -79,7 +116,12 @@ describe("getInsight", () => {
       expect(d.payloadMassHistogram.every((h) => Math.abs(h.binEndKg - h.binStartKg - 0.05) < 1e-12)).toBe(true);
       expect(asCounts(d.setupPayloadMassHistogram, (h) => String(Math.round(h.binStartKg / 0.1)))).toEqual(want.setupPayloadMass);
       expect(asCounts(d.templateUsage, (t) => `${t.templateId}:${t.name}`)).toEqual(want.templates);
-      expect(asCounts(d.railPosition, (r) => { const row = rows.find((x) => x.model_id === r.modelId)!; return `${r.modelId}:${Math.round(((r.binStartM - row.rail_start_x_m) / (row.rail_end_x_m - row.rail_start_x_m)) * 10)}`; })).toEqual(want.rail);
+      expect(
+        asCounts(d.railPosition, (r) => {
+          const row = rows.find((x) => x.model_id === r.modelId)!;
+          return `${r.modelId}:${Math.round(((r.binStartM - row.rail_start_x_m) / (row.rail_end_x_m - row.rail_start_x_m)) * 10)}`;
+        }),
+      ).toEqual(want.rail);
       expect(asCounts(d.freeLiftRatio, (h) => String(Math.round(h.binStart / 0.05)))).toEqual(want.freeLift);
       expect(asCounts(d.flagCounts, (f) => `${f.code}:${f.level}`)).toEqual(want.flags);
       expect(asCounts(d.setupsPerMonth, (m) => `${m.month}:${m.status}`)).toEqual(want.months);

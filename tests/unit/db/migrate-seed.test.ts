@@ -56,7 +56,9 @@ describe("migrateDatabase", () => {
     const { db, client } = openDatabase(`file:${path.join(dir, "check.db")}`);
     await migrateDatabase(db);
     await expect(
-      client.execute("insert into mounts (id, name, thread, mass_kg, rated_load_kg, safety_line_breaking_load_n) values ('m', 'm', 'M6', 0.1, 1, 100)"),
+      client.execute(
+        "insert into mounts (id, name, thread, mass_kg, rated_load_kg, safety_line_breaking_load_n) values ('m', 'm', 'M6', 0.1, 1, 100)",
+      ),
     ).rejects.toThrow(/CHECK constraint failed/);
     client.close();
   });
@@ -86,14 +88,23 @@ describe("seedDemo", () => {
     const statuses = new Set(first.setups.map((s) => (s as { status: string }).status));
     expect([...statuses].sort()).toEqual(["approved", "changes_requested", "draft", "submitted"]);
     // Every setup carries the server's own evaluation, its worst flag, and one flag row per distinct caution or stop.
-    const results = new Map((first.setup_results as Array<{ setup_id: string; result_json: string }>).map((r) => [r.setup_id, JSON.parse(r.result_json) as { grossLiftKg: number; flags: Array<{ code: string; level: string }> }]));
+    const results = new Map(
+      (first.setup_results as Array<{ setup_id: string; result_json: string }>).map((r) => [
+        r.setup_id,
+        JSON.parse(r.result_json) as { grossLiftKg: number; flags: Array<{ code: string; level: string }> },
+      ]),
+    );
     for (const row of first.setups as Array<{ id: string; worst_flag: string }>) {
       const result = results.get(row.id);
       expect(result, row.id).toBeDefined();
       expect(Number.isFinite(result?.grossLiftKg)).toBe(true);
       expect(["ok", "caution", "stop"]).toContain(row.worst_flag);
-      const flagRows = (first.setup_flags as Array<{ setup_id: string; code: string; level: string }>).filter((f) => f.setup_id === row.id).map((f) => `${f.code}:${f.level}`);
-      expect(flagRows.sort()).toEqual([...new Set(result?.flags.filter((f) => f.level !== "ok").map((f) => `${f.code}:${f.level}`))].sort());
+      const flagRows = (first.setup_flags as Array<{ setup_id: string; code: string; level: string }>)
+        .filter((f) => f.setup_id === row.id)
+        .map((f) => `${f.code}:${f.level}`);
+      expect(flagRows.sort()).toEqual(
+        [...new Set(result?.flags.filter((f) => f.level !== "ok").map((f) => `${f.code}:${f.level}`))].sort(),
+      );
     }
     client.close();
   });

@@ -11,11 +11,9 @@ describe("db/migrations", () => {
     try {
       cpSync(MIGRATIONS_FOLDER, out, { recursive: true });
       const before = readdirSync(out).sort();
-      const run = spawnSync(
-        "npx",
-        ["drizzle-kit", "generate", "--dialect", "sqlite", "--schema", "./db/schema.ts", "--out", out],
-        { encoding: "utf8" },
-      );
+      const run = spawnSync("npx", ["drizzle-kit", "generate", "--dialect", "sqlite", "--schema", "./db/schema.ts", "--out", out], {
+        encoding: "utf8",
+      });
       expect(run.status, run.stderr).toBe(0);
       expect(readdirSync(out).sort()).toEqual(before);
     } finally {

@@ -21,7 +21,9 @@ describe("nextStatus", () => {
     for (const from of SETUP_STATUSES) {
       for (const role of ROLES) {
         for (const isOwner of [true, false]) {
-          const allowed = ALLOWED.find(([a, f, , by]) => a === action && f === from && (by === "owner" ? isOwner : !isOwner && isReviewerRole(role)));
+          const allowed = ALLOWED.find(
+            ([a, f, , by]) => a === action && f === from && (by === "owner" ? isOwner : !isOwner && isReviewerRole(role)),
+          );
           const who = `${isOwner ? "the owner" : "another person"} (${role})`;
           it(`returns ${allowed ? `ok → ${allowed[2]}` : "a refusal"} when ${who} takes ${action} from ${from}`, () => {
             const verdict = nextStatus({ action, from, isOwner, role });
@@ -38,11 +40,17 @@ describe("nextStatus", () => {
   }
 
   it("returns not_allowed (not wrong_status) when a customer tries to approve a submitted setup", () => {
-    expect(nextStatus({ action: "approve", from: "submitted", isOwner: false, role: "customer" })).toMatchObject({ ok: false, reason: "not_allowed" });
+    expect(nextStatus({ action: "approve", from: "submitted", isOwner: false, role: "customer" })).toMatchObject({
+      ok: false,
+      reason: "not_allowed",
+    });
   });
 
   it("returns not_allowed when a maker tries to approve their own setup", () => {
-    expect(nextStatus({ action: "approve", from: "submitted", isOwner: true, role: "maker" })).toMatchObject({ ok: false, reason: "not_allowed" });
+    expect(nextStatus({ action: "approve", from: "submitted", isOwner: true, role: "maker" })).toMatchObject({
+      ok: false,
+      reason: "not_allowed",
+    });
   });
 
   it("returns wrong_status with the status in words when support approves an approved setup", () => {

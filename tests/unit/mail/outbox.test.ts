@@ -37,7 +37,11 @@ async function closedPort(): Promise<number> {
 }
 
 const keptFiles = () => readdirSync(mailDir).filter((f) => capturedMailId(f));
-const message = (to: string) => ({ kind: "password-reset", to, content: passwordResetMail({ name: "Wren", url: `http://localhost:3000/r/${to}` }) });
+const message = (to: string) => ({
+  kind: "password-reset",
+  to,
+  content: passwordResetMail({ name: "Wren", url: `http://localhost:3000/r/${to}` }),
+});
 const rowsFor = (to: string) => db.select().from(mailOutbox).where(eq(mailOutbox.toAddress, to));
 
 beforeAll(async () => {
@@ -89,7 +93,11 @@ describe("deliverDueMail", () => {
     expect(warn).toHaveBeenCalledWith(expect.stringMatching(/retry@trimrail\.test failed \(attempt 1 of 8\)/));
 
     // Not due yet: a run before the backoff ends sends nothing, even with a working server.
-    expect(await deliverDueMail({ send: working, clock: () => new Date(t0.getTime() + MAIL_RETRY_BASE_MS - 1), db })).toEqual({ sent: 0, retrying: 0, failed: 0 });
+    expect(await deliverDueMail({ send: working, clock: () => new Date(t0.getTime() + MAIL_RETRY_BASE_MS - 1), db })).toEqual({
+      sent: 0,
+      retrying: 0,
+      failed: 0,
+    });
 
     const t1 = new Date(t0.getTime() + MAIL_RETRY_BASE_MS + 1);
     expect((await deliverDueMail({ send: working, clock: () => t1, db })).sent).toBe(1);
@@ -113,7 +121,11 @@ describe("deliverDueMail", () => {
     expect(row.status).toBe("failed");
     expect(row.attempts).toBe(MAIL_MAX_ATTEMPTS);
     expect(error).toHaveBeenCalledWith(expect.stringMatching(/gave up on password-reset .* to gone@trimrail\.test after 8 attempts/));
-    expect(await deliverDueMail({ send: working, clock: () => new Date(now + 86_400_000), db })).toEqual({ sent: 0, retrying: 0, failed: 0 });
+    expect(await deliverDueMail({ send: working, clock: () => new Date(now + 86_400_000), db })).toEqual({
+      sent: 0,
+      retrying: 0,
+      failed: 0,
+    });
     expect(keptFiles()).toHaveLength(0);
   });
 
@@ -145,7 +157,10 @@ describe("claimDueMail", () => {
     await enqueueMail(db, [message("lease@trimrail.test")]);
     const now = new Date(Date.now() + 1_000);
     const leaseUntil = new Date(now.getTime() + MAIL_CLAIM_LEASE_MS);
-    const [first, second] = await Promise.all([claimDueMail({ now, leaseUntil, limit: 5, db }), claimDueMail({ now, leaseUntil, limit: 5, db })]);
+    const [first, second] = await Promise.all([
+      claimDueMail({ now, leaseUntil, limit: 5, db }),
+      claimDueMail({ now, leaseUntil, limit: 5, db }),
+    ]);
     expect(first.length + second.length).toBe(1);
 
     const later = new Date(leaseUntil.getTime() + 1);

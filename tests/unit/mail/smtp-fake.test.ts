@@ -25,7 +25,7 @@ const RESET_MESSAGE = {
   to: "wren@trimrail.test",
   subject: "Reset your Trimrail password",
   text: "Choose a new password: http://localhost:3000/api/auth/reset-password/tok123?callbackURL=%2Freset-password",
-  html: "<!doctype html><html><body><p>Choose a <a href=\"http://localhost:3000/x\">new password</a>.</p></body></html>",
+  html: '<!doctype html><html><body><p>Choose a <a href="http://localhost:3000/x">new password</a>.</p></body></html>',
 };
 
 describe("startSmtpFake", () => {
@@ -35,7 +35,10 @@ describe("startSmtpFake", () => {
   });
 
   it("keeps a message sent through the app's transport as an .eml file with its recipient, subject and body", async () => {
-    const send = createMailSender(mailRoute({ TRIMRAIL_SMTP_FAKE_PORT: String(fake.port), TRIMRAIL_MAIL_DIR: dir }), "Trimrail <no-reply@trimrail.test>");
+    const send = createMailSender(
+      mailRoute({ TRIMRAIL_SMTP_FAKE_PORT: String(fake.port), TRIMRAIL_MAIL_DIR: dir }),
+      "Trimrail <no-reply@trimrail.test>",
+    );
     expect(send).not.toBeNull();
     await send!(RESET_MESSAGE);
 
@@ -81,8 +84,16 @@ describe("readCapturedMail", () => {
 
 describe("mailRoute", () => {
   it("prefers SMTP_URL, then the fake's port, else no route", () => {
-    expect(mailRoute({ SMTP_URL: "smtp://mail.example.test:587", TRIMRAIL_SMTP_FAKE_PORT: "2525" })).toEqual({ kind: "smtp", url: "smtp://mail.example.test:587" });
-    expect(mailRoute({ TRIMRAIL_SMTP_FAKE_PORT: "2525", TRIMRAIL_MAIL_DIR: "/tmp/m" })).toEqual({ kind: "fake", host: "127.0.0.1", port: 2525, dir: "/tmp/m" });
+    expect(mailRoute({ SMTP_URL: "smtp://mail.example.test:587", TRIMRAIL_SMTP_FAKE_PORT: "2525" })).toEqual({
+      kind: "smtp",
+      url: "smtp://mail.example.test:587",
+    });
+    expect(mailRoute({ TRIMRAIL_SMTP_FAKE_PORT: "2525", TRIMRAIL_MAIL_DIR: "/tmp/m" })).toEqual({
+      kind: "fake",
+      host: "127.0.0.1",
+      port: 2525,
+      dir: "/tmp/m",
+    });
     expect(mailRoute({ TRIMRAIL_SMTP_FAKE_PORT: "not-a-port" })).toEqual({ kind: "none" });
     expect(mailRoute({})).toEqual({ kind: "none" });
     expect(createMailSender({ kind: "none" })).toBeNull();

@@ -22,9 +22,22 @@ const HOSTILE = `Looks fine <script>alert("x")</script> & "quoted"`;
 
 const EVERY_TEMPLATE: Record<string, MailContent> = {
   setupSubmittedMail: setupSubmittedMail(FACTS),
-  commentAddedMail: commentAddedMail({ setupName: FACTS.setupName, authorName: "Sunniva Rook", body: "Move the mount 4 cm aft.", url: FACTS.url }),
-  decisionMail: decisionMail({ ...FACTS, decision: "changes_requested", reason: "The safety line is rated below the gust load.", reviewerName: "Sunniva Rook" }),
-  passwordResetMail: passwordResetMail({ name: "Wren Halloway", url: "http://localhost:3000/api/auth/reset-password/abc?callbackURL=%2Freset-password" }),
+  commentAddedMail: commentAddedMail({
+    setupName: FACTS.setupName,
+    authorName: "Sunniva Rook",
+    body: "Move the mount 4 cm aft.",
+    url: FACTS.url,
+  }),
+  decisionMail: decisionMail({
+    ...FACTS,
+    decision: "changes_requested",
+    reason: "The safety line is rated below the gust load.",
+    reviewerName: "Sunniva Rook",
+  }),
+  passwordResetMail: passwordResetMail({
+    name: "Wren Halloway",
+    url: "http://localhost:3000/api/auth/reset-password/abc?callbackURL=%2Freset-password",
+  }),
   verifyAddressMail: verifyAddressMail({ name: "Wren Halloway", url: "http://localhost:3000/api/auth/verify-email?token=abc" }),
 };
 
@@ -57,7 +70,12 @@ describe("mail templates", () => {
   });
 
   it("carries the reviewer's reason and a figure in a decision mail", () => {
-    const mail = decisionMail({ ...FACTS, decision: "changes_requested", reason: "The safety line is rated below the gust load.", reviewerName: "Sunniva Rook" });
+    const mail = decisionMail({
+      ...FACTS,
+      decision: "changes_requested",
+      reason: "The safety line is rated below the gust load.",
+      reviewerName: "Sunniva Rook",
+    });
     expect(mail.subject).toBe("Changes requested: Ridge relay, spring");
     expect(mail.text).toContain("The safety line is rated below the gust load.");
     expect(mail.html).toContain("The safety line is rated below the gust load.");

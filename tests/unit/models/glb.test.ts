@@ -16,7 +16,10 @@ async function readCommitted(key: string): Promise<Document> {
 }
 
 function primitiveOf(doc: Document, meshName: string): Primitive {
-  const mesh = doc.getRoot().listMeshes().find((m) => m.getName() === meshName);
+  const mesh = doc
+    .getRoot()
+    .listMeshes()
+    .find((m) => m.getName() === meshName);
   if (!mesh) throw new Error(`no mesh named "${meshName}"`);
   return mesh.listPrimitives()[0];
 }

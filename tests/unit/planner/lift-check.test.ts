@@ -49,12 +49,18 @@ describe("a stored lift check", () => {
     const row = { ...columnsFromDraft(draft) } as unknown as Parameters<typeof draftFromRows>[0];
     expect(draftFromRows(row, []).liftCheck).toEqual(draft.liftCheck);
     // The server's input (toBalanceInput) is the Planner's: one function for both.
-    expect(toBalanceInput(draft, setupCatalogueFor(draft, data.catalogue)).envelope.gasVolumeM3).not.toBeCloseTo(plannedBalanceInput(draft, setupCatalogueFor(draft, data.catalogue)).envelope.gasVolumeM3, 4);
+    expect(toBalanceInput(draft, setupCatalogueFor(draft, data.catalogue)).envelope.gasVolumeM3).not.toBeCloseTo(
+      plannedBalanceInput(draft, setupCatalogueFor(draft, data.catalogue)).envelope.gasVolumeM3,
+      4,
+    );
   });
 
   it("refuses a lift check with an unknown load, naming the field", () => {
     const data = plannerDataFor(SETUP);
-    const parsed = setupDraftSchema.safeParse({ ...data.draft, liftCheck: { freeLiftKg: 0.3, temperatureC: 9, weighedWith: "balloon", solveFor: "purity" } });
+    const parsed = setupDraftSchema.safeParse({
+      ...data.draft,
+      liftCheck: { freeLiftKg: 0.3, temperatureC: 9, weighedWith: "balloon", solveFor: "purity" },
+    });
     expect(parsed.error?.issues[0].path).toEqual(["liftCheck", "weighedWith"]);
   });
 });

@@ -11,7 +11,13 @@ import { pdfText } from "../../support/pdf-text";
 const data = plannerDataFor("set-wren-whip");
 const result = evaluateBalance(inputFor(data.draft, data.catalogue));
 const model = data.catalogue.models.find((m) => m.id === data.draft.modelId)!;
-const APPROVAL = { outcome: "approved" as const, reviewerName: "Sunniva Rook", at: new Date(Date.UTC(2026, 10, 20)), setupVersion: 3, note: "Keep the safety line on." };
+const APPROVAL = {
+  outcome: "approved" as const,
+  reviewerName: "Sunniva Rook",
+  at: new Date(Date.UTC(2026, 10, 20)),
+  setupVersion: 3,
+  note: "Keep the safety line on.",
+};
 
 const facts = (over: Partial<FieldReportFacts> = {}): FieldReportFacts => ({
   setupId: "set-wren-whip",
@@ -37,12 +43,20 @@ describe("buildFieldReport", () => {
     expect(buildFieldReport(facts()).review).toMatchObject({ state: "approved", headline: "APPROVED FOR FIRST FLIGHT" });
     expect(buildFieldReport(facts()).review.detail).toContain("Sunniva Rook");
     // edited after approval: back to draft, version 4
-    expect(buildFieldReport(facts({ status: "draft", version: 4 })).review).toMatchObject({ state: "not_reviewed", headline: "NOT REVIEWED" });
+    expect(buildFieldReport(facts({ status: "draft", version: 4 })).review).toMatchObject({
+      state: "not_reviewed",
+      headline: "NOT REVIEWED",
+    });
     expect(buildFieldReport(facts({ latestDecision: null, status: "draft" })).review.state).toBe("not_reviewed");
   });
 
   it("returns the reason in large words when changes were requested", () => {
-    const report = buildFieldReport(facts({ status: "changes_requested", latestDecision: { ...APPROVAL, outcome: "changes_requested", note: "Move the mount forward." } }));
+    const report = buildFieldReport(
+      facts({
+        status: "changes_requested",
+        latestDecision: { ...APPROVAL, outcome: "changes_requested", note: "Move the mount forward." },
+      }),
+    );
     expect(report.review.state).toBe("changes_requested");
     expect(report.review.detail).toContain("Move the mount forward.");
   });

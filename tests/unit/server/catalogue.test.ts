@@ -24,7 +24,13 @@ let db: Database;
 let close: () => void;
 
 const MAKER: Viewer = { id: "usr-maker-1", name: "Hedda Marlowe", email: "maker@trimrail.test", role: "maker", unitSystem: "metric" };
-const WREN: Viewer = { id: "usr-customer-1", name: "Wren Halloway", email: "customer@trimrail.test", role: "customer", unitSystem: "metric" };
+const WREN: Viewer = {
+  id: "usr-customer-1",
+  name: "Wren Halloway",
+  email: "customer@trimrail.test",
+  role: "customer",
+  unitSystem: "metric",
+};
 /** Wren's whip setup flies on her serial unit R11-0007. */
 const WHIP_SETUP = "set-wren-whip";
 
@@ -63,11 +69,23 @@ describe("the first-weighing backfill of the workshop migration", () => {
     await seedDemo(fresh);
     await client.execute("delete from unit_lift_tests");
     await client.execute(backfill);
-    const rows = (await client.execute("select unit_id, measured_gross_lift_kg, temperature_c, altitude_m, pressure_pa, purity, tested_on from unit_lift_tests order by unit_id")).rows;
+    const rows = (
+      await client.execute(
+        "select unit_id, measured_gross_lift_kg, temperature_c, altitude_m, pressure_pa, purity, tested_on from unit_lift_tests order by unit_id",
+      )
+    ).rows;
     expect(rows.map((r) => ({ ...r }))).toEqual(
-      [...DEMO_UNITS].sort((a, b) => a.id.localeCompare(b.id)).map((u) => ({
-        unit_id: u.id, measured_gross_lift_kg: u.measuredGrossLiftKg, temperature_c: u.measuredAtTemperatureC, altitude_m: u.measuredAtAltitudeM, pressure_pa: null, purity: 1, tested_on: u.measuredOn,
-      })),
+      [...DEMO_UNITS]
+        .sort((a, b) => a.id.localeCompare(b.id))
+        .map((u) => ({
+          unit_id: u.id,
+          measured_gross_lift_kg: u.measuredGrossLiftKg,
+          temperature_c: u.measuredAtTemperatureC,
+          altitude_m: u.measuredAtAltitudeM,
+          pressure_pa: null,
+          purity: 1,
+          tested_on: u.measuredOn,
+        })),
     );
     // Running it again adds nothing: a unit that has a test keeps its history as it is.
     await client.execute(backfill);
@@ -79,11 +97,19 @@ describe("the first-weighing backfill of the workshop migration", () => {
 describe("a serial unit's calibration", () => {
   it("returns a setup's gross lift scaled by the unit's factor when the setup names the unit", async () => {
     const { draft } = await draftOf(WHIP_SETUP);
-    const unit = (await catalogue.getEnvelopeUnit({ viewer: MAKER, id: "unit-r11-0007" }));
+    const unit = await catalogue.getEnvelopeUnit({ viewer: MAKER, id: "unit-r11-0007" });
     if (!unit.ok) throw new Error("no unit");
     const factor = unit.data.calibrationFactor!;
     const first = DEMO_LIFT_TESTS.find((x) => x.id === "lt-unit-r11-0007-first")!;
-    expect(factor).toBeCloseTo(calibrationFactor(unit.data.model.gasVolumeM3, { measuredGrossLiftKg: first.measuredGrossLiftKg, temperatureC: first.temperatureC, altitudeM: first.altitudeM, purity: first.purity }), 12);
+    expect(factor).toBeCloseTo(
+      calibrationFactor(unit.data.model.gasVolumeM3, {
+        measuredGrossLiftKg: first.measuredGrossLiftKg,
+        temperatureC: first.temperatureC,
+        altitudeM: first.altitudeM,
+        purity: first.purity,
+      }),
+      12,
+    );
     const withUnit = await grossLiftOf(draft);
     const withoutUnit = await grossLiftOf({ ...draft, unitId: null });
     expect(withUnit / withoutUnit).toBeCloseTo(factor, 10);
@@ -95,12 +121,25 @@ describe("a serial unit's calibration", () => {
     const recorded = await catalogue.addUnitLiftTest({
       viewer: MAKER,
       unitId: "unit-r11-0007",
-      values: { measuredGrossLiftKg: 1.02, temperatureC: 15, pressurePa: 101_325, altitudeM: 0, purity: 1, testedOn: "2026-11-28", notes: "after a patch" },
+      values: {
+        measuredGrossLiftKg: 1.02,
+        temperatureC: 15,
+        pressurePa: 101_325,
+        altitudeM: 0,
+        purity: 1,
+        testedOn: "2026-11-28",
+        notes: "after a patch",
+      },
     });
     if (!recorded.ok) throw new Error(recorded.error.message);
     const model = await catalogue.getEnvelopeModel({ viewer: MAKER, id: "mdl-ridge-11" });
     if (!model.ok) throw new Error("no model");
-    const expected = calibrationFactor(model.data.gasVolumeM3, { measuredGrossLiftKg: 1.02, temperatureC: 15, pressurePa: 101_325, purity: 1 });
+    const expected = calibrationFactor(model.data.gasVolumeM3, {
+      measuredGrossLiftKg: 1.02,
+      temperatureC: 15,
+      pressurePa: 101_325,
+      purity: 1,
+    });
     expect(recorded.data.calibrationFactor).toBeCloseTo(expected, 12);
     const after = await grossLiftOf(draft);
     const withoutUnit = await grossLiftOf({ ...draft, unitId: null });
@@ -112,7 +151,11 @@ describe("a serial unit's calibration", () => {
   });
 
   it("refuses a lift test dated in the future, writing nothing", async () => {
-    const refused = await catalogue.addUnitLiftTest({ viewer: MAKER, unitId: "unit-r11-0007", values: { measuredGrossLiftKg: 1, temperatureC: 15, pressurePa: null, altitudeM: 0, purity: 1, testedOn: "2999-01-01", notes: "" } });
+    const refused = await catalogue.addUnitLiftTest({
+      viewer: MAKER,
+      unitId: "unit-r11-0007",
+      values: { measuredGrossLiftKg: 1, temperatureC: 15, pressurePa: null, altitudeM: 0, purity: 1, testedOn: "2999-01-01", notes: "" },
+    });
     expect(!refused.ok && refused.error.issues).toEqual([{ path: "testedOn", message: "after today" }]);
     expect(await db.select().from(t.unitLiftTests).where(eq(t.unitLiftTests.testedOn, "2999-01-01"))).toEqual([]);
   });
@@ -128,7 +171,23 @@ describe("editing the catalogue", () => {
     const saved = await catalogue.saveEnvelopeModel({
       viewer: MAKER,
       id: m.id,
-      values: { slug: m.slug, name: m.name, description: m.description, hull: { ...m.hullJson, lengthM: m.hullJson.lengthM * 1.05 }, nominalMassKg: m.nominalMassKg + 0.1, massCentreXM: m.massCentreXM, massCentreZM: m.massCentreZM, tetherPointXM: m.tetherPointXM, tetherPointZM: m.tetherPointZM, railStartXM: m.railStartXM, railEndXM: m.railEndXM, railZM: m.railZM, railTabCount: m.railTabCount, aero: m.aeroJson, limits: m.limitsJson },
+      values: {
+        slug: m.slug,
+        name: m.name,
+        description: m.description,
+        hull: { ...m.hullJson, lengthM: m.hullJson.lengthM * 1.05 },
+        nominalMassKg: m.nominalMassKg + 0.1,
+        massCentreXM: m.massCentreXM,
+        massCentreZM: m.massCentreZM,
+        tetherPointXM: m.tetherPointXM,
+        tetherPointZM: m.tetherPointZM,
+        railStartXM: m.railStartXM,
+        railEndXM: m.railEndXM,
+        railZM: m.railZM,
+        railTabCount: m.railTabCount,
+        aero: m.aeroJson,
+        limits: m.limitsJson,
+      },
     });
     expect(saved.ok).toBe(true);
     const edited = await catalogue.getEnvelopeModel({ viewer: MAKER, id: m.id });
@@ -143,8 +202,27 @@ describe("editing the catalogue", () => {
 
   it("refuses a model whose rail ends aft of the hull, with the field at fault", async () => {
     const { envelopeModelValuesSchema } = await import("@/lib/catalogue/schemas");
-    const m = (await catalogue.getEnvelopeModel({ viewer: MAKER, id: "mdl-ridge-06" })) as { ok: true; data: { hullJson: { lengthM: number } } & Record<string, unknown> };
-    const parsed = envelopeModelValuesSchema.safeParse({ slug: "x-1", name: "X", description: "", hull: m.data.hullJson, nominalMassKg: 0.3, massCentreXM: 0.7, massCentreZM: 0, tetherPointXM: 0.6, tetherPointZM: -0.7, railStartXM: 0.5, railEndXM: m.data.hullJson.lengthM + 0.1, railZM: -0.4, railTabCount: 7, aero: null, limits: {} });
+    const m = (await catalogue.getEnvelopeModel({ viewer: MAKER, id: "mdl-ridge-06" })) as {
+      ok: true;
+      data: { hullJson: { lengthM: number } } & Record<string, unknown>;
+    };
+    const parsed = envelopeModelValuesSchema.safeParse({
+      slug: "x-1",
+      name: "X",
+      description: "",
+      hull: m.data.hullJson,
+      nominalMassKg: 0.3,
+      massCentreXM: 0.7,
+      massCentreZM: 0,
+      tetherPointXM: 0.6,
+      tetherPointZM: -0.7,
+      railStartXM: 0.5,
+      railEndXM: m.data.hullJson.lengthM + 0.1,
+      railZM: -0.4,
+      railTabCount: 7,
+      aero: null,
+      limits: {},
+    });
     expect(parsed.success).toBe(false);
     expect(parsed.error?.issues.map((i) => i.path.join("."))).toContain("railEndXM");
   });
@@ -161,7 +239,12 @@ describe("retiring", () => {
     expect(forOld.models.find((m) => m.id === "mdl-ridge-06")?.active).toBe(false);
 
     // The old setup still evaluates and saves.
-    const saved = await saveSetup({ viewer: WREN, id: "set-wren-heavy", version: (await draftOf("set-wren-heavy")).row.version, draft: (await draftOf("set-wren-heavy")).draft });
+    const saved = await saveSetup({
+      viewer: WREN,
+      id: "set-wren-heavy",
+      version: (await draftOf("set-wren-heavy")).row.version,
+      draft: (await draftOf("set-wren-heavy")).draft,
+    });
     expect(saved.ok).toBe(true);
     // A new one cannot start on it, neither by model nor by a copied draft.
     const byModel = await createSetup({ viewer: WREN, input: { modelId: "mdl-ridge-06" } });
@@ -175,7 +258,12 @@ describe("retiring", () => {
     const used = await catalogue.deleteCatalogueItem({ viewer: MAKER, kind: "mounts", id: "mnt-slider-14" });
     expect(!used.ok && used.error.code).toBe("conflict");
     expect(!used.ok && used.error.message).toMatch(/retire it instead/);
-    const added = await catalogue.saveCatalogueItem({ viewer: MAKER, kind: "adapters", id: null, values: { name: "Spare bush", fromThread: "strap", toThread: "3/8-16 UNC", massKg: 0.02, ratedLoadKg: 1 } });
+    const added = await catalogue.saveCatalogueItem({
+      viewer: MAKER,
+      kind: "adapters",
+      id: null,
+      values: { name: "Spare bush", fromThread: "strap", toThread: "3/8-16 UNC", massKg: 0.02, ratedLoadKg: 1 },
+    });
     if (!added.ok) throw new Error(added.error.message);
     expect((await catalogue.deleteCatalogueItem({ viewer: MAKER, kind: "adapters", id: added.data.id })).ok).toBe(true);
     expect(await db.select().from(t.adapters).where(eq(t.adapters.id, added.data.id))).toEqual([]);
@@ -197,7 +285,9 @@ describe("importTemplatesCsv", () => {
 
   it("writes nothing when one row is bad, and names its row and column", async () => {
     const before = await templatesNow();
-    const csv = templatesToCsv(before).replace(/\r\n$/, "") + "\r\n,New light,,light,0.03,cylinder,0.03,0.03,0.05,1/4-20 UNC,0.002,0,-0.06\r\n,Broken,,light,lots,box,0.1,0.1,0.1,strap,0,0,-0.1";
+    const csv =
+      templatesToCsv(before).replace(/\r\n$/, "") +
+      "\r\n,New light,,light,0.03,cylinder,0.03,0.03,0.05,1/4-20 UNC,0.002,0,-0.06\r\n,Broken,,light,lots,box,0.1,0.1,0.1,strap,0,0,-0.1";
     const result = await catalogue.importTemplatesCsv({ viewer: MAKER, csv });
     expect(!result.ok && result.error.code).toBe("unprocessable");
     expect(!result.ok && result.error.issues).toEqual([{ path: `row ${before.length + 3}.mass_kg`, message: '"lots" is not a number' }]);
@@ -224,18 +314,30 @@ describe("importTemplatesCsv", () => {
 
 describe("saveEnvelopeUnit", () => {
   it("refuses to give a unit that setups name to another owner, writing nothing", async () => {
-    const refused = await catalogue.saveEnvelopeUnit({ viewer: MAKER, id: "unit-r11-0007", values: { serial: "R11-0007", modelId: "mdl-ridge-11", ownerEmail: "tobin@trimrail.test", measuredMassKg: 0.474, notes: "" } });
+    const refused = await catalogue.saveEnvelopeUnit({
+      viewer: MAKER,
+      id: "unit-r11-0007",
+      values: { serial: "R11-0007", modelId: "mdl-ridge-11", ownerEmail: "tobin@trimrail.test", measuredMassKg: 0.474, notes: "" },
+    });
     expect(!refused.ok && refused.error.issues?.[0].path).toBe("ownerEmail");
     const [row] = await db.select().from(t.envelopeUnits).where(eq(t.envelopeUnits.id, "unit-r11-0007"));
     expect(row.ownerId).toBe(WREN.id);
   });
 
   it("adds a unit for a customer by e-mail and refuses an e-mail that is no customer's", async () => {
-    const added = await catalogue.saveEnvelopeUnit({ viewer: MAKER, id: null, values: { serial: "R06-0099", modelId: "mdl-ridge-06", ownerEmail: "mirela@trimrail.test", measuredMassKg: 0.26, notes: "" } });
+    const added = await catalogue.saveEnvelopeUnit({
+      viewer: MAKER,
+      id: null,
+      values: { serial: "R06-0099", modelId: "mdl-ridge-06", ownerEmail: "mirela@trimrail.test", measuredMassKg: 0.26, notes: "" },
+    });
     expect(added.ok).toBe(true);
     const unit = added.ok ? await catalogue.getEnvelopeUnit({ viewer: MAKER, id: added.data.id }) : null;
     expect(unit?.ok && unit.data.calibrationFactor).toBeNull();
-    const bad = await catalogue.saveEnvelopeUnit({ viewer: MAKER, id: null, values: { serial: "R06-0100", modelId: "mdl-ridge-06", ownerEmail: "support@trimrail.test", measuredMassKg: 0.26, notes: "" } });
+    const bad = await catalogue.saveEnvelopeUnit({
+      viewer: MAKER,
+      id: null,
+      values: { serial: "R06-0100", modelId: "mdl-ridge-06", ownerEmail: "support@trimrail.test", measuredMassKg: 0.26, notes: "" },
+    });
     expect(!bad.ok && bad.error.issues).toEqual([{ path: "ownerEmail", message: "no customer has that e-mail" }]);
   });
 });

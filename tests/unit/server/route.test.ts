@@ -16,7 +16,8 @@ const { route } = await import("@/lib/server/route");
 const CUSTOMER: Viewer = { id: "u-1", name: "Ada Customer", email: "ada@example.test", role: "customer", unitSystem: "metric" };
 const MAKER: Viewer = { ...CUSTOMER, id: "u-9", role: "maker" };
 const context = (params: Record<string, string> = {}) => ({ params: Promise.resolve(params) });
-const post = (body: string, type = "application/json") => new Request("http://app.test/api/things", { method: "POST", body, headers: { "content-type": type } });
+const post = (body: string, type = "application/json") =>
+  new Request("http://app.test/api/things", { method: "POST", body, headers: { "content-type": type } });
 
 beforeEach(() => {
   session.viewer = null;
@@ -127,7 +128,11 @@ describe("route", () => {
     session.viewer = CUSTOMER;
     handler.mockClear();
     const from = (headers: Record<string, string>) =>
-      new Request("http://app.test/api/things", { method: "POST", body: JSON.stringify({ count: 1 }), headers: { "content-type": "application/json", ...headers } });
+      new Request("http://app.test/api/things", {
+        method: "POST",
+        body: JSON.stringify({ count: 1 }),
+        headers: { "content-type": "application/json", ...headers },
+      });
     expect((await POST(from({ origin: "http://evil.example" }), context())).status).toBe(403);
     expect((await POST(from({ "sec-fetch-site": "cross-site" }), context())).status).toBe(403);
     expect((await POST(from({ "sec-fetch-site": "same-site" }), context())).status).toBe(403);
@@ -146,7 +151,12 @@ describe("route", () => {
         controller.enqueue(chunk);
       },
     });
-    const request = new Request("http://app.test/api/things", { method: "POST", body: endless, headers: { "content-type": "application/json" }, duplex: "half" } as RequestInit);
+    const request = new Request("http://app.test/api/things", {
+      method: "POST",
+      body: endless,
+      headers: { "content-type": "application/json" },
+      duplex: "half",
+    } as RequestInit);
     const response = await POST(request, context());
     expect(response.status).toBe(413);
     // 256 KiB cap / 64 KiB chunks: it stopped after a handful, not after the stream's (unbounded) end

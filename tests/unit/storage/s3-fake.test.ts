@@ -30,8 +30,19 @@ afterAll(async () => {
 describe("storageConfig", () => {
   it("returns null without S3_BUCKET, and the bucket, endpoint, keys and path style when set", () => {
     expect(storageConfig({})).toBeNull();
-    expect(storageConfig({ S3_BUCKET: "b" })).toEqual({ bucket: "b", region: "us-east-1", endpoint: undefined, credentials: undefined, forcePathStyle: false });
-    expect(storageConfig(fake.env)).toMatchObject({ bucket: fake.bucket, endpoint: fake.endpoint, forcePathStyle: true, credentials: { accessKeyId: "S3RVER" } });
+    expect(storageConfig({ S3_BUCKET: "b" })).toEqual({
+      bucket: "b",
+      region: "us-east-1",
+      endpoint: undefined,
+      credentials: undefined,
+      forcePathStyle: false,
+    });
+    expect(storageConfig(fake.env)).toMatchObject({
+      bucket: fake.bucket,
+      endpoint: fake.endpoint,
+      forcePathStyle: true,
+      credentials: { accessKeyId: "S3RVER" },
+    });
   });
 });
 

@@ -24,8 +24,8 @@ export default async function CapturedMailPage() {
       <div>
         <h1 className="text-2xl">Captured mail</h1>
         <p className="text-sm text-muted">
-          Every message Trimrail sent while the local SMTP fake stands in for a mail server, newest first. Nothing here left
-          this machine. Folder: <code>{dir}</code>
+          Every message Trimrail sent while the local SMTP fake stands in for a mail server, newest first. Nothing here left this machine.
+          Folder: <code>{dir}</code>
         </p>
       </div>
       {messages.length === 0 ? (
@@ -33,14 +33,22 @@ export default async function CapturedMailPage() {
       ) : (
         <table className="panel w-full border-separate border-spacing-0 text-sm" data-testid="captured-mail-list">
           <thead className="text-left text-muted">
-            <tr><th className="px-3 py-2">Received</th><th className="px-3 py-2">To</th><th className="px-3 py-2">Subject</th></tr>
+            <tr>
+              <th className="px-3 py-2">Received</th>
+              <th className="px-3 py-2">To</th>
+              <th className="px-3 py-2">Subject</th>
+            </tr>
           </thead>
           <tbody>
             {messages.map((m) => (
               <tr key={m.id} data-testid="captured-mail-row">
                 <td className={`${cell} figure whitespace-nowrap`}>{when(m.receivedAt)}</td>
                 <td className={cell}>{m.to}</td>
-                <td className={cell}><Link href={`/dev/mail/${m.id}`} className="text-accent underline">{m.subject}</Link></td>
+                <td className={cell}>
+                  <Link href={`/dev/mail/${m.id}`} className="text-accent underline">
+                    {m.subject}
+                  </Link>
+                </td>
               </tr>
             ))}
           </tbody>

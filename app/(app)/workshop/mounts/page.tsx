@@ -14,7 +14,11 @@ export default async function WorkshopMountsPage({ searchParams }: PageProps<"/w
   const list = await listSimplePage({ kind: "mounts", page, pageSize: WORKSHOP_PAGE_SIZE });
   return (
     <section className="space-y-4">
-      <WorkshopNav current="mounts" title="Mounts" intro="The sliding carriages on the belly rail: thread, mass, rated load and safety line." />
+      <WorkshopNav
+        current="mounts"
+        title="Mounts"
+        intro="The sliding carriages on the belly rail: thread, mass, rated load and safety line."
+      />
       <SimpleCatalogue kind="mounts" rows={list.rows} unitSystem={viewer.unitSystem} />
       <Pager basePath="/workshop/mounts" page={list.page} pageSize={list.pageSize} total={list.total} />
     </section>

@@ -16,17 +16,27 @@ export default async function WorkshopPeoplePage({ searchParams }: PageProps<"/w
   const list = await listUsersPage({ page, pageSize: WORKSHOP_PAGE_SIZE });
   return (
     <section className="space-y-4">
-      <WorkshopNav current="people" title="People" intro="Who may do what. A role changes only when you confirm it; your own account keeps the maker role." />
+      <WorkshopNav
+        current="people"
+        title="People"
+        intro="Who may do what. A role changes only when you confirm it; your own account keeps the maker role."
+      />
       <table className="panel w-full border-separate border-spacing-0 text-sm" data-testid="workshop-users">
         <thead className="text-left text-muted">
-          <tr><th className="px-3 py-2">Name</th><th className="px-3 py-2">E-mail</th><th className="px-3 py-2">Role</th></tr>
+          <tr>
+            <th className="px-3 py-2">Name</th>
+            <th className="px-3 py-2">E-mail</th>
+            <th className="px-3 py-2">Role</th>
+          </tr>
         </thead>
         <tbody>
           {list.rows.map((u) => (
             <tr key={u.id}>
               <td className={cell}>{u.name}</td>
               <td className={cell}>{u.email}</td>
-              <td className={cell}><RoleSelect userId={u.id} name={u.name} role={u.role} disabled={u.id === viewer.id} /></td>
+              <td className={cell}>
+                <RoleSelect userId={u.id} name={u.name} role={u.role} disabled={u.id === viewer.id} />
+              </td>
             </tr>
           ))}
         </tbody>

@@ -20,26 +20,56 @@ export default async function WorkshopUnitsPage({ searchParams }: PageProps<"/wo
   const units = viewer.unitSystem;
   return (
     <section className="space-y-4">
-      <WorkshopNav current="units" title="Serial units" intro="Each sewn envelope with its weighed mass and its lift tests. The latest test's calibration factor scales the model's volume for every setup that names the unit." />
+      <WorkshopNav
+        current="units"
+        title="Serial units"
+        intro="Each sewn envelope with its weighed mass and its lift tests. The latest test's calibration factor scales the model's volume for every setup that names the unit."
+      />
       <div className="flex justify-end">
-        <Link href="/workshop/units/new" className="rounded bg-accent px-3 py-1.5 text-sm text-white" data-testid="new-unit">New unit</Link>
+        <Link href="/workshop/units/new" className="rounded bg-accent px-3 py-1.5 text-sm text-white" data-testid="new-unit">
+          New unit
+        </Link>
       </div>
       <table className="panel w-full border-separate border-spacing-0 text-sm" data-testid="workshop-units">
         <thead className="text-left text-muted">
-          <tr><th className="px-3 py-2">Serial</th><th className="px-3 py-2">Model</th><th className="px-3 py-2">Owner</th><th className="px-3 py-2">Weighed mass</th><th className="px-3 py-2">Latest lift test</th><th className="px-3 py-2">Factor</th><th className="px-3 py-2">Used by</th><th className="px-3 py-2">State</th><th className="px-3 py-2"><span className="sr-only">Actions</span></th></tr>
+          <tr>
+            <th className="px-3 py-2">Serial</th>
+            <th className="px-3 py-2">Model</th>
+            <th className="px-3 py-2">Owner</th>
+            <th className="px-3 py-2">Weighed mass</th>
+            <th className="px-3 py-2">Latest lift test</th>
+            <th className="px-3 py-2">Factor</th>
+            <th className="px-3 py-2">Used by</th>
+            <th className="px-3 py-2">State</th>
+            <th className="px-3 py-2">
+              <span className="sr-only">Actions</span>
+            </th>
+          </tr>
         </thead>
         <tbody>
           {list.rows.map((u) => (
             <tr key={u.id} data-testid="unit-row" data-unit-id={u.id}>
-              <td className={`${cell} figure`}><Link href={`/workshop/units/${u.id}`} className="text-accent-dark underline">{u.serial}</Link></td>
+              <td className={`${cell} figure`}>
+                <Link href={`/workshop/units/${u.id}`} className="text-accent-dark underline">
+                  {u.serial}
+                </Link>
+              </td>
               <td className={cell}>{u.modelName}</td>
               <td className={cell}>{u.ownerName ?? <span className="text-muted">the workshop</span>}</td>
               <td className={`${cell} figure`}>{formatQuantity("mass", u.measuredMassKg, units)}</td>
-              <td className={`${cell} figure`}>{u.latestTest ? `${formatQuantity("mass", u.latestTest.measuredGrossLiftKg, units)} on ${u.latestTest.testedOn}` : "none"}</td>
-              <td className={cell}><FactorText factor={u.calibrationFactor} /></td>
+              <td className={`${cell} figure`}>
+                {u.latestTest ? `${formatQuantity("mass", u.latestTest.measuredGrossLiftKg, units)} on ${u.latestTest.testedOn}` : "none"}
+              </td>
+              <td className={cell}>
+                <FactorText factor={u.calibrationFactor} />
+              </td>
               <td className={`${cell} figure`}>{u.setupCount}</td>
-              <td className={cell}><ActiveBadge active={u.active} /></td>
-              <td className={cell}><ItemActions kind="units" id={u.id} name={u.serial} active={u.active} setupCount={u.setupCount} /></td>
+              <td className={cell}>
+                <ActiveBadge active={u.active} />
+              </td>
+              <td className={cell}>
+                <ItemActions kind="units" id={u.id} name={u.serial} active={u.active} setupCount={u.setupCount} />
+              </td>
             </tr>
           ))}
         </tbody>

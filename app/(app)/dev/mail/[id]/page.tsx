@@ -26,12 +26,19 @@ export default async function CapturedMessagePage({ params }: PageProps<"/dev/ma
   if (!message) notFound();
   return (
     <section className="space-y-4">
-      <Link href="/dev/mail" className="text-sm text-accent underline">All captured mail</Link>
-      <h1 className="text-2xl" data-testid="captured-mail-subject">{message.subject}</h1>
+      <Link href="/dev/mail" className="text-sm text-accent underline">
+        All captured mail
+      </Link>
+      <h1 className="text-2xl" data-testid="captured-mail-subject">
+        {message.subject}
+      </h1>
       <dl className="grid grid-cols-[auto_1fr] gap-x-4 gap-y-1 text-sm">
-        <dt className="text-muted">From</dt><dd>{message.from}</dd>
-        <dt className="text-muted">To</dt><dd data-testid="captured-mail-to">{message.to}</dd>
-        <dt className="text-muted">Received</dt><dd className="figure">{message.receivedAt.toISOString().slice(0, 19).replace("T", " ")} UTC</dd>
+        <dt className="text-muted">From</dt>
+        <dd>{message.from}</dd>
+        <dt className="text-muted">To</dt>
+        <dd data-testid="captured-mail-to">{message.to}</dd>
+        <dt className="text-muted">Received</dt>
+        <dd className="figure">{message.receivedAt.toISOString().slice(0, 19).replace("T", " ")} UTC</dd>
       </dl>
       <h2 className="text-lg">Plain text</h2>
       <MailText text={message.text} />

@@ -15,7 +15,12 @@ export default async function FieldReportPage({ params }: PageProps<"/setups/[id
     <div className="space-y-3">
       <p className="flex flex-wrap gap-3 text-sm print:hidden">
         <PrintButton />
-        <a href={`/api/setups/${encodeURIComponent(id)}/report.pdf`} className="rounded border border-hairline bg-white px-3 py-1.5" data-testid="report-pdf" download>
+        <a
+          href={`/api/setups/${encodeURIComponent(id)}/report.pdf`}
+          className="rounded border border-hairline bg-white px-3 py-1.5"
+          data-testid="report-pdf"
+          download
+        >
           Download the PDF
         </a>
       </p>

@@ -46,11 +46,28 @@ export default async function WorkshopModelPage({ params }: PageProps<"/workshop
     <section className="space-y-4">
       <WorkshopNav current="models" title={model ? model.name : "New envelope model"} />
       <p className="flex flex-wrap items-center gap-3 text-sm">
-        <Link href="/workshop" className="text-accent-dark underline">All models</Link>
+        <Link href="/workshop" className="text-accent-dark underline">
+          All models
+        </Link>
         {model && <ActiveBadge active={model.active} />}
-        {model && <ItemActions kind="models" id={model.id} name={model.name} active={model.active} setupCount={model.setupCount} afterDelete="/workshop" />}
+        {model && (
+          <ItemActions
+            kind="models"
+            id={model.id}
+            name={model.name}
+            active={model.active}
+            setupCount={model.setupCount}
+            afterDelete="/workshop"
+          />
+        )}
       </p>
-      <ModelEditor key={model ? `${model.id}-${model.updatedAt.getTime()}` : "new"} id={model?.id ?? null} initial={initial} unitSystem={viewer.unitSystem} setupCount={model?.setupCount ?? 0} />
+      <ModelEditor
+        key={model ? `${model.id}-${model.updatedAt.getTime()}` : "new"}
+        id={model?.id ?? null}
+        initial={initial}
+        unitSystem={viewer.unitSystem}
+        setupCount={model?.setupCount ?? 0}
+      />
     </section>
   );
 }

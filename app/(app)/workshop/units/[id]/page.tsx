@@ -15,19 +15,58 @@ export default async function WorkshopUnitPage({ params }: PageProps<"/workshop/
   const [unit, models] = await Promise.all([id === "new" ? null : getUnitById({ id }), listModelChoices()]);
   if (id !== "new" && !unit) notFound();
   const initial = unit
-    ? { serial: unit.serial, modelId: unit.modelId, ownerEmail: unit.ownerEmail ?? "", measuredMassKg: unit.measuredMassKg, notes: unit.notes }
+    ? {
+        serial: unit.serial,
+        modelId: unit.modelId,
+        ownerEmail: unit.ownerEmail ?? "",
+        measuredMassKg: unit.measuredMassKg,
+        notes: unit.notes,
+      }
     : { serial: "", modelId: models.find((m) => m.active)?.id ?? "", ownerEmail: "", measuredMassKg: 0.5, notes: "" };
   // Newest first: the first row is the test the unit plans with.
-  const tests = (unit?.tests ?? []).map((t) => ({ id: t.id, measuredGrossLiftKg: t.measuredGrossLiftKg, temperatureC: t.temperatureC, pressurePa: t.pressurePa, altitudeM: t.altitudeM, purity: t.purity, testedOn: t.testedOn, createdAt: t.createdAt.toISOString(), notes: t.notes }));
+  const tests = (unit?.tests ?? []).map((t) => ({
+    id: t.id,
+    measuredGrossLiftKg: t.measuredGrossLiftKg,
+    temperatureC: t.temperatureC,
+    pressurePa: t.pressurePa,
+    altitudeM: t.altitudeM,
+    purity: t.purity,
+    testedOn: t.testedOn,
+    createdAt: t.createdAt.toISOString(),
+    notes: t.notes,
+  }));
   return (
     <section className="space-y-4">
-      <WorkshopNav current="units" title={unit ? `Serial unit ${unit.serial}` : "New serial unit"} intro={unit ? `${unit.model.name}; ${unit.setupCount} setup${unit.setupCount === 1 ? "" : "s"} name it.` : undefined} />
+      <WorkshopNav
+        current="units"
+        title={unit ? `Serial unit ${unit.serial}` : "New serial unit"}
+        intro={unit ? `${unit.model.name}; ${unit.setupCount} setup${unit.setupCount === 1 ? "" : "s"} name it.` : undefined}
+      />
       <p className="flex flex-wrap items-center gap-3 text-sm">
-        <Link href="/workshop/units" className="text-accent-dark underline">All units</Link>
+        <Link href="/workshop/units" className="text-accent-dark underline">
+          All units
+        </Link>
         {unit && <ActiveBadge active={unit.active} />}
-        {unit && <ItemActions kind="units" id={unit.id} name={unit.serial} active={unit.active} setupCount={unit.setupCount} afterDelete="/workshop/units" />}
+        {unit && (
+          <ItemActions
+            kind="units"
+            id={unit.id}
+            name={unit.serial}
+            active={unit.active}
+            setupCount={unit.setupCount}
+            afterDelete="/workshop/units"
+          />
+        )}
       </p>
-      <UnitEditor key={unit ? `${unit.id}-${tests.length}-${tests[0]?.id ?? ""}` : "new"} id={unit?.id ?? null} initial={initial} models={models} tests={tests} calibrationFactor={unit?.calibrationFactor ?? null} unitSystem={viewer.unitSystem} />
+      <UnitEditor
+        key={unit ? `${unit.id}-${tests.length}-${tests[0]?.id ?? ""}` : "new"}
+        id={unit?.id ?? null}
+        initial={initial}
+        models={models}
+        tests={tests}
+        calibrationFactor={unit?.calibrationFactor ?? null}
+        unitSystem={viewer.unitSystem}
+      />
     </section>
   );
 }

@@ -8,4 +8,6 @@ const params = setupParamsSchema;
 export const GET = route({ params }, ({ viewer, params: { id } }) => listComments({ viewer, id }));
 
 /** POST /api/setups/:id/comments — `{ body }`, 1–4,000 characters; mails the others in the thread. */
-export const POST = route({ params, body: commentBodySchema, status: 201 }, ({ viewer, params: { id }, body }) => addComment({ viewer, id, body: body.body }));
+export const POST = route({ params, body: commentBodySchema, status: 201 }, ({ viewer, params: { id }, body }) =>
+  addComment({ viewer, id, body: body.body }),
+);

@@ -8,5 +8,10 @@ import { setupParamsSchema } from "../../schema";
 export const GET = route({ params: setupParamsSchema, respond: "file" }, async ({ viewer, params: { id } }) => {
   const report = await getFieldReport({ viewer, id });
   if (!report.ok) return report;
-  return ok({ bytes: await renderFieldReportPdf(report.data), contentType: "application/pdf", fileName: `field-report-${id}.pdf`, disposition: "attachment" as const });
+  return ok({
+    bytes: await renderFieldReportPdf(report.data),
+    contentType: "application/pdf",
+    fileName: `field-report-${id}.pdf`,
+    disposition: "attachment" as const,
+  });
 });

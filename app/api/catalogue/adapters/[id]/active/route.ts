@@ -4,6 +4,7 @@ import { route } from "@/lib/server/route";
 import { activeBodySchema, itemParamsSchema } from "../../../schema";
 
 /** PUT /api/catalogue/adapters/:id/active { active } — retires (hidden from new setups; old ones keep it) or restores. */
-export const PUT = route({ roles: MAKER_ONLY, params: itemParamsSchema, notFoundMessage: "No such adapter.", body: activeBodySchema }, ({ viewer, params, body }) =>
-  setCatalogueItemActive({ viewer, kind: "adapters", id: params.id, active: body.active }),
+export const PUT = route(
+  { roles: MAKER_ONLY, params: itemParamsSchema, notFoundMessage: "No such adapter.", body: activeBodySchema },
+  ({ viewer, params, body }) => setCatalogueItemActive({ viewer, kind: "adapters", id: params.id, active: body.active }),
 );

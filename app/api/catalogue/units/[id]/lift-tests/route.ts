@@ -4,6 +4,7 @@ import { route } from "@/lib/server/route";
 import { itemParamsSchema, liftTestValuesSchema } from "../../../schema";
 
 /** POST /api/catalogue/units/:id/lift-tests — records a lift test; answers the unit's new calibration factor. */
-export const POST = route({ roles: MAKER_ONLY, params: itemParamsSchema, notFoundMessage: "No such serial unit.", body: liftTestValuesSchema, status: 201 }, ({ viewer, params, body }) =>
-  addUnitLiftTest({ viewer, unitId: params.id, values: body }),
+export const POST = route(
+  { roles: MAKER_ONLY, params: itemParamsSchema, notFoundMessage: "No such serial unit.", body: liftTestValuesSchema, status: 201 },
+  ({ viewer, params, body }) => addUnitLiftTest({ viewer, unitId: params.id, values: body }),
 );
