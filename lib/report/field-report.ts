@@ -184,3 +184,29 @@ export function buildFieldReport(f: FieldReportFacts): FieldReport {
     envelope: f.envelope ?? null,
   };
 }
+
+/** The operating envelope as printed: a row per line out, a column per wind, each cell's height, blowdown and worst flag in words. */
+export function envelopeReportTable(
+  table: {
+    windsMS: readonly number[];
+    rows: readonly {
+      lineOutM: number;
+      cells: readonly { heightAboveGroundM: number | null; blowdownM: number | null; worstLevel: FlagLevel }[];
+    }[];
+  },
+  unitSystem: UnitSystem,
+): ReportTable | null {
+  if (table.windsMS.length === 0 || table.rows.length === 0) return null;
+  const distance = (m: number) => formatQuantity("distance", m, unitSystem);
+  return {
+    header: ["Line out", ...table.windsMS.map((w) => `Wind ${formatQuantity("speed", w, unitSystem)}`)],
+    rows: table.rows.map((row) => [
+      distance(row.lineOutM),
+      ...row.cells.map((c) =>
+        c.heightAboveGroundM === null
+          ? `does not fly · ${c.worstLevel}`
+          : `${distance(c.heightAboveGroundM)} up, ${distance(c.blowdownM ?? 0)} out · ${c.worstLevel}`,
+      ),
+    ]),
+  };
+}

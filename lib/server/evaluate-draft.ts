@@ -1,6 +1,6 @@
 import "server-only";
 import { getCatalogueForDraft } from "@/db/queries/catalogue";
-import { balanceInputSchema, evaluateBalance, worstLevel, type BalanceResult, type FlagLevel } from "@/lib/balance";
+import { balanceInputSchema, evaluateBalance, worstLevel, type BalanceInput, type BalanceResult, type FlagLevel } from "@/lib/balance";
 import { fail, issuesFromZod, ok, type FieldIssue, type Result } from "@/lib/errors";
 import { toBalanceInput } from "@/lib/setups/balance-input";
 import type { SetupDraft } from "@/lib/setups/setup-draft";
@@ -8,6 +8,8 @@ import type { SetupDraft } from "@/lib/setups/setup-draft";
 export interface ServerEvaluation {
   result: BalanceResult;
   worstFlag: FlagLevel;
+  /** The engine input the result is of, for what else the server derives from it (the operating envelope). */
+  input: BalanceInput;
 }
 
 const badName = (message: string, issues: FieldIssue[]) => fail("bad_request", message, issues);
@@ -67,7 +69,7 @@ export async function evaluateDraft({
   const checked = balanceInputSchema.safeParse(input);
   if (!checked.success) return fail("bad_request", "The setup does not make a valid balance input.", issuesFromZod(checked.error));
   const result = evaluateBalance(checked.data);
-  return ok({ result, worstFlag: worstLevel(result.flags) });
+  return ok({ result, worstFlag: worstLevel(result.flags), input: checked.data });
 }
 
 /** Stored results from before flags carried their figures are evaluated again from the stored input. */

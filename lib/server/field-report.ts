@@ -4,9 +4,13 @@ import { getSetupHeaderForViewer, listThread } from "@/db/queries/review";
 import { getSetupById } from "@/db/queries/setups";
 import type { Viewer } from "@/lib/auth/access";
 import { fail, ok, type Result } from "@/lib/errors";
-import { buildFieldReport, type FieldReport } from "@/lib/report/field-report";
+import { operatingEnvelope, operatingEnvelopeTable } from "@/lib/balance";
+import { buildFieldReport, envelopeReportTable, type FieldReport } from "@/lib/report/field-report";
 import { formatQuantity } from "@/lib/units";
 import { evaluateDraft, isCurrentResultShape } from "./evaluate-draft";
+
+/** A grid that fits a printed page: six winds (0–15 m/s) by six lengths of line. */
+const REPORT_ENVELOPE_GRID = { windCount: 6, lineCount: 6 } as const;
 
 /** The field report of a setup in the viewer's units: its owner's, or review staff's once it was submitted. */
 export async function getFieldReport({ viewer, id }: { viewer: Viewer; id: string }): Promise<Result<FieldReport>> {
@@ -14,12 +18,17 @@ export async function getFieldReport({ viewer, id }: { viewer: Viewer; id: strin
   const stored = header ? await getSetupById({ id, ownerId: null }) : null;
   if (!header || !stored) return fail("not_found", "No such setup, or not one you can see.");
   const { row, draft } = stored;
+  // The server's own evaluation of the stored input gives the operating envelope (and the result,
+  // for a setup stored before results carried their figures).
+  const fresh = await evaluateDraft({ draft, ownerId: header.ownerId });
   let result = stored.result;
   if (!isCurrentResultShape(result)) {
-    const fresh = await evaluateDraft({ draft, ownerId: header.ownerId });
     if (!fresh.ok) return fresh;
     result = fresh.data.result;
   }
+  const envelope = fresh.ok
+    ? envelopeReportTable(operatingEnvelopeTable(operatingEnvelope(fresh.data.input, REPORT_ENVELOPE_GRID)), viewer.unitSystem)
+    : null;
   const [catalogue, thread] = await Promise.all([
     getPlannerCatalogue({ ownerId: header.ownerId, includeIds: catalogueIdsOfDraft(draft) }),
     listThread({ setupId: id }),
@@ -59,6 +68,7 @@ export async function getFieldReport({ viewer, id }: { viewer: Viewer; id: strin
               note: decision.body,
             }
           : null,
+      envelope,
       generatedAt: new Date(),
       unitSystem: units,
     }),

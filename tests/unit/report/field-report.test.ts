@@ -1,7 +1,7 @@
 import { describe, expect, it } from "vitest";
 import { inputFor } from "@/components/planner/store";
-import { evaluateBalance } from "@/lib/balance";
-import { buildFieldReport, type FieldReportFacts } from "@/lib/report/field-report";
+import { evaluateBalance, operatingEnvelope, operatingEnvelopeTable } from "@/lib/balance";
+import { buildFieldReport, envelopeReportTable, type FieldReportFacts } from "@/lib/report/field-report";
 import { renderFieldReportPdf } from "@/lib/report/field-report-pdf";
 import { formatQuantity } from "@/lib/units";
 import { plannerDataFor } from "../../support/planner-fixture";
@@ -93,5 +93,27 @@ describe("renderFieldReportPdf", () => {
   it("returns NOT REVIEWED in the PDF of an unreviewed setup", async () => {
     const text = await pdfText(await renderFieldReportPdf(buildFieldReport(facts({ latestDecision: null, status: "draft" }))));
     expect(text).toContain("NOT REVIEWED");
+  });
+});
+
+describe("envelopeReportTable", () => {
+  it("returns a row per line out and a column per wind, each cell's height, blowdown and worst flag, printed in the PDF", async () => {
+    const envelope = operatingEnvelope(inputFor(data.draft, data.catalogue), { windCount: 6, lineCount: 6 });
+    const table = envelopeReportTable(operatingEnvelopeTable(envelope), "metric");
+    expect(table).not.toBeNull();
+    expect(table?.header).toHaveLength(1 + envelope.windsMS.length);
+    expect(table?.rows).toHaveLength(envelope.linesOutM.length);
+    const first = envelope.points[0][0];
+    expect(table?.rows[0][1]).toContain(first.worstLevel);
+    if (first.heightAboveGroundM !== null)
+      expect(table?.rows[0][1]).toContain(formatQuantity("distance", first.heightAboveGroundM, "metric"));
+    const text = await pdfText(await renderFieldReportPdf(buildFieldReport(facts({ envelope: table }))));
+    expect(text).toContain("Operating envelope");
+    expect(text).toContain(table?.rows[0][0] ?? "");
+  });
+
+  it("returns null when the setup has no tether (no envelope to print)", () => {
+    const envelope = operatingEnvelope(inputFor({ ...data.draft, tether: null }, data.catalogue));
+    expect(envelopeReportTable(operatingEnvelopeTable(envelope), "metric")).toBeNull();
   });
 });
