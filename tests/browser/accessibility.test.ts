@@ -76,7 +76,12 @@ const ROLES: { role: string; email: string; pages: PageCheck[] }[] = [
     pages: [
       ...COMMON_PAGES,
       ...REVIEWER_PAGES,
-      { path: "/workshop", ready: (page) => page.getByTestId("workshop-users").waitFor() },
+      { path: "/workshop", ready: (page) => page.getByTestId("workshop-models").waitFor() },
+      ...["models", "units", "mounts", "adapters", "templates"].map((part) => ({
+        path: `/workshop/${part}`,
+        ready: (page: Page) => page.getByTestId("workshop-nav").waitFor(),
+      })),
+      { path: "/workshop/people", ready: (page) => page.getByTestId("workshop-users").waitFor() },
       { path: "/dev/mail" },
     ],
   },
