@@ -77,7 +77,8 @@ const ROLES: { role: string; email: string; pages: PageCheck[] }[] = [
       ...COMMON_PAGES,
       ...REVIEWER_PAGES,
       { path: "/workshop", ready: (page) => page.getByTestId("workshop-models").waitFor() },
-      ...["models", "units", "mounts", "adapters", "templates"].map((part) => ({
+      { path: "/workshop/models/mdl-ridge-11", ready: (page) => page.getByTestId("workshop-nav").waitFor() },
+      ...["units", "mounts", "adapters", "templates"].map((part) => ({
         path: `/workshop/${part}`,
         ready: (page: Page) => page.getByTestId("workshop-nav").waitFor(),
       })),
