@@ -1,12 +1,10 @@
-import { eq, inArray } from "drizzle-orm";
 import { afterAll, beforeAll, describe, expect, inject, it } from "vitest";
 import { openDatabase } from "@/db/index";
-import { adapters, envelopeModels, envelopeUnits, mounts, unitLiftTests } from "@/db/schema";
-import { latestLiftTest, unitCalibrationFactor } from "@/lib/setups/calibration";
 import { evaluateBalance, worstLevel, type BalanceResult, type FlagLevel } from "@/lib/balance";
 import { toBalanceInput, type SetupCatalogue } from "@/lib/setups/balance-input";
 import type { SetupDraft } from "@/lib/setups/setup-draft";
 import { ApiClient } from "../support/http";
+import { catalogueFor as sharedCatalogueFor } from "../support/setup-fixtures";
 
 const baseURL = inject("baseURL");
 const asJson = <T>(value: T): T => JSON.parse(JSON.stringify(value)) as T;
@@ -34,20 +32,7 @@ beforeAll(async () => {
 afterAll(() => database.client.close());
 
 /** The catalogue rows a draft names, read straight from the database (not through the app's queries). */
-async function catalogueFor(draft: SetupDraft): Promise<SetupCatalogue> {
-  const { db } = database;
-  const [model] = await db.select().from(envelopeModels).where(eq(envelopeModels.id, draft.modelId));
-  const [mount] = await db.select().from(mounts).where(eq(mounts.id, draft.mountId));
-  const [unitRow] = draft.unitId ? await db.select().from(envelopeUnits).where(eq(envelopeUnits.id, draft.unitId)) : [];
-  const tests = unitRow ? await db.select().from(unitLiftTests).where(eq(unitLiftTests.unitId, unitRow.id)) : [];
-  const unit =
-    unitRow && model ? { ...unitRow, calibrationFactor: unitCalibrationFactor(model.gasVolumeM3, latestLiftTest(tests)) } : undefined;
-  const adapterIds = draft.payloads.map((p) => p.adapterId).filter((id): id is string => id !== null);
-  const adapterRows = adapterIds.length ? await db.select().from(adapters).where(inArray(adapters.id, adapterIds)) : [];
-  expect(model, `model ${draft.modelId}`).toBeDefined();
-  expect(mount, `mount ${draft.mountId}`).toBeDefined();
-  return { model, unit: unit ?? null, mount, adaptersById: Object.fromEntries(adapterRows.map((a) => [a.id, a])) };
-}
+const catalogueFor = (draft: SetupDraft): Promise<SetupCatalogue> => sharedCatalogueFor(database.db, draft);
 
 async function engineResultFor(draft: SetupDraft): Promise<BalanceResult> {
   return evaluateBalance(toBalanceInput(draft, await catalogueFor(draft)));
