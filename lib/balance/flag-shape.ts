@@ -191,11 +191,6 @@ export interface FlagBase<C extends FlagCode> {
   readonly params: FlagDetails[C]["params"];
   /** The payloads the flag is about, in input order, when it is about some. */
   readonly payloads?: readonly PayloadRef[];
-  /**
-   * The first of `payloads`.
-   * @deprecated read `payloads`: one flag may be about several identical payloads.
-   */
-  readonly payloadIndex?: number;
 }
 
 /** A flag before it is worded: everything lib/flag-messages.ts needs. */

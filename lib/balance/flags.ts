@@ -98,7 +98,6 @@ class EngineFlag {
   readonly figures: unknown;
   readonly params: unknown;
   readonly payloads: readonly PayloadRef[] | undefined;
-  readonly payloadIndex: number | undefined;
 
   constructor(code: FlagCode, level: FlagLevel, figures: unknown, params: unknown, payloads: readonly PayloadRef[] | undefined) {
     this.code = code;
@@ -107,7 +106,6 @@ class EngineFlag {
     this.params = params;
     const some = payloads !== undefined && payloads.length > 0;
     this.payloads = some ? payloads : undefined;
-    this.payloadIndex = some ? payloads[0].index : undefined;
   }
 
   get message(): string {
@@ -115,8 +113,8 @@ class EngineFlag {
   }
 
   toJSON(): Record<string, unknown> {
-    const { code, level, message, figures, params, payloads, payloadIndex } = this;
-    return payloads ? { code, level, message, figures, params, payloads, payloadIndex } : { code, level, message, figures, params };
+    const { code, level, message, figures, params, payloads } = this;
+    return payloads ? { code, level, message, figures, params, payloads } : { code, level, message, figures, params };
   }
 }
 
