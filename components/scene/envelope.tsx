@@ -25,11 +25,11 @@ export const Envelope = memo(function Envelope({ url }: { url: string }) {
   return (
     <group rotation-x={BODY_TO_THREE_ROTATION_X} name="envelope">
       <mesh geometry={hull} name="hull">
-        <meshStandardMaterial color={FABRIC} roughness={0.88} metalness={0.05} />
+        <meshLambertMaterial color={FABRIC} />
       </mesh>
       {fins ? (
         <mesh geometry={fins} name="fins">
-          <meshStandardMaterial color={FIN_FABRIC} roughness={0.9} metalness={0.02} />
+          <meshLambertMaterial color={FIN_FABRIC} />
         </mesh>
       ) : null}
       {seams ? (

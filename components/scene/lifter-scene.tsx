@@ -205,7 +205,15 @@ export function LifterScene({ summary = "3D view of the lifter", className = "",
         aria-label={summary}
         className="absolute inset-0 touch-none select-none"
       >
-        <Canvas frameloop="demand" dpr={[1, 2]} camera={{ position: scale.cameraPosition, fov: 35, near: 0.01, far: 40 * scale.lengthM }}>
+        <Canvas
+          frameloop="demand"
+          dpr={1}
+          gl={{ antialias: false }}
+          onCreated={({ gl }) => {
+            gl.debug.checkShaderErrors = process.env.NODE_ENV !== "production";
+          }}
+          camera={{ position: scale.cameraPosition, fov: 35, near: 0.01, far: 40 * scale.lengthM }}
+        >
           <Lifter {...props} wrapperRef={wrapperRef} controlsRef={controlsRef} />
         </Canvas>
       </div>

@@ -15,7 +15,7 @@ const size = (valueM: number): number => Math.max(MIN_SIZE_M, valueM);
 function PayloadShape({ payload }: { payload: ScenePayload }) {
   const outline = payload.level && payload.level !== "ok" ? FLAG_COLOURS[payload.level] : null;
   const edges = outline ? <Edges color={outline} lineWidth={2} threshold={20} /> : null;
-  const material = <meshStandardMaterial color={PAYLOAD} roughness={0.55} metalness={0.15} />;
+  const material = <meshLambertMaterial color={PAYLOAD} />;
   if (payload.shape === "box") {
     return (
       <mesh name={`payload:${payload.key}`}>
@@ -40,7 +40,7 @@ function PayloadShape({ payload }: { payload: ScenePayload }) {
   return (
     <mesh name={`payload:${payload.key}`}>
       <cylinderGeometry args={[radiusM, radiusM, size(payload.heightM), 8]} />
-      <meshStandardMaterial color={outline ?? PAYLOAD} roughness={0.4} metalness={0.4} />
+      <meshLambertMaterial color={outline ?? PAYLOAD} />
     </mesh>
   );
 }

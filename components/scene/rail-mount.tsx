@@ -51,7 +51,7 @@ export const Rail = memo(function Rail({ startX, endX, z, tabCount, unitM, onPoi
     <group name="rail" position={[centreX, z, 0]}>
       <mesh>
         <boxGeometry args={[lengthM, RAIL_HEIGHT * unitM, RAIL_WIDTH * unitM]} />
-        <meshStandardMaterial color={RAIL} roughness={0.6} metalness={0.2} />
+        <meshLambertMaterial color={RAIL} />
       </mesh>
       <mesh
         onPointerDown={onPointerDown}
@@ -65,7 +65,7 @@ export const Rail = memo(function Rail({ startX, endX, z, tabCount, unitM, onPoi
       {tabXs.map((x, i) => (
         <mesh key={i} position={[x - centreX, 0.5 * TAB_HEIGHT * unitM, 0]}>
           <boxGeometry args={[TAB_LENGTH * unitM, TAB_HEIGHT * unitM, 1.3 * RAIL_WIDTH * unitM]} />
-          <meshStandardMaterial color={RAIL_TAB} roughness={0.9} />
+          <meshLambertMaterial color={RAIL_TAB} />
         </mesh>
       ))}
     </group>
@@ -103,17 +103,15 @@ export const Mount = memo(function Mount({ x, z, unitM, payloads, selected, moun
       >
         <mesh ref={mountRef} position-y={carriageY} name="mount-carriage">
           <boxGeometry args={[CARRIAGE_LENGTH * unitM, CARRIAGE_HEIGHT * unitM, CARRIAGE_WIDTH * unitM]} />
-          <meshStandardMaterial
+          <meshLambertMaterial
             color={ACCENT}
-            roughness={0.45}
-            metalness={0.25}
             emissive={selected ? ACCENT : "#000000"}
             emissiveIntensity={selected ? 0.35 : 0}
           />
         </mesh>
         <mesh position-y={screwY}>
           <cylinderGeometry args={[SCREW_RADIUS * unitM, SCREW_RADIUS * unitM, SCREW_LENGTH * unitM, 12]} />
-          <meshStandardMaterial color={ACCENT_DARK} roughness={0.35} metalness={0.7} />
+          <meshLambertMaterial color={ACCENT_DARK} />
         </mesh>
       </group>
       <Payloads payloads={payloads} />

@@ -127,11 +127,11 @@ export const WindArrow = memo(function WindArrow({ windMS, label, tail, lengthUn
     <group position={tail} name="wind">
       <mesh rotation-z={-Math.PI / 2} position-x={(lengthM - headLengthM) / 2}>
         <cylinderGeometry args={[shaftRadiusM, shaftRadiusM, lengthM - headLengthM, 12]} />
-        <meshStandardMaterial color={ACCENT_DARK} roughness={0.6} />
+        <meshLambertMaterial color={ACCENT_DARK} />
       </mesh>
       <mesh rotation-z={-Math.PI / 2} position-x={lengthM - headLengthM / 2}>
         <coneGeometry args={[3 * shaftRadiusM, headLengthM, 16]} />
-        <meshStandardMaterial color={ACCENT_DARK} roughness={0.6} />
+        <meshLambertMaterial color={ACCENT_DARK} />
       </mesh>
       <sprite position={[lengthM / 2, 1.2 * labelHeightM, 0]} scale={[aspect * labelHeightM, labelHeightM, 1]}>
         <spriteMaterial map={texture} transparent depthWrite={false} toneMapped={false} />
