@@ -10,12 +10,10 @@ import { getSetupById } from "@/db/queries/setups";
 import type { InsightFilter } from "@/db/queries/insight";
 import * as t from "@/db/schema";
 import { seedDemo } from "@/db/seed";
-import { DEMO_ADAPTERS, DEMO_TEMPLATES } from "@/db/seed-data";
 import type { Viewer } from "@/lib/auth/access";
 import { getInsight } from "@/lib/server/insight";
 import { decideOnSetup } from "@/lib/server/review";
 import { createSetup, deleteSetup, duplicateSetup, saveSetup, submitSetup } from "@/lib/server/setups";
-import type { SetupDraft } from "@/lib/setups/setup-draft";
 import { insightFromBaseTables } from "./insight-reference";
 
 // Insight's roll-ups, kept by triggers, against a fresh GROUP BY over the base tables after writes
@@ -65,28 +63,6 @@ afterAll(() => {
   rmSync(dir, { recursive: true, force: true });
 });
 
-const payloadFrom = (templateId: string, mountThread: string): SetupDraft["payloads"][number] => {
-  const tpl = DEMO_TEMPLATES.find((x) => x.id === templateId)!;
-  return {
-    templateId: tpl.id,
-    name: tpl.name,
-    category: tpl.category,
-    massKg: tpl.massKg,
-    shape: tpl.shape,
-    lengthM: tpl.lengthM,
-    widthM: tpl.widthM,
-    heightM: tpl.heightM,
-    attachment: tpl.attachment,
-    adapterId:
-      tpl.attachment === mountThread
-        ? null
-        : (DEMO_ADAPTERS.find((a) => a.fromThread === tpl.attachment && a.toThread === mountThread)?.id ?? null),
-    dragAreaM2: tpl.dragAreaM2,
-    offsetXM: tpl.offsetXM,
-    offsetZM: tpl.offsetZM,
-  };
-};
-
 const rollupRows = async () =>
   (await client.execute("select * from insight_rollups order by measure, span, first_day, model_id, status, bin, label, level")).rows.map(
     (r) => ({ ...r }),
@@ -123,9 +99,7 @@ describe("Insight's roll-ups", () => {
     const id = created.data.id;
     await expectRollupsToMatchBaseTables();
 
-    // Another model, mount and payloads: every measure of the setup moves.
-    const mount = await db.select().from(t.mounts).where(eq(t.mounts.id, base.draft.mountId));
-    const thread = mount[0].thread;
+    // Another model, mount position and payloads: every measure of the setup moves.
     const ridge18 = (await db.select().from(t.envelopeModels).where(eq(t.envelopeModels.id, "mdl-ridge-18")))[0];
     const saved = await saveSetup({
       viewer: WREN,
@@ -136,7 +110,8 @@ describe("Insight's roll-ups", () => {
         modelId: ridge18.id,
         unitId: null,
         mountPositionXM: (ridge18.railStartXM + ridge18.railEndXM) / 2,
-        payloads: [payloadFrom("tpl-gps-tracker", thread), payloadFrom("tpl-gps-tracker", thread), payloadFrom("tpl-marker-light", thread)],
+        // The same payloads twice, the second time heavier: new mass bins, templates counted twice.
+        payloads: [...base.draft.payloads, ...base.draft.payloads.map((p) => ({ ...p, massKg: p.massKg + 0.07 }))],
       },
     });
     if (!saved.ok) throw new Error(saved.error.message);
