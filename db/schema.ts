@@ -509,6 +509,72 @@ export const auditLog = sqliteTable(
   (t) => [index("audit_log_entity_idx").on(t.entityType, t.entityId, t.createdAt)],
 );
 
+// ---------------------------------------------------------------- Insight's roll-ups and the queue's name search
+// Derived tables, kept in step with the setups by the triggers that db/derived-tables.ts installs.
+
+export const INSIGHT_MEASURES = [
+  "setups",
+  "setup_payload_mass",
+  "free_lift_ratio",
+  "rail_position",
+  "payload_mass",
+  "template_usage",
+  "flags",
+  "send_back_reasons",
+] as const;
+export const ROLLUP_SPANS = ["day", "month", "year"] as const;
+
+/**
+ * Insight's counts, one row per measure, span (a UTC day, and again in its calendar month and year),
+ * envelope model, status and bin/label/level of the measure: Insight sums the fewest rows that cover
+ * the days asked for instead of reading every setup. Unused key parts are 0 and '' (SQLite's NULLs
+ * would never conflict in the key).
+ */
+export const insightRollups = sqliteTable(
+  "insight_rollups",
+  {
+    measure: text("measure", { enum: INSIGHT_MEASURES }).notNull(),
+    span: text("span", { enum: ROLLUP_SPANS }).notNull(),
+    // Days since 1970-01-01 (UTC) of the day, or of the first day of the month or year.
+    firstDay: integer("first_day").notNull(),
+    modelId: text("model_id").notNull(),
+    status: text("status", { enum: SETUP_STATUSES }).notNull(),
+    bin: integer("bin").notNull().default(0),
+    label: text("label").notNull().default(""),
+    level: text("level").notNull().default(""),
+    count: integer("count").notNull(),
+  },
+  (t) => [
+    primaryKey({ columns: [t.measure, t.span, t.firstDay, t.modelId, t.status, t.bin, t.label, t.level] }),
+    // Whole months and years are read in the order they are grouped in, so no sort; covering.
+    index("insight_rollups_group_idx").on(t.measure, t.span, t.bin, t.label, t.level, t.firstDay, t.modelId, t.status, t.count),
+    // A count that falls to 0 is deleted at once; this index finds those rows without a scan.
+    index("insight_rollups_empty_idx")
+      .on(t.measure)
+      .where(sql`count = 0`),
+    check("insight_rollups_measure_check", inList("measure", INSIGHT_MEASURES)),
+    check("insight_rollups_span_check", inList("span", ROLLUP_SPANS)),
+  ],
+);
+
+/**
+ * A stable integer per setup for the full-text index of setup names (FTS5 keys rows by integer; a
+ * table's implicit rowid may change on VACUUM, this key does not).
+ */
+export const setupSearchKeys = sqliteTable("setup_search_keys", {
+  key: integer("key").primaryKey({ autoIncrement: true }),
+  setupId: text("setup_id")
+    .notNull()
+    .unique()
+    .references(() => setups.id, { onDelete: "cascade" }),
+});
+
+/** Which definition of the derived tables' triggers a database carries, so a changed one is rebuilt once. */
+export const derivedStamps = sqliteTable("derived_stamps", {
+  name: text("name").primaryKey(),
+  stamp: text("stamp").notNull(),
+});
+
 export type UserRow = typeof user.$inferSelect;
 export type EnvelopeModelRow = typeof envelopeModels.$inferSelect;
 export type EnvelopeUnitRow = typeof envelopeUnits.$inferSelect;

@@ -4,6 +4,7 @@ import { evaluateBalance, worstLevel } from "../lib/balance";
 import { toBalanceInput, type SetupCatalogue } from "../lib/setups/balance-input";
 import type { SetupDraft } from "../lib/setups/setup-draft";
 import { DEFAULT_WIND_MEASUREMENT, type SetupStatus } from "../lib/domain";
+import { loadThenRebuildDerivedTables } from "./derived-tables";
 import type { Database } from "./index";
 import * as t from "./schema";
 import { demoModelRow } from "./seed";
@@ -116,90 +117,103 @@ export async function seedLarge(
     await db.insert(t.user).values(batch).onConflictDoNothing();
   }
 
-  for (let start = 0; start < setups; start += 1000) {
-    const size = Math.min(1000, setups - start);
-    const setupRows: (typeof t.setups.$inferInsert)[] = [];
-    const payloadRows: (typeof t.setupPayloads.$inferInsert)[] = [];
-    const storedResults: (typeof t.setupResults.$inferInsert)[] = [];
-    const flagRows: (typeof t.setupFlags.$inferInsert)[] = [];
-    for (let i = 0; i < size; i += 1) {
-      const n = start + i;
-      const model = pick(models);
-      const mount = pick(DEMO_MOUNTS);
-      const templates = Array.from({ length: Math.floor(rand() * 3.2) }, () => pick(DEMO_TEMPLATES));
-      const draft: SetupDraft = {
-        name: `${pick(PLANS)} at the ${pick(PLACES)} ${n}`,
-        modelId: model.id,
-        unitId: null,
-        mountId: mount.id,
-        mountPositionXM: model.railStartXM + rand() * (model.railEndXM - model.railStartXM),
-        site: {
-          siteName: pick(PLACES),
-          altitudeM: Math.round(rand() * 1500),
-          temperatureC: Math.round(rand() * 30 - 5),
-          pressurePa: null,
-          windMS: Math.round(rand() * 90) / 10,
-          gustMS: Math.round(rand() * 140) / 10,
-          ...DEFAULT_WIND_MEASUREMENT,
-          relativeHumidity: null,
-        },
-        gas: { purity: 0.9 + Math.round(rand() * 10) / 100, superheatK: 0, fillFraction: 1 },
-        tether: { massPerMetreKg: 0.0012, lengthOutM: 20 + Math.round(rand() * 130), breakingLoadN: 900, diameterM: null },
-        targetHeightM: null,
-        payloads: templates.map((tpl) => ({
-          templateId: tpl.id,
-          name: tpl.name,
-          category: tpl.category,
-          massKg: tpl.massKg,
-          shape: tpl.shape,
-          lengthM: tpl.lengthM,
-          widthM: tpl.widthM,
-          heightM: tpl.heightM,
-          attachment: tpl.attachment,
-          adapterId:
-            tpl.attachment === mount.thread
-              ? null
-              : (DEMO_ADAPTERS.find((a) => a.fromThread === tpl.attachment && a.toThread === mount.thread)?.id ?? null),
-          dragAreaM2: tpl.dragAreaM2,
-          offsetXM: tpl.offsetXM,
-          offsetZM: tpl.offsetZM,
-        })),
-      };
-      const catalogue: SetupCatalogue = { model: model as SetupCatalogue["model"], unit: null, mount, adaptersById };
-      const result = evaluateBalance(toBalanceInput(draft, catalogue));
-      let roll = rand();
-      const status = STATUSES.find(([, share]) => (roll -= share) < 0)?.[0] ?? "draft";
-      const updatedAt = new Date(epoch - Math.floor(rand() * 730 * DAY_MS));
-      const id = `set-large-${String(n).padStart(6, "0")}`;
-      setupRows.push({
-        id,
-        ownerId: customerIds[Math.floor(rand() * customerIds.length)],
-        ...columnsFromDraft(draft),
-        ...summaryColumns(draft, result),
-        status,
-        version: 1 + Math.floor(rand() * 4),
-        worstFlag: worstLevel(result.flags),
-        cautionsAcknowledged: status !== "draft",
-        submittedAt: status === "draft" ? null : new Date(updatedAt.getTime() - DAY_MS),
-        createdAt: new Date(updatedAt.getTime() - 2 * DAY_MS),
-        updatedAt,
+  // Written with the derived triggers off and counted once at the end (db/derived-tables.ts).
+  await loadThenRebuildDerivedTables(db, () => writeSetups());
+  async function writeSetups() {
+    for (let start = 0; start < setups; start += 1000) {
+      const size = Math.min(1000, setups - start);
+      const setupRows: (typeof t.setups.$inferInsert)[] = [];
+      const payloadRows: (typeof t.setupPayloads.$inferInsert)[] = [];
+      const storedResults: (typeof t.setupResults.$inferInsert)[] = [];
+      const flagRows: (typeof t.setupFlags.$inferInsert)[] = [];
+      for (let i = 0; i < size; i += 1) {
+        const n = start + i;
+        const model = pick(models);
+        const mount = pick(DEMO_MOUNTS);
+        const templates = Array.from({ length: Math.floor(rand() * 3.2) }, () => pick(DEMO_TEMPLATES));
+        const draft: SetupDraft = {
+          name: `${pick(PLANS)} at the ${pick(PLACES)} ${n}`,
+          modelId: model.id,
+          unitId: null,
+          mountId: mount.id,
+          mountPositionXM: model.railStartXM + rand() * (model.railEndXM - model.railStartXM),
+          site: {
+            siteName: pick(PLACES),
+            altitudeM: Math.round(rand() * 1500),
+            temperatureC: Math.round(rand() * 30 - 5),
+            pressurePa: null,
+            windMS: Math.round(rand() * 90) / 10,
+            gustMS: Math.round(rand() * 140) / 10,
+            ...DEFAULT_WIND_MEASUREMENT,
+            relativeHumidity: null,
+          },
+          gas: { purity: 0.9 + Math.round(rand() * 10) / 100, superheatK: 0, fillFraction: 1 },
+          tether: { massPerMetreKg: 0.0012, lengthOutM: 20 + Math.round(rand() * 130), breakingLoadN: 900, diameterM: null },
+          targetHeightM: null,
+          payloads: templates.map((tpl) => ({
+            templateId: tpl.id,
+            name: tpl.name,
+            category: tpl.category,
+            massKg: tpl.massKg,
+            shape: tpl.shape,
+            lengthM: tpl.lengthM,
+            widthM: tpl.widthM,
+            heightM: tpl.heightM,
+            attachment: tpl.attachment,
+            adapterId:
+              tpl.attachment === mount.thread
+                ? null
+                : (DEMO_ADAPTERS.find((a) => a.fromThread === tpl.attachment && a.toThread === mount.thread)?.id ?? null),
+            dragAreaM2: tpl.dragAreaM2,
+            offsetXM: tpl.offsetXM,
+            offsetZM: tpl.offsetZM,
+          })),
+        };
+        const catalogue: SetupCatalogue = { model: model as SetupCatalogue["model"], unit: null, mount, adaptersById };
+        const result = evaluateBalance(toBalanceInput(draft, catalogue));
+        let roll = rand();
+        const status = STATUSES.find(([, share]) => (roll -= share) < 0)?.[0] ?? "draft";
+        const updatedAt = new Date(epoch - Math.floor(rand() * 730 * DAY_MS));
+        const id = `set-large-${String(n).padStart(6, "0")}`;
+        setupRows.push({
+          id,
+          ownerId: customerIds[Math.floor(rand() * customerIds.length)],
+          ...columnsFromDraft(draft),
+          ...summaryColumns(draft, result),
+          status,
+          version: 1 + Math.floor(rand() * 4),
+          worstFlag: worstLevel(result.flags),
+          cautionsAcknowledged: status !== "draft",
+          submittedAt: status === "draft" ? null : new Date(updatedAt.getTime() - DAY_MS),
+          createdAt: new Date(updatedAt.getTime() - 2 * DAY_MS),
+          updatedAt,
+        });
+        payloadRows.push(...payloadRowsFromDraft(id, draft, (k) => `${id}-p${k}`));
+        const stored = resultRows(id, result);
+        storedResults.push(stored.result);
+        flagRows.push(...stored.flags);
+      }
+      await db.transaction(async (tx) => {
+        // A statement binds at most 32,766 values (SQLite's default limit): a setup row has nearly 40.
+        for (let k = 0; k < setupRows.length; k += 500)
+          await tx
+            .insert(t.setups)
+            .values(setupRows.slice(k, k + 500))
+            .onConflictDoNothing();
+        for (let k = 0; k < payloadRows.length; k += 1000)
+          await tx
+            .insert(t.setupPayloads)
+            .values(payloadRows.slice(k, k + 1000))
+            .onConflictDoNothing();
+        await tx.insert(t.setupResults).values(storedResults).onConflictDoNothing();
+        for (let k = 0; k < flagRows.length; k += 2000)
+          await tx
+            .insert(t.setupFlags)
+            .values(flagRows.slice(k, k + 2000))
+            .onConflictDoNothing();
       });
-      payloadRows.push(...payloadRowsFromDraft(id, draft, (k) => `${id}-p${k}`));
-      const stored = resultRows(id, result);
-      storedResults.push(stored.result);
-      flagRows.push(...stored.flags);
+      onProgress?.(start + size);
     }
-    await db.transaction(async (tx) => {
-      await tx.insert(t.setups).values(setupRows).onConflictDoNothing();
-      if (payloadRows.length) await tx.insert(t.setupPayloads).values(payloadRows).onConflictDoNothing();
-      await tx.insert(t.setupResults).values(storedResults).onConflictDoNothing();
-      for (let k = 0; k < flagRows.length; k += 2000)
-        await tx
-          .insert(t.setupFlags)
-          .values(flagRows.slice(k, k + 2000))
-          .onConflictDoNothing();
-    });
-    onProgress?.(start + size);
   }
   // One of them can sign in (the demo password), so the benchmarks can open a long Setups list.
   const first = customerIds[0];

@@ -2,7 +2,8 @@ import "server-only";
 import { and, asc, count, desc, eq, inArray, isNotNull, or, sql, type SQL } from "drizzle-orm";
 import { randomUUID } from "node:crypto";
 import { getDb } from "@/db";
-import { comments, decisions, envelopeModels, setupReads, setups, user } from "@/db/schema";
+import { comments, decisions, envelopeModels, setupReads, setupSearchKeys, setups, user } from "@/db/schema";
+import { SEARCH_MIN_CHARS, SETUP_NAME_SEARCH } from "@/db/setup-search-sql";
 import type { DecisionOutcome, FlagLevel, QueueSort, ReviewReasonCode, Role, SetupStatus } from "@/lib/domain";
 import { nextStatus } from "@/lib/domain";
 import { recordAudit } from "./audit";
@@ -84,6 +85,18 @@ export interface QueueRow extends Omit<SetupHeader, "ownerId" | "ownerEmail" | "
 /** `%` and `_` typed by a person are letters, not wildcards. */
 const containing = (text: string) => `%${text.replace(/[\\%_]/g, (c) => `\\${c}`)}%`;
 
+/**
+ * The setups that can match a search of three characters or more, from indexes: names through the
+ * trigram index (setup_name_search), owners through their names. The LIKE above still decides each
+ * row, so this only spares reading the others; null for a shorter search, which reads them all.
+ */
+function searchCandidates(q: string, pattern: string): SQL | null {
+  if ([...q].length < SEARCH_MIN_CHARS) return null;
+  const phrase = `"${q.replace(/"/g, '""')}"`;
+  return sql`(select k.setup_id from ${sql.raw(SETUP_NAME_SEARCH)} f join ${setupSearchKeys} k on k.key = f.rowid where ${sql.raw(SETUP_NAME_SEARCH)} match ${phrase}
+    union select ${setups.id} from ${setups} where ${setups.ownerId} in (select ${user.id} from ${user} where ${user.name} like ${pattern} escape '\\'))`;
+}
+
 export async function listQueue(filter: QueueFilter): Promise<{ rows: QueueRow[]; total: number }> {
   const conditions: SQL[] = [filter.status ? eq(setups.status, filter.status) : isNotNull(setups.submittedAt)];
   if (filter.worst) conditions.push(eq(setups.worstFlag, filter.worst));
@@ -91,6 +104,8 @@ export async function listQueue(filter: QueueFilter): Promise<{ rows: QueueRow[]
   if (filter.q) {
     const pattern = containing(filter.q);
     conditions.push(or(sql`${setups.name} like ${pattern} escape '\\'`, sql`${user.name} like ${pattern} escape '\\'`) as SQL);
+    const candidates = searchCandidates(filter.q, pattern);
+    if (candidates) conditions.push(inArray(setups.id, candidates));
   }
   const where = and(...conditions);
   // "waiting" longest first is submittedAt oldest first: one index serves both.

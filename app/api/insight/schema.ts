@@ -1,27 +1,25 @@
 import { z } from "zod";
 
-const day = (name: string) =>
+const day = (name: string, role: string) =>
   z
     .string()
-    .regex(/^\d{4}-\d{2}-\d{2}$/, `${name} must be a date written yyyy-mm-dd`)
+    .regex(/^\d{4}-\d{2}-\d{2}$/, `${name} (${role}) must be a UTC date written yyyy-mm-dd`)
     .refine(
       (text) => !Number.isNaN(Date.parse(`${text}T00:00:00Z`)) && new Date(`${text}T00:00:00Z`).toISOString().startsWith(text),
       `${name} is not a calendar date`,
     )
     .optional();
 
-/** Insight's filters: an envelope model, and a range of days the setups were created in (both ends included). */
+/**
+ * Insight's filters: an envelope model, and the UTC days the setups were created in, whole days with
+ * both ends included (from=2026-11-01&to=2026-11-30 is all of November), as the Insight page sends them.
+ */
 export const insightQuerySchema = z
   .object({
     model: z.string().min(1).max(64).optional(),
-    from: day("from"),
-    to: day("to"),
+    from: day("from", "the first day, included"),
+    to: day("to", "the last day, included"),
   })
   .strict()
-  .refine((q) => !q.from || !q.to || q.from <= q.to, { message: "from must not be after to", path: ["from"] })
-  .transform((q) => ({
-    modelId: q.model ?? null,
-    from: q.from ? new Date(`${q.from}T00:00:00Z`) : null,
-    // the whole of the last day
-    to: q.to ? new Date(Date.parse(`${q.to}T00:00:00Z`) + 86_400_000) : null,
-  }));
+  .refine((q) => !q.from || !q.to || q.from <= q.to, { message: "from must not be after to (both days are included)", path: ["from"] })
+  .transform((q) => ({ modelId: q.model ?? null, from: q.from ?? null, to: q.to ?? null }));

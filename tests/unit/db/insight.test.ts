@@ -62,8 +62,8 @@ function reference(filter: InsightFilter) {
   const keep = rows.filter(
     (r) =>
       (!filter.modelId || r.model_id === filter.modelId) &&
-      (!filter.from || r.created_at >= filter.from.getTime()) &&
-      (!filter.to || r.created_at < filter.to.getTime()),
+      (!filter.from || r.created_at >= Date.parse(`${filter.from}T00:00:00Z`)) &&
+      (!filter.to || r.created_at < Date.parse(`${filter.to}T00:00:00Z`) + 86_400_000),
   );
   const ids = new Set(keep.map((r) => r.id));
   const items = payloads.filter((p) => ids.has(p.setup_id));
@@ -102,7 +102,10 @@ function reference(filter: InsightFilter) {
 const FILTERS: Array<[string, InsightFilter]> = [
   ["no filter", { modelId: null, from: null, to: null }],
   ["one model", { modelId: "mdl-ridge-11", from: null, to: null }],
-  ["a date range", { modelId: null, from: new Date(Date.UTC(2026, 10, 20)), to: new Date(Date.UTC(2026, 10, 29)) }],
+  ["a range of days", { modelId: null, from: "2026-11-20", to: "2026-11-28" }],
+  ["whole months and the days around them", { modelId: null, from: "2026-09-17", to: "2026-11-28" }],
+  ["one model from a day on", { modelId: "mdl-ridge-06", from: "2026-10-01", to: null }],
+  ["up to a day", { modelId: null, from: null, to: "2026-11-15" }],
 ];
 
 describe("getInsight", () => {
