@@ -111,33 +111,40 @@ export function AuthForm({ mode, next }: AuthFormProps) {
   return (
     <form onSubmit={onSubmit} noValidate className="space-y-4" data-testid={`${mode}-form`}>
       {mode === "sign-up" && (
-        <label className="block text-sm">
-          Name
-          <input name="name" autoComplete="name" className={field} {...described("name")} />
+        <div className="text-sm">
+          <label className="block">
+            Name
+            <input name="name" autoComplete="name" className={field} {...described("name")} />
+          </label>
           {fieldError("name")}
-        </label>
+        </div>
       )}
-      <label className="block text-sm">
-        E-mail
-        <input name="email" type="email" autoComplete="email" className={field} {...described("email")} />
+      <div className="text-sm">
+        <label className="block">
+          E-mail
+          <input name="email" type="email" autoComplete="email" className={field} {...described("email")} />
+        </label>
         {fieldError("email")}
-      </label>
-      <label className="block text-sm">
-        Password
-        <input
-          name="password"
-          type="password"
-          autoComplete={mode === "sign-up" ? "new-password" : "current-password"}
-          className={field}
-          {...described("password")}
-        />
+      </div>
+      {/* The hint and the error sit outside the label: they describe the field, they do not name it. */}
+      <div className="text-sm">
+        <label className="block">
+          Password
+          <input
+            name="password"
+            type="password"
+            autoComplete={mode === "sign-up" ? "new-password" : "current-password"}
+            className={field}
+            {...described("password")}
+          />
+        </label>
         {hintId && (
           <span className="block text-muted" id={hintId}>
             {PASSWORD_HINT}
           </span>
         )}
         {fieldError("password")}
-      </label>
+      </div>
       {serverError && (
         <p className="text-sm text-flag-stop" role="alert" data-testid="auth-error">
           {serverError}

@@ -56,19 +56,23 @@ export function ResetPasswordForm({ token }: ResetPasswordFormProps) {
   if (outcome === "expired") return <ExpiredLink />;
 
   // Each field points at its error (and the first at the rule), so both are read out with it.
-  const passwordInput = (name: keyof Values, hintId?: string) => {
+  const passwordInput = (name: keyof Values, label: string, hintId?: string) => {
     const errorId = `reset-${name}-error`;
     const described = [hintId, errors[name] ? errorId : undefined].filter(Boolean).join(" ");
+    // The hint and the error sit outside the label: they describe the field, they do not name it.
     return (
       <>
-        <input
-          {...register(name)}
-          type="password"
-          autoComplete="new-password"
-          className="mt-1 w-full rounded border border-hairline bg-white px-3 py-2"
-          aria-invalid={errors[name] ? true : undefined}
-          aria-describedby={described || undefined}
-        />
+        <label className="block">
+          {label}
+          <input
+            {...register(name)}
+            type="password"
+            autoComplete="new-password"
+            className="mt-1 w-full rounded border border-hairline bg-white px-3 py-2"
+            aria-invalid={errors[name] ? true : undefined}
+            aria-describedby={described || undefined}
+          />
+        </label>
         {hintId && (
           <span className="block text-muted" id={hintId}>
             {PASSWORD_HINT}
@@ -84,14 +88,8 @@ export function ResetPasswordForm({ token }: ResetPasswordFormProps) {
   };
   return (
     <form onSubmit={onSubmit} noValidate className="space-y-4" data-testid="reset-password-form">
-      <label className="block text-sm">
-        New password
-        {passwordInput("password", "reset-password-hint")}
-      </label>
-      <label className="block text-sm">
-        The same again
-        {passwordInput("confirm")}
-      </label>
+      <div className="text-sm">{passwordInput("password", "New password", "reset-password-hint")}</div>
+      <div className="text-sm">{passwordInput("confirm", "The same again")}</div>
       {serverError && (
         <p className="text-sm text-flag-stop" role="alert" data-testid="auth-error">
           {serverError}

@@ -51,13 +51,20 @@ export async function deleteEndedSignInWindows({ now }: { now: Date }): Promise<
   await getDb().delete(signInAttempts).where(lte(signInAttempts.windowEndsAt, now));
 }
 
-/** Takes back the attempt counted against each key: it turned out not to be a wrong password. */
+/**
+ * Takes back the attempt counted against each key: it turned out not to be a wrong password. A key
+ * left with no failures is deleted, so a window always starts at a wrong password, never at an
+ * attempt that was taken back (else a run of successes would age the window of later failures).
+ */
 export async function uncountSignInAttempt({ keys, now }: { keys: readonly string[]; now: Date }): Promise<void> {
   if (keys.length === 0) return;
-  await getDb()
+  const db = getDb();
+  const these = inArray(signInAttempts.key, [...keys]);
+  await db
     .update(signInAttempts)
     .set({ failures: sql`max(${signInAttempts.failures} - 1, 0)` })
-    .where(and(inArray(signInAttempts.key, [...keys]), gt(signInAttempts.windowEndsAt, now)));
+    .where(and(these, gt(signInAttempts.windowEndsAt, now)));
+  await db.delete(signInAttempts).where(and(these, lte(signInAttempts.failures, 0)));
 }
 
 /** Forgets a key's failures (an account after a successful sign-in or a password reset). */

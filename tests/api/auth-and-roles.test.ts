@@ -64,6 +64,32 @@ describe("POST /api/auth/sign-up/email and /sign-in/email", () => {
     expect((await new ApiClient(baseURL).signIn("mirela@trimrail.test", PASSWORD)).status).toBe(401);
   });
 
+  it("takes about as long for a registered address as for a new one", async () => {
+    const timings: Record<"registered" | "new", number[]> = { registered: [], new: [] };
+    const registered = [
+      "tobin@trimrail.test",
+      "kasper@trimrail.test",
+      "mirela@trimrail.test",
+      "orrin@trimrail.test",
+      "maker@trimrail.test",
+    ];
+    for (const email of registered) {
+      for (const [kind, address] of [
+        ["registered", email],
+        ["new", uniqueEmail("timing")],
+      ] as const) {
+        const started = performance.now();
+        const response = await requestSignUp(new ApiClient(baseURL), { name: "Tam Clockwell", email: address, password: PASSWORD });
+        timings[kind].push(performance.now() - started);
+        expect(response.status).toBe(200);
+      }
+    }
+    const median = (values: number[]) => [...values].sort((a, b) => a - b)[Math.floor(values.length / 2)];
+    console.info(`[sign-up] median ms: registered ${median(timings.registered).toFixed(0)}, new ${median(timings.new).toFixed(0)}`);
+    // Both hash the password (the bulk of the time); the new one also writes two rows.
+    expect(Math.abs(median(timings.registered) - median(timings.new))).toBeLessThan(150);
+  });
+
   it("refuses a wrong password with 401 and no session", async () => {
     const client = new ApiClient(baseURL);
     const response = await client.signIn("customer@trimrail.test", "not-the-password");

@@ -76,4 +76,12 @@ describe("the sign-in limit", () => {
     await attempt("192.0.2.200", "late@trimrail.test", "wrong-password", at(361));
     expect(await rowCount()).toBe(2);
   });
+  it("starts a window at the first wrong password, however long a run of successes came before", async () => {
+    const address = "198.51.100.40";
+    // 100 s of successes, longer than the 60 s window; then the limit's five failures just before
+    // a minute boundary of those successes, and one more just after it.
+    for (let i = 0; i < 50; i += 1) await attempt(address, "runner@trimrail.test", "signed-in", at(1000 + i * 2));
+    for (let i = 0; i < 5; i += 1) await attempt(address, `runner-${i}@trimrail.test`, "wrong-password", at(1115 + i));
+    expect((await attempt(address, "runner-last@trimrail.test", "wrong-password", at(1121))).allowed).toBe(false);
+  });
 });
