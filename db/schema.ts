@@ -117,6 +117,22 @@ export const rateLimit = sqliteTable("rate_limit", {
   lastRequest: integer("last_request").notNull(),
 });
 
+// ---------------------------------------------------------------- sign-in limit (lib/auth/sign-in-limit.ts)
+
+// Failed sign-ins per client address and per account, each in a fixed window from its first
+// failure. `key` is "address:<ip>" or "account:<sha-256 of the e-mail>"; an attempt in flight is
+// counted until its outcome is known, so parallel guesses cannot slip past the check together.
+// Rows whose window has ended are deleted, which keeps the table as small as the current window.
+export const signInAttempts = sqliteTable(
+  "sign_in_attempts",
+  {
+    key: text("key").primaryKey(),
+    failures: integer("failures").notNull(),
+    windowEndsAt: integer("window_ends_at", { mode: "timestamp_ms" }).notNull(),
+  },
+  (t) => [index("sign_in_attempts_window_ends_at_idx").on(t.windowEndsAt)],
+);
+
 // ---------------------------------------------------------------- catalogue (the maker's Workshop)
 
 export const envelopeModels = sqliteTable(
@@ -589,3 +605,4 @@ export type CommentRow = typeof comments.$inferSelect;
 export type DecisionRow = typeof decisions.$inferSelect;
 export type AttachmentRow = typeof attachments.$inferSelect;
 export type MailOutboxRow = typeof mailOutbox.$inferSelect;
+export type SignInAttemptRow = typeof signInAttempts.$inferSelect;

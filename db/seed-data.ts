@@ -5,7 +5,8 @@ import type { Attachment, PayloadCategory, PayloadShape, Role, SetupStatus, Thre
 // Every name here is made up; e-mail addresses use the reserved .test domain.
 // Payload offsets hang each item below the mount's carriage, which drops about 5 cm under the rail.
 
-export const DEMO_PASSWORD = "trimrail-demo";
+// Long enough and hard enough to guess for the password rule (lib/auth/password-strength.ts).
+export const DEMO_PASSWORD = "dune-lantern-47";
 
 export interface DemoUser {
   id: string;

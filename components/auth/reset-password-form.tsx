@@ -5,14 +5,14 @@ import { useState } from "react";
 import { useForm } from "react-hook-form";
 import { z } from "zod";
 import { resetPassword } from "./auth-requests";
-import { PASSWORD_MAX_LENGTH, PASSWORD_MIN_LENGTH } from "@/lib/auth/password-rule";
+import { PASSWORD_HINT, isPasswordErrorCode, passwordShapeProblem } from "@/lib/auth/password-rule";
 
 const schema = z
   .object({
-    password: z
-      .string()
-      .min(PASSWORD_MIN_LENGTH, `At least ${PASSWORD_MIN_LENGTH} characters.`)
-      .max(PASSWORD_MAX_LENGTH, `At most ${PASSWORD_MAX_LENGTH} characters.`),
+    password: z.string().superRefine((value, check) => {
+      const problem = passwordShapeProblem(value);
+      if (problem) check.addIssue({ code: "custom", message: problem.message });
+    }),
     confirm: z.string(),
   })
   .refine((v) => v.password === v.confirm, { path: ["confirm"], message: "The two passwords differ." });
@@ -28,6 +28,7 @@ export function ResetPasswordForm({ token }: ResetPasswordFormProps) {
   const {
     register,
     handleSubmit,
+    setError,
     formState: { errors, isSubmitting },
   } = useForm<Values>({ resolver: zodResolver(schema) });
 
@@ -36,6 +37,8 @@ export function ResetPasswordForm({ token }: ResetPasswordFormProps) {
     const error = await resetPassword({ newPassword: password, token });
     if (!error) return setOutcome("changed");
     if (error.code === "INVALID_TOKEN") return setOutcome("expired");
+    // The server's strength check (a common password, say) belongs next to the field it is about.
+    if (isPasswordErrorCode(error.code)) return setError("password", { message: error.message }, { shouldFocus: true });
     setServerError(error.status === 429 ? "Too many attempts. Wait a minute and try again." : error.message);
   });
 
@@ -52,27 +55,41 @@ export function ResetPasswordForm({ token }: ResetPasswordFormProps) {
   }
   if (outcome === "expired") return <ExpiredLink />;
 
-  const field = "mt-1 w-full rounded border border-hairline bg-white px-3 py-2";
+  // Each field points at its error (and the first at the rule), so both are read out with it.
+  const passwordInput = (name: keyof Values, label: string, hintId?: string) => {
+    const errorId = `reset-${name}-error`;
+    const described = [hintId, errors[name] ? errorId : undefined].filter(Boolean).join(" ");
+    // The hint and the error sit outside the label: they describe the field, they do not name it.
+    return (
+      <>
+        <label className="block">
+          {label}
+          <input
+            {...register(name)}
+            type="password"
+            autoComplete="new-password"
+            className="mt-1 w-full rounded border border-hairline bg-white px-3 py-2"
+            aria-invalid={errors[name] ? true : undefined}
+            aria-describedby={described || undefined}
+          />
+        </label>
+        {hintId && (
+          <span className="block text-muted" id={hintId}>
+            {PASSWORD_HINT}
+          </span>
+        )}
+        {errors[name] && (
+          <span className="text-flag-stop" role="alert" id={errorId}>
+            {errors[name].message}
+          </span>
+        )}
+      </>
+    );
+  };
   return (
     <form onSubmit={onSubmit} noValidate className="space-y-4" data-testid="reset-password-form">
-      <label className="block text-sm">
-        New password
-        <input {...register("password")} type="password" autoComplete="new-password" className={field} />
-        {errors.password && (
-          <span className="text-flag-stop" role="alert">
-            {errors.password.message}
-          </span>
-        )}
-      </label>
-      <label className="block text-sm">
-        The same again
-        <input {...register("confirm")} type="password" autoComplete="new-password" className={field} />
-        {errors.confirm && (
-          <span className="text-flag-stop" role="alert">
-            {errors.confirm.message}
-          </span>
-        )}
-      </label>
+      <div className="text-sm">{passwordInput("password", "New password", "reset-password-hint")}</div>
+      <div className="text-sm">{passwordInput("confirm", "The same again")}</div>
       {serverError && (
         <p className="text-sm text-flag-stop" role="alert" data-testid="auth-error">
           {serverError}

@@ -1,7 +1,8 @@
 import "server-only";
 import { enqueueMailNow } from "@/db/queries/mail";
 import { kickMailDelivery } from "./deliver";
-import { passwordResetMail, verifyAddressMail, type MailContent } from "./templates";
+import { appUrl } from "@/lib/server/app-url";
+import { passwordResetMail, signUpAttemptMail, verifyAddressMail, type MailContent } from "./templates";
 
 // better-auth's mail hooks (lib/auth/server.ts). They queue the message and return: the person's
 // request never waits for SMTP, and a failure to queue is logged, never turned into a failed
@@ -27,4 +28,13 @@ export async function sendPasswordResetMail({ user, url }: AuthMailInput): Promi
 
 export async function sendAddressVerificationMail({ user, url }: AuthMailInput): Promise<void> {
   await queue("verify-address", user.email, verifyAddressMail({ name: user.name, url }));
+}
+
+/** A sign-up with an address that has an account: tell its holder, and give the same answer. */
+export async function sendSignUpAttemptMail({ user }: { user: { email: string; name: string } }): Promise<void> {
+  await queue(
+    "sign-up-attempt",
+    user.email,
+    signUpAttemptMail({ name: user.name, signInUrl: appUrl("/sign-in"), resetUrl: appUrl("/forgot-password") }),
+  );
 }

@@ -14,10 +14,21 @@ const escapeHtml = (value: string): string =>
 
 const SIGN_OFF = "Trimrail — planning estimates only; follow local aviation rules and make a test flight on a safety line.";
 
-/** One layout for every message: a heading, paragraphs, an optional quote, and one link. */
+interface MailLink {
+  label: string;
+  url: string;
+}
+
+/** One layout for every message: a heading, paragraphs, an optional quote, and its links. */
 function render(
   subject: string,
-  { heading, paragraphs, quote, link }: { heading: string; paragraphs: string[]; quote?: string; link?: { label: string; url: string } },
+  {
+    heading,
+    paragraphs,
+    quote,
+    link,
+    links = link ? [link] : [],
+  }: { heading: string; paragraphs: string[]; quote?: string; link?: MailLink; links?: MailLink[] },
 ): MailContent {
   const text = [
     heading,
@@ -32,7 +43,7 @@ function render(
           "",
         ]
       : []),
-    ...(link ? [`${link.label}: ${link.url}`, ""] : []),
+    ...links.flatMap((l) => [`${l.label}: ${l.url}`, ""]),
     "--",
     SIGN_OFF,
   ].join("\n");
@@ -47,9 +58,7 @@ function render(
           `<blockquote style="margin:0 0 12px;padding:8px 12px;border-left:3px solid #1d7f7a;white-space:pre-wrap">${escapeHtml(quote)}</blockquote>`,
         ]
       : []),
-    ...(link
-      ? [`<p style="margin:0 0 12px"><a href="${escapeHtml(link.url)}" style="color:#176b66">${escapeHtml(link.label)}</a></p>`]
-      : []),
+    ...links.map((l) => `<p style="margin:0 0 12px"><a href="${escapeHtml(l.url)}" style="color:#176b66">${escapeHtml(l.label)}</a></p>`),
     `<p style="margin:16px 0 0;font-size:12px;color:#5f6670">${escapeHtml(SIGN_OFF)}</p>`,
     `</div></body></html>`,
   ].join("\n");
@@ -120,5 +129,20 @@ export function verifyAddressMail(f: { name: string; url: string }): MailContent
     heading: `Hello ${f.name}`,
     paragraphs: ["Confirm that this address is yours, so that review decisions and password resets reach you."],
     link: { label: "Confirm the address", url: f.url },
+  });
+}
+
+/** To the holder of an address someone tried to sign up with again: nothing changed. */
+export function signUpAttemptMail(f: { name: string; signInUrl: string; resetUrl: string }): MailContent {
+  return render("Someone tried to sign up with your address", {
+    heading: `Hello ${f.name}`,
+    paragraphs: [
+      "Someone just tried to create a Trimrail account with this e-mail address, which already has one. Nothing about your account has changed, and no new account was made.",
+      "If it was you, sign in instead; if you no longer know the password, choose a new one. If it was not you, you can ignore this message.",
+    ],
+    links: [
+      { label: "Sign in", url: f.signInUrl },
+      { label: "Choose a new password", url: f.resetUrl },
+    ],
   });
 }

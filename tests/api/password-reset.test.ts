@@ -2,6 +2,7 @@ import { describe, expect, inject, it } from "vitest";
 import { DEMO_PASSWORD } from "../../db/seed-data";
 import { ApiClient } from "../support/http";
 import { keptMailIds, linkIn, waitForMail } from "../support/mail";
+import { requestSignUp } from "../support/sign-up";
 
 // Password reset and address verification end to end: real HTTP to the running app, real SMTP to
 // its fake, the link read back from the kept .eml file.
@@ -88,12 +89,20 @@ describe("password reset through the captured mail", () => {
     expect(await keptMailIds(mailDir)).toEqual(before);
   });
 
-  it("refuses a new password shorter than the sign-up rule and keeps the old one", async () => {
+  it("refuses a new password that breaks the sign-up rule, says why, and keeps the old one", async () => {
     const before = await keptMailIds(mailDir);
     expect((await requestReset("tobin@trimrail.test")).status).toBe(200);
     const mail = await waitForMail({ dir: mailDir, to: "tobin@trimrail.test", except: before });
     const token = await tokenFromResetMail(mail.text);
-    expect((await resetPassword(token, "short")).status).toBe(400);
+    for (const [password, code] of [
+      ["short", "PASSWORD_TOO_SHORT"],
+      [" ".repeat(12), "PASSWORD_TOO_SHORT"],
+      ["password1234", "PASSWORD_TOO_WEAK"],
+    ]) {
+      const refused = await resetPassword(token, password);
+      expect(refused.status, password).toBe(400);
+      expect(((await refused.json()) as { code: string }).code, password).toBe(code);
+    }
     expect(await signInStatus("tobin@trimrail.test", DEMO_PASSWORD)).toBe(200);
   });
 
@@ -105,18 +114,12 @@ describe("password reset through the captured mail", () => {
 });
 
 describe("address verification through the captured mail", () => {
-  it("mails a new account a link that marks its address verified; signing in never waited for it", async () => {
+  it("mails a new account a link that confirms its address and signs it in; no session before that", async () => {
     const email = `verify-${Date.now()}@trimrail.test`;
     const client = new ApiClient(baseURL);
-    const signUp = await client.request("POST", "/api/auth/sign-up/email", {
-      name: "Ilse Varrow",
-      email,
-      password: "a-long-password",
-      callbackURL: "/setups",
-    });
+    const signUp = await requestSignUp(client, { name: "Ilse Varrow", email, password: "copper-kettle-orbit" });
     expect(signUp.status).toBe(200);
-    const unverified = (await (await client.get("/api/auth/get-session")).json()) as { user: { emailVerified: boolean } };
-    expect(unverified.user.emailVerified).toBe(false);
+    expect(await (await client.get("/api/auth/get-session")).json()).toBeNull();
 
     const mail = await waitForMail({ dir: mailDir, to: email, subject: /Confirm your e-mail address/ });
     const link = linkIn(mail.text, "/api/auth/verify-email");

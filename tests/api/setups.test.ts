@@ -5,6 +5,7 @@ import { toBalanceInput, type SetupCatalogue } from "@/lib/setups/balance-input"
 import type { SetupDraft } from "@/lib/setups/setup-draft";
 import { ApiClient } from "../support/http";
 import { catalogueFor as sharedCatalogueFor } from "../support/setup-fixtures";
+import { signUpAndVerify } from "../support/sign-up";
 
 const baseURL = inject("baseURL");
 const asJson = <T>(value: T): T => JSON.parse(JSON.stringify(value)) as T;
@@ -427,11 +428,14 @@ describe("deleting a setup", () => {
 
 describe("PUT /api/me/preferences", () => {
   it("returns 200 and the session shows imperial when a person picks imperial, and 400 for an unknown system", async () => {
-    const person = new ApiClient(baseURL);
     const email = `units-${Date.now()}-${Math.floor(Math.random() * 1e6)}@trimrail.test`;
-    expect(
-      (await person.request("POST", "/api/auth/sign-up/email", { name: "Ada Unitwell", email, password: "a-long-password" })).status,
-    ).toBe(200);
+    const person = await signUpAndVerify({
+      baseURL,
+      mailDir: inject("mailDir"),
+      name: "Ada Unitwell",
+      email,
+      password: "copper-kettle-orbit",
+    });
     const initial = (await (await person.get("/api/auth/get-session")).json()) as { user: { unitSystem: string } };
     expect(initial.user.unitSystem).toBe("metric");
 

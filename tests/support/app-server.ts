@@ -63,9 +63,12 @@ async function waitForServer(url: string, child: ChildProcess, timeoutMs: number
 export async function startAppServer({
   build,
   databaseUrl: existingDatabaseUrl,
+  env: extraEnv = {},
 }: {
   build: boolean;
   databaseUrl?: string;
+  /** More variables for the server, e.g. the sign-in limit's figures for a test of its own. */
+  env?: Record<string, string>;
 }): Promise<AppServer> {
   const dir = mkdtempSync(path.join(os.tmpdir(), "trimrail-app-"));
   // A benchmark brings its own (large) database; the tests get a fresh one with the demo.
@@ -95,6 +98,7 @@ export async function startAppServer({
     BETTER_AUTH_URL: baseURL,
     NEXT_TELEMETRY_DISABLED: "1",
     TRIMRAIL_DIST_DIR: TEST_DIST_DIR,
+    ...extraEnv,
   };
 
   if (build) {
