@@ -14,7 +14,7 @@ import type { PlannerData } from "./types";
 
 /**
  * The Planner: the 3D view as the main area, the balance panel beside it. On narrow screens the panel
- * falls below the inputs, so a summary of it comes first there.
+ * falls below the inputs, so a summary of it comes first there (on a phone's first screen).
  */
 export function Planner({ data }: { data: PlannerData }) {
   return (
@@ -23,8 +23,8 @@ export function Planner({ data }: { data: PlannerData }) {
         <PlannerToolbar />
         <div className="grid gap-4 lg:grid-cols-[minmax(0,1fr)_24rem]">
           <div className="space-y-4">
-            <PlannerScene />
             <BalanceSummary />
+            <PlannerScene />
             <MountControls />
             <LifterSection />
             <SiteSection />
