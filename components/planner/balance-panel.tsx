@@ -81,7 +81,7 @@ export function BalancePanel() {
   const direction = Math.abs(dxM) < 0.0005 ? "in line with" : dxM > 0 ? "aft of" : "forward of";
 
   return (
-    <section aria-label="Balance" className="space-y-4" data-testid="balance-panel">
+    <section id="balance" aria-label="Balance" className="space-y-4" data-testid="balance-panel">
       <div className="panel p-4">
         <h2 className="text-lg">Lift</h2>
         <dl className="mt-2">

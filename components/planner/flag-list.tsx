@@ -7,10 +7,18 @@ import { FlagIcon } from "@/components/ui/flag-badge";
 const ORDER = { stop: 0, caution: 1, ok: 2 } as const;
 
 /** Every flag with its icon, its word and its plain message in the reader's units; the worst first. */
-export function FlagList({ flags, unitSystem = "metric" }: { flags: readonly Flag[]; unitSystem?: UnitSystem }) {
+export function FlagList({
+  flags,
+  unitSystem = "metric",
+  testId = "flag-list",
+}: {
+  flags: readonly Flag[];
+  unitSystem?: UnitSystem;
+  testId?: string;
+}) {
   const sorted = [...flags].sort((a, b) => ORDER[a.level] - ORDER[b.level]);
   return (
-    <ul className="space-y-1.5" data-testid="flag-list">
+    <ul className="space-y-1.5" data-testid={testId}>
       {sorted.map((flag, i) => (
         <li
           key={`${flag.code}-${flag.payloads?.map((p) => p.index).join(".") ?? ""}-${i}`}

@@ -2,6 +2,7 @@
 import { formatQuantity } from "@/lib/units";
 import { usePlanner, usePlannerActions } from "./planner-context";
 import { Section } from "./section";
+import { SetupNameInput } from "./setup-name-input";
 import { isOffered, type PlannerUnit } from "./types";
 
 const RETIRED = " (retired: kept for this setup)";
@@ -19,26 +20,13 @@ export function LifterSection() {
   const modelId = usePlanner((s) => s.draft.modelId);
   const unitId = usePlanner((s) => s.draft.unitId);
   const mountId = usePlanner((s) => s.draft.mountId);
-  const name = usePlanner((s) => s.draft.name);
   const unitSystem = usePlanner((s) => s.unitSystem);
   const actions = usePlannerActions();
   const units = catalogue.units.filter((u) => u.modelId === modelId && isOffered(u, u.id === unitId));
   return (
     <Section title="Lifter" testId="section-lifter">
       <div className="grid gap-3 sm:grid-cols-2">
-        <label className="block text-sm text-muted sm:col-span-2">
-          Setup name
-          <input
-            className={select}
-            defaultValue={name}
-            maxLength={120}
-            onBlur={(e) => {
-              const value = e.target.value.trim();
-              if (value) actions.setName(value);
-              else e.target.value = name;
-            }}
-          />
-        </label>
+        <SetupNameInput className={select} />
         <label className="block text-sm text-muted">
           Envelope model
           <select className={select} value={modelId} onChange={(e) => actions.setModel(e.target.value)} data-testid="model-select">

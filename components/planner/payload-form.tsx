@@ -5,23 +5,34 @@ import { useForm } from "react-hook-form";
 import { z } from "zod";
 import { ATTACHMENTS, PAYLOAD_CATEGORIES, PAYLOAD_SHAPES, type UnitSystem } from "@/lib/domain";
 import { setupPayloadDraftSchema, type SetupPayloadDraft } from "@/lib/setups/setup-draft";
+import { parseNumber } from "@/lib/parse-number";
 import { fromDisplay, toDisplay, unitOf } from "@/lib/units";
 import type { PlannerAdapter } from "./types";
 
 // The form holds figures in the person's units; they become SI (and pass the setup schema) on submit.
+/** A typed figure read the one way every number field reads it (a decimal point or comma, never a guess). */
+const figure = () =>
+  z.string().transform((text, context) => {
+    const parsed = parseNumber(text);
+    if (parsed.ok) return parsed.value;
+    context.addIssue({ code: "custom", message: parsed.message });
+    return z.NEVER;
+  });
+const positive = () => figure().pipe(z.number().positive("Must be more than 0."));
+
 const displaySchema = z.object({
   name: z.string().trim().min(1, "Give it a name.").max(120, "At most 120 characters."),
   category: z.enum(PAYLOAD_CATEGORIES),
   shape: z.enum(PAYLOAD_SHAPES),
-  mass: z.coerce.number<string>("Enter a number.").positive("Must be more than 0."),
-  length: z.coerce.number<string>("Enter a number.").positive("Must be more than 0."),
-  width: z.coerce.number<string>("Enter a number.").positive("Must be more than 0."),
-  height: z.coerce.number<string>("Enter a number.").positive("Must be more than 0."),
+  mass: positive(),
+  length: positive(),
+  width: positive(),
+  height: positive(),
   attachment: z.enum(ATTACHMENTS),
   adapterId: z.string(),
-  offsetX: z.coerce.number<string>("Enter a number."),
-  offsetZ: z.coerce.number<string>("Enter a number."),
-  dragArea: z.coerce.number<string>("Enter a number.").min(0, "Cannot be negative."),
+  offsetX: figure(),
+  offsetZ: figure(),
+  dragArea: figure().pipe(z.number().min(0, "Cannot be negative.")),
 });
 type DisplayValues = z.input<typeof displaySchema>;
 

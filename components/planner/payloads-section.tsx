@@ -1,9 +1,9 @@
 "use client";
 import dynamic from "next/dynamic";
-import { useRef, useState } from "react";
+import { useEffect, useRef, useState } from "react";
 import { formatQuantity } from "@/lib/units";
 import type { SetupPayloadDraft } from "@/lib/setups/setup-draft";
-import { usePlanner, usePlannerActions } from "./planner-context";
+import { usePlanner, usePlannerActions, usePlannerStoreApi } from "./planner-context";
 import { Section } from "./section";
 import { isOffered } from "./types";
 
@@ -35,10 +35,25 @@ const BLANK_PAYLOAD: SetupPayloadDraft = {
   offsetZM: -0.075,
 };
 
+/**
+ * How long the offer to undo a Remove stays when nothing else is edited: long enough to notice and
+ * reach it by keyboard or screen reader (WCAG 2.2.1 asks for time enough), short enough not to linger.
+ */
+export const UNDO_OFFER_MS = 60_000;
+
+/** A Remove that can still be undone: the payload, its place, and the draft right after it went. */
+interface Removed {
+  payload: SetupPayloadDraft;
+  index: number;
+  draftAfter: unknown;
+}
+
 type Editing = { mode: "add"; initial: SetupPayloadDraft } | { mode: "edit"; index: number } | null;
 
 export function PayloadsSection() {
-  const payloads = usePlanner((s) => s.draft.payloads);
+  const draft = usePlanner((s) => s.draft);
+  const payloads = draft.payloads;
+  const store = usePlannerStoreApi();
   const catalogue = usePlanner((s) => s.catalogue);
   const units = usePlanner((s) => s.unitSystem);
   const actions = usePlannerActions();
@@ -50,6 +65,33 @@ export function PayloadsSection() {
   // After Apply, Add payload or Remove the button pressed is gone: focus goes to the list instead of the page body.
   const listRef = useRef<HTMLUListElement>(null);
   const focusList = () => listRef.current?.focus();
+
+  const [removed, setRemoved] = useState<Removed | null>(null);
+  const undoRef = useRef<HTMLButtonElement>(null);
+  const remove = (index: number) => {
+    const payload = actions.removePayload(index);
+    if (payload) setRemoved({ payload, index, draftAfter: store.getState().draft });
+  };
+  // Focus goes to the offer as it appears: the Remove button pressed is gone.
+  useEffect(() => {
+    if (removed) undoRef.current?.focus();
+  }, [removed]);
+  // The offer lasts until the next edit of the setup (any new draft), or the timeout.
+  const offer = removed && draft === removed.draftAfter ? removed : null;
+  useEffect(() => {
+    if (!removed) return;
+    const timer = setTimeout(() => {
+      if (document.activeElement === undoRef.current) focusList();
+      setRemoved(null);
+    }, UNDO_OFFER_MS);
+    return () => clearTimeout(timer);
+  }, [removed]);
+  const undo = () => {
+    if (!offer) return;
+    actions.insertPayload(offer.index, offer.payload);
+    setRemoved(null);
+    focusList();
+  };
 
   const addTemplate = () => {
     const tpl = templates.find((t) => t.id === templateId);
@@ -80,15 +122,7 @@ export function PayloadsSection() {
                 >
                   Edit
                 </button>
-                <button
-                  type="button"
-                  className="text-flag-stop underline"
-                  onClick={() => {
-                    actions.removePayload(i);
-                    focusList();
-                  }}
-                  aria-label={`Remove ${p.name}`}
-                >
+                <button type="button" className="text-flag-stop underline" onClick={() => remove(i)} aria-label={`Remove ${p.name}`}>
                   Remove
                 </button>
               </span>
@@ -111,6 +145,17 @@ export function PayloadsSection() {
         ))}
         {payloads.length === 0 && <li className="py-2 text-sm text-muted">No payloads yet: the mount hangs empty.</li>}
       </ul>
+      {/* A live region present from the start, so that the words are announced when they appear. */}
+      <div role="status" className="text-sm" data-testid="payload-undo">
+        {offer && (
+          <p className="mt-2 flex flex-wrap items-center gap-2 rounded border border-hairline bg-paper px-3 py-1.5">
+            Removed {offer.payload.name}.
+            <button ref={undoRef} type="button" className="font-medium text-accent underline" onClick={undo} data-testid="undo-remove">
+              Undo
+            </button>
+          </p>
+        )}
+      </div>
       <div className="mt-3 flex flex-wrap items-end gap-2">
         <label className="text-sm text-muted">
           From the catalogue

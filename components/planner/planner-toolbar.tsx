@@ -4,6 +4,7 @@ import { useRouter } from "next/navigation";
 import { useEffect, useRef, useState } from "react";
 import { worstLevel } from "@/lib/balance";
 import { FlagBadge } from "@/components/ui/flag-badge";
+import { focusField, inPageOrder, type FieldIssue } from "@/components/ui/field-issues";
 import { ApiError, savePreferencesRequest, saveSetupRequest, submitSetupRequest } from "@/lib/client/api";
 import { usePlanner, usePlannerActions, usePlannerStoreApi } from "./planner-context";
 
@@ -14,6 +15,14 @@ const STATUS_WORDS = {
   approved: "approved",
 } as const;
 
+interface Message {
+  kind: "ok" | "error";
+  text: string;
+  conflict?: boolean;
+  /** The fields that keep Save or Submit from going ahead. */
+  fields?: FieldIssue[];
+}
+
 export function PlannerToolbar() {
   const store = usePlannerStoreApi();
   const actions = usePlannerActions();
@@ -21,17 +30,32 @@ export function PlannerToolbar() {
   const name = usePlanner((s) => s.draft.name);
   const status = usePlanner((s) => s.status);
   const version = usePlanner((s) => s.version);
-  const dirty = usePlanner((s) => s.draft !== s.savedDraft);
+  const dirty = usePlanner((s) => s.dirty);
   const worst = usePlanner((s) => worstLevel(s.result.flags));
   const unitSystem = usePlanner((s) => s.unitSystem);
+  const fieldIssues = usePlanner((s) => s.fieldIssues);
   const router = useRouter();
   const [acknowledged, setAcknowledged] = useState(false);
-  const [message, setMessage] = useState<{ kind: "ok" | "error"; text: string; conflict?: boolean } | null>(null);
-  // After Save or Submit, focus goes to the result rather than falling to the page body.
+  const [message, setMessage] = useState<Message | null>(null);
+  // After Save or Submit, focus goes to the result rather than falling to the page body (a refusal
+  // for bad fields sends it to the first of them instead).
   const messageRef = useRef<HTMLParagraphElement>(null);
   useEffect(() => {
-    if (message) messageRef.current?.focus();
+    if (message && !message.fields) messageRef.current?.focus();
   }, [message]);
+
+  /** Refuses (naming the fields, sending nothing) while any field shows an error. */
+  const refusedForFields = (what: "saved" | "submitted"): boolean => {
+    const issues = inPageOrder(Object.values(store.getState().fieldIssues));
+    if (issues.length === 0) return false;
+    setMessage({
+      kind: "error",
+      text: `Nothing was ${what}. Fix ${issues.length === 1 ? "this field" : "these fields"} first:`,
+      fields: issues,
+    });
+    focusField(issues[0].id);
+    return true;
+  };
 
   const report = (error: unknown) =>
     setMessage({
@@ -85,6 +109,10 @@ export function PlannerToolbar() {
             ? "Acknowledge the caution flags to submit."
             : null;
 
+  // A refusal names only the fields still wrong, and goes once they are all put right.
+  const stillWrong = message?.fields?.filter((field) => field.id in fieldIssues);
+  const shown = message && stillWrong?.length !== 0 ? { ...message, fields: stillWrong } : null;
+
   return (
     <div className="panel flex flex-wrap items-center gap-3 p-3" data-testid="planner-toolbar">
       <div className="mr-auto">
@@ -121,7 +149,9 @@ export function PlannerToolbar() {
       </fieldset>
       <button
         type="button"
-        onClick={() => save.mutate()}
+        onClick={() => {
+          if (!refusedForFields("saved")) save.mutate();
+        }}
         disabled={save.isPending}
         className="rounded bg-accent px-4 py-1.5 font-medium text-white disabled:opacity-60"
         data-testid="save-setup"
@@ -142,7 +172,9 @@ export function PlannerToolbar() {
         )}
         <button
           type="button"
-          onClick={() => submit.mutate()}
+          onClick={() => {
+            if (!refusedForFields("submitted")) submit.mutate();
+          }}
           disabled={!canSubmit || submit.isPending}
           className="rounded border border-accent px-4 py-1.5 font-medium text-accent disabled:cursor-not-allowed disabled:opacity-50"
           data-testid="submit-setup"
@@ -161,16 +193,31 @@ export function PlannerToolbar() {
           {reopensHint}
         </p>
       )}
-      {message && (
+      {shown && (
         <p
           ref={messageRef}
           tabIndex={-1}
-          role={message.kind === "error" ? "alert" : "status"}
-          className={`basis-full text-sm ${message.kind === "error" ? "text-flag-stop" : "text-flag-ok"}`}
+          role={shown.kind === "error" ? "alert" : "status"}
+          className={`basis-full text-sm ${shown.kind === "error" ? "text-flag-stop" : "text-flag-ok"}`}
           data-testid="save-message"
         >
-          {message.text}
-          {message.conflict && (
+          {shown.text}
+          {shown.fields?.map((field, i) => (
+            <span key={field.id}>
+              {i > 0 ? "," : ""}{" "}
+              <button
+                type="button"
+                className="underline"
+                title={field.message}
+                onClick={() => focusField(field.id)}
+                data-testid="bad-field"
+              >
+                {field.label}
+              </button>
+            </span>
+          ))}
+          {shown.fields && "."}
+          {shown.conflict && (
             <button type="button" className="ml-2 underline" onClick={() => window.location.reload()} data-testid="load-saved-version">
               Load the saved version
             </button>

@@ -1,6 +1,8 @@
 "use client";
 import { DEFAULT_TETHER, DEFAULT_WIND_MEASUREMENT, INPUT_LIMITS as L, MAX_NAME_LENGTH } from "@/lib/domain";
 import { usePlanner, usePlannerActions } from "./planner-context";
+import { NumberInput } from "@/components/ui/number-input";
+import type { Quantity } from "@/lib/units";
 import { QuantityInput } from "./quantity-input";
 import { Section } from "./section";
 
@@ -67,64 +69,61 @@ function WindMeasurement() {
         </select>
       </label>
       {shear === "other" && (
-        <label className="block text-sm text-muted">
-          Power of height
-          <input
-            type="number"
-            step="0.01"
-            min={L.windShearExponent.min}
-            max={L.windShearExponent.max}
-            defaultValue={Number(site.windShearExponent.toFixed(3))}
-            data-testid="wind-shear-input"
-            className="figure mt-0.5 w-24 rounded border border-hairline bg-white px-2 py-1"
-            onBlur={(e) => {
-              const v = Number(e.target.value);
-              if (Number.isFinite(v) && v >= L.windShearExponent.min && v <= L.windShearExponent.max) setSite({ windShearExponent: v });
-              else e.target.value = String(Number(site.windShearExponent.toFixed(3)));
-            }}
-          />
-        </label>
+        <NumberInput
+          label="Power of height"
+          value={site.windShearExponent}
+          decimals={3}
+          min={L.windShearExponent.min}
+          max={L.windShearExponent.max}
+          onCommit={(v) => v !== null && setSite({ windShearExponent: v })}
+          testId="wind-shear-input"
+        />
       )}
     </>
   );
 }
 
-/** Relative humidity in percent; empty is dry air (humid air is lighter and lifts less). */
-function HumidityInput() {
-  const humidity = usePlanner((s) => s.draft.site.relativeHumidity);
+interface SiteFigureSpec {
+  key: "altitudeM" | "temperatureC" | "windMS" | "gustMS" | "relativeHumidity";
+  label: string;
+  quantity: Quantity;
+  testId: string;
+  /** What an empty field means, when it may be empty. */
+  placeholder?: string;
+}
+
+const SITE_FIGURES: readonly SiteFigureSpec[] = [
+  { key: "altitudeM", label: "Altitude above sea level", quantity: "length", testId: "altitude-input" },
+  { key: "temperatureC", label: "Air temperature", quantity: "temperature", testId: "temperature-input", placeholder: "standard" },
+  { key: "windMS", label: "Wind", quantity: "speed", testId: "wind-input" },
+  { key: "gustMS", label: "Gusts", quantity: "speed", testId: "gust-input", placeholder: "none" },
+  // Empty is dry air (humid air is lighter and lifts less).
+  { key: "relativeHumidity", label: "Relative humidity", quantity: "ratio", testId: "humidity-input", placeholder: "dry" },
+];
+
+function SiteFigure({ figure }: { figure: SiteFigureSpec }) {
+  const valueSI = usePlanner((s) => s.draft.site[figure.key]);
+  const units = usePlanner((s) => s.unitSystem);
   const { setSite } = usePlannerActions();
-  const shown = humidity === null ? "" : String(Number((humidity * 100).toFixed(1)));
+  const optional = figure.placeholder !== undefined;
   return (
-    <label className="block text-sm text-muted">
-      Relative humidity
-      <span className="mt-0.5 flex items-center gap-1">
-        <input
-          type="number"
-          step="1"
-          min={0}
-          max={100}
-          placeholder="dry"
-          key={shown}
-          defaultValue={shown}
-          data-testid="humidity-input"
-          className="figure w-24 rounded border border-hairline bg-white px-2 py-1"
-          onBlur={(e) => {
-            const raw = e.target.value.trim();
-            if (raw === "") return setSite({ relativeHumidity: null });
-            const v = Number(raw);
-            if (Number.isFinite(v) && v >= 0 && v <= 100) setSite({ relativeHumidity: v / 100 });
-            else e.target.value = shown;
-          }}
-        />
-        <span className="unit">%</span>
-      </span>
-    </label>
+    <QuantityInput
+      label={figure.label}
+      quantity={figure.quantity}
+      valueSI={valueSI}
+      unitSystem={units}
+      minSI={L[figure.key].min}
+      maxSI={L[figure.key].max}
+      optional={optional}
+      placeholder={figure.placeholder}
+      onCommit={(v) => (v !== null || optional) && setSite({ [figure.key]: v })}
+      testId={figure.testId}
+    />
   );
 }
 
 export function SiteSection() {
   const site = usePlanner((s) => s.draft.site);
-  const units = usePlanner((s) => s.unitSystem);
   const { setSite } = usePlannerActions();
   return (
     <Section title="Site" testId="section-site">
@@ -135,91 +134,47 @@ export function SiteSection() {
             className="mt-0.5 w-full rounded border border-hairline bg-white px-2 py-1"
             defaultValue={site.siteName}
             maxLength={MAX_NAME_LENGTH}
-            onBlur={(e) => setSite({ siteName: e.target.value.trim() })}
+            onBlur={(e) => {
+              const siteName = e.target.value.trim();
+              if (siteName !== site.siteName) setSite({ siteName });
+            }}
           />
         </label>
-        <QuantityInput
-          label="Altitude above sea level"
-          quantity="length"
-          valueSI={site.altitudeM}
-          unitSystem={units}
-          minSI={L.altitudeM.min}
-          maxSI={L.altitudeM.max}
-          onCommit={(v) => v !== null && setSite({ altitudeM: v })}
-          testId="altitude-input"
-        />
-        <QuantityInput
-          label="Air temperature"
-          quantity="temperature"
-          valueSI={site.temperatureC}
-          unitSystem={units}
-          minSI={L.temperatureC.min}
-          maxSI={L.temperatureC.max}
-          optional
-          placeholder="standard"
-          onCommit={(v) => setSite({ temperatureC: v })}
-          testId="temperature-input"
-        />
-        <QuantityInput
-          label="Wind"
-          quantity="speed"
-          valueSI={site.windMS}
-          unitSystem={units}
-          minSI={L.windMS.min}
-          maxSI={L.windMS.max}
-          onCommit={(v) => v !== null && setSite({ windMS: v })}
-          testId="wind-input"
-        />
-        <QuantityInput
-          label="Gusts"
-          quantity="speed"
-          valueSI={site.gustMS}
-          unitSystem={units}
-          minSI={L.gustMS.min}
-          maxSI={L.gustMS.max}
-          optional
-          placeholder="none"
-          onCommit={(v) => setSite({ gustMS: v })}
-          testId="gust-input"
-        />
+        {SITE_FIGURES.slice(0, 4).map((figure) => (
+          <SiteFigure key={figure.key} figure={figure} />
+        ))}
         <WindMeasurement />
-        <HumidityInput />
+        <SiteFigure figure={SITE_FIGURES[4]} />
       </div>
     </Section>
   );
 }
 
+const GAS_PERCENTAGES = [
+  { key: "purity", label: "Helium purity (rest is air)", testId: "purity-input" },
+  { key: "fillFraction", label: "Fill", testId: "fill-input" },
+] as const;
+
 export function GasSection() {
   const gas = usePlanner((s) => s.draft.gas);
   const units = usePlanner((s) => s.unitSystem);
   const { setGas } = usePlannerActions();
-  const percentField = (label: string, value: number, min: number, key: "purity" | "fillFraction", testId: string) => (
-    <label className="block text-sm text-muted">
-      {label}
-      <span className="mt-0.5 flex items-center gap-1">
-        <input
-          type="number"
-          step="0.5"
-          min={min * 100}
-          max={100}
-          defaultValue={Number((value * 100).toFixed(1))}
-          data-testid={testId}
-          className="figure w-24 rounded border border-hairline bg-white px-2 py-1"
-          onBlur={(e) => {
-            const v = Number(e.target.value);
-            if (Number.isFinite(v) && v >= min * 100 && v <= 100) setGas({ [key]: v / 100 });
-            else e.target.value = String(Number((value * 100).toFixed(1)));
-          }}
-        />
-        <span className="unit">%</span>
-      </span>
-    </label>
-  );
   return (
     <Section title="Gas" testId="section-gas" defaultOpen={false}>
       <div className="grid grid-cols-2 gap-3 sm:grid-cols-3">
-        {percentField("Helium purity (rest is air)", gas.purity, L.purity.min, "purity", "purity-input")}
-        {percentField("Fill", gas.fillFraction, L.fillFraction.min, "fillFraction", "fill-input")}
+        {GAS_PERCENTAGES.map(({ key, label, testId }) => (
+          <QuantityInput
+            key={key}
+            label={label}
+            quantity="ratio"
+            valueSI={gas[key]}
+            unitSystem={units}
+            minSI={L[key].min}
+            maxSI={L[key].max}
+            onCommit={(v) => v !== null && setGas({ [key]: v })}
+            testId={testId}
+          />
+        ))}
         <QuantityInput
           label="Superheat (gas warmer than air)"
           quantity="temperatureDifference"

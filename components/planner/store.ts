@@ -4,6 +4,8 @@ import { evaluateBalance, solveLevelTrimPositionX, type BalanceInput, type Balan
 import { formatQuantity } from "@/lib/units";
 import { toBalanceInput, type SetupCatalogue } from "@/lib/setups/balance-input";
 import type { LiftCheckDraft, SetupDraft, SetupPayloadDraft } from "@/lib/setups/setup-draft";
+import type { FieldIssue } from "@/components/ui/field-issues";
+import { sameValue } from "./same-draft";
 import type { PlannerCatalogue, PlannerData, PlannerModel, TrimCase } from "./types";
 
 const LEVEL_FAILURES: Record<LevelTrimFailure, string> = {
@@ -29,7 +31,12 @@ export interface PlannerActions {
   setTargetHeight: (heightM: number | null) => void;
   addPayload: (payload: SetupPayloadDraft) => void;
   updatePayload: (index: number, payload: SetupPayloadDraft) => void;
-  removePayload: (index: number) => void;
+  /** Takes a payload off; returns it (null: no payload there), so that it can be put back. */
+  removePayload: (index: number) => SetupPayloadDraft | null;
+  /** Puts a payload back at its place in the list (an undone Remove). */
+  insertPayload: (index: number, payload: SetupPayloadDraft) => void;
+  /** A field that shows an error (or no longer does): Save and Submit refuse while any does. */
+  reportFieldIssue: (id: string, issue: FieldIssue | null) => void;
   setTrimCase: (trimCase: TrimCase) => void;
   setUnitSystem: (unitSystem: UnitSystem) => void;
   markSaved: (saved: { version: number; status: SetupStatus }) => void;
@@ -38,6 +45,10 @@ export interface PlannerActions {
 export interface PlannerState extends PlannerData {
   /** The draft as last saved, to tell whether there is anything to save. */
   savedDraft: SetupDraft;
+  /** The draft holds something the saved one does not (typing a value back as it was is not a change). */
+  dirty: boolean;
+  /** The fields that show an error now, by element id. */
+  fieldIssues: Record<string, FieldIssue>;
   input: BalanceInput;
   result: BalanceResult;
   trimCase: TrimCase;
@@ -73,17 +84,22 @@ export function createPlannerStore(data: PlannerData): PlannerStore {
     // Every edit goes through here: the engine runs once per change, in the same tick.
     const withDraft = (draft: SetupDraft): Partial<PlannerState> => {
       const input = inputFor(draft, get().catalogue);
-      return { draft, input, result: evaluateBalance(input), lastEditAtMs: now() };
+      return { draft, input, result: evaluateBalance(input), lastEditAtMs: now(), dirty: !sameValue(draft, get().savedDraft) };
     };
-    // A read-only store (a reviewer's view) ignores every edit, so no control can change what is shown.
+    // A read-only store (a reviewer's view) ignores every edit, so no control can change what is shown;
+    // an edit that changes nothing is no edit (no new draft, no unsaved state).
     const edit = (change: (draft: SetupDraft) => SetupDraft) => {
-      if (!get().readOnly) set(withDraft(change(get().draft)));
+      if (get().readOnly) return;
+      const next = change(get().draft);
+      if (!sameValue(next, get().draft)) set(withDraft(next));
     };
 
     const initialInput = inputFor(data.draft, data.catalogue);
     return {
       ...data,
       savedDraft: data.draft,
+      dirty: false,
+      fieldIssues: {},
       input: initialInput,
       result: data.readOnly && data.storedResult ? data.storedResult : evaluateBalance(initialInput),
       trimCase: data.draft.site.windMS > 0 ? "wind" : "calm",
@@ -151,10 +167,23 @@ export function createPlannerStore(data: PlannerData): PlannerStore {
         setTargetHeight: (targetHeightM) => edit((d) => ({ ...d, targetHeightM })),
         addPayload: (payload) => edit((d) => ({ ...d, payloads: [...d.payloads, payload] })),
         updatePayload: (index, payload) => edit((d) => ({ ...d, payloads: d.payloads.map((p, i) => (i === index ? payload : p)) })),
-        removePayload: (index) => edit((d) => ({ ...d, payloads: d.payloads.filter((_, i) => i !== index) })),
+        removePayload: (index) => {
+          const removed = get().draft.payloads[index];
+          if (!removed || get().readOnly) return null;
+          edit((d) => ({ ...d, payloads: d.payloads.filter((_, i) => i !== index) }));
+          return removed;
+        },
+        insertPayload: (index, payload) =>
+          edit((d) => ({ ...d, payloads: [...d.payloads.slice(0, index), payload, ...d.payloads.slice(index)] })),
+        reportFieldIssue: (id, issue) => {
+          const issues = get().fieldIssues;
+          if (issue === null ? !(id in issues) : sameValue(issues[id], issue)) return;
+          const { [id]: _gone, ...rest } = issues;
+          set({ fieldIssues: issue === null ? rest : { ...rest, [id]: issue } });
+        },
         setTrimCase: (trimCase) => set({ trimCase }),
         setUnitSystem: (unitSystem) => set({ unitSystem }),
-        markSaved: ({ version, status }) => set({ version, status, savedDraft: get().draft }),
+        markSaved: ({ version, status }) => set({ version, status, savedDraft: get().draft, dirty: false }),
       },
     };
   });

@@ -2,6 +2,7 @@ import { zodResolver } from "@hookform/resolvers/zod";
 import type { FieldValues, Resolver } from "react-hook-form";
 import type { z } from "zod";
 import type { UnitSystem } from "@/lib/domain";
+import { parseNumber, type ParsedNumber } from "@/lib/parse-number";
 import { decimalsOf, fromDisplay, toDisplay, unitOf, type Quantity } from "@/lib/units";
 
 // The Workshop's forms hold figures as the maker types them, in the maker's units; the resolver
@@ -52,18 +53,24 @@ export function toFormValues(si: object, fields: readonly NumberFieldSpec[], sys
   return form;
 }
 
+/** The typed figure of a field as the one number parser reads it (numbers already, e.g. defaults, pass). */
+function readFigure(raw: unknown): ParsedNumber | null {
+  if (typeof raw === "number") return Number.isFinite(raw) ? { ok: true, value: raw } : null;
+  if (raw === undefined || raw === null) return null;
+  return parseNumber(String(raw));
+}
+
 /** The form's text → SI values; text that is no number stays as it is, so the schema says what is wrong. */
 export function toSiValues(form: Tree, fields: readonly NumberFieldSpec[], system: UnitSystem): Tree {
   const si = clone(form);
   for (const field of fields) {
     const raw = getAt(form, field.path);
-    const text = typeof raw === "string" ? raw.trim().replace(",", ".") : raw;
-    if (text === "" || text === undefined || text === null) {
+    const parsed = readFigure(raw);
+    if (parsed === null || (!parsed.ok && parsed.reason === "empty")) {
       setAt(si, field.path, field.empty === "null" ? null : field.empty === "undefined" ? undefined : Number.NaN);
       continue;
     }
-    const number = Number(text);
-    setAt(si, field.path, Number.isFinite(number) ? (field.quantity ? fromDisplay(field.quantity, number, system) : number) : text);
+    setAt(si, field.path, parsed.ok ? (field.quantity ? fromDisplay(field.quantity, parsed.value, system) : parsed.value) : raw);
   }
   return si;
 }
@@ -75,7 +82,17 @@ export function siResolver<S extends z.ZodType<FieldValues, FieldValues>>(
   system: UnitSystem,
 ): Resolver<FieldValues, unknown, z.output<S>> {
   const check = zodResolver(schema as never) as unknown as Resolver<FieldValues, unknown, z.output<S>>;
-  return (values, context, options) => check(toSiValues(values, fields, system), context, options);
+  return async (values, context, options) => {
+    const outcome = await check(toSiValues(values, fields, system), context, options);
+    // A figure the parser refused gets the parser's words ("could be read two ways"), not the schema's.
+    for (const field of fields) {
+      const parsed = readFigure(getAt(values, field.path));
+      if (parsed && !parsed.ok && parsed.reason !== "empty" && getAt(outcome.errors as Tree, field.path)) {
+        setAt(outcome.errors as Tree, field.path, { type: "custom", message: parsed.message });
+      }
+    }
+    return outcome;
+  };
 }
 
 /** "m", "ft", "%": the unit label of a field in the maker's system. */

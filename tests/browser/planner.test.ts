@@ -1,8 +1,7 @@
 import type { Browser, BrowserContext } from "playwright-core";
 import { afterAll, beforeAll, describe, expect, inject, it } from "vitest";
-import { DEMO_PASSWORD } from "../../db/seed-data";
-import { SignInPage, launchBrowser, newPersonContext, screenshot } from "../support/browser";
-import { PlannerPage } from "../support/planner-page";
+import { launchBrowser, screenshot } from "../support/browser";
+import { PlannerPage, signedInContext } from "../support/planner-page";
 
 const baseURL = inject("baseURL");
 // Tobin's windy-day relay plan: a seeded draft with one payload and no serial unit.
@@ -14,13 +13,7 @@ let context: BrowserContext;
 
 beforeAll(async () => {
   browser = await launchBrowser();
-  context = await newPersonContext(browser, baseURL);
-  const page = await context.newPage();
-  const signIn = new SignInPage(page);
-  await signIn.open();
-  await signIn.signIn(EMAIL, DEMO_PASSWORD);
-  await page.waitForURL(/\/setups$/);
-  await page.close();
+  context = await signedInContext(browser, baseURL, EMAIL);
 });
 afterAll(async () => {
   await browser?.close();
@@ -72,7 +65,9 @@ describe("the Planner in Chromium", () => {
     await planner.open(SETUP_ID);
     await planner.addCustomPayload({ name: "Lead test weight", massText: "2500" });
     await expect.poll(() => planner.hasStopFlag()).toBe(true);
-    await expect(planner.page.locator('[data-flag-code="free-lift"][data-flag-level="stop"]').count()).resolves.toBe(1);
+    await expect(
+      planner.page.getByTestId("flag-list").locator('[data-flag-code="free-lift"][data-flag-level="stop"]').count(),
+    ).resolves.toBe(1);
     await expect(planner.page.getByTestId("submit-setup").isDisabled()).resolves.toBe(true);
     await expect(planner.page.getByTestId("submit-hint").innerText()).resolves.toMatch(/stop flag blocks/);
     await screenshot(planner.page, "planner-4-stop-flag");

@@ -1,4 +1,6 @@
-import type { Page } from "playwright-core";
+import type { Browser, BrowserContext, Locator, Page } from "playwright-core";
+import { DEMO_PASSWORD } from "../../db/seed-data";
+import { SignInPage, newPersonContext } from "./browser";
 
 /** Page object for the Planner (/setups/:id). */
 export class PlannerPage {
@@ -96,4 +98,63 @@ export class PlannerPage {
   async version(): Promise<number> {
     return Number(await this.page.getByTestId("setup-version").innerText());
   }
+
+  /** Types into a field as a person would (select all, type) and leaves it with Tab. */
+  async typeInto(testId: string, text: string): Promise<void> {
+    const field = this.page.getByTestId(testId);
+    await field.click();
+    await field.press("ControlOrMeta+a");
+    if (text === "") await field.press("Backspace");
+    else await field.pressSequentially(text);
+    await field.press("Tab");
+  }
+
+  /** The message a field shows beside it (the element its aria-describedby names), or null. */
+  async fieldMessage(testId: string): Promise<string | null> {
+    const describedBy = await this.page.getByTestId(testId).getAttribute("aria-describedby");
+    if (!describedBy) return null;
+    return (await this.page.locator(`[id="${describedBy}"]`).innerText()).trim();
+  }
+
+  /** The data-testid of the element that has the focus. */
+  async focusedTestId(): Promise<string | null> {
+    return this.page.evaluate(() => document.activeElement?.getAttribute("data-testid") ?? null);
+  }
+
+  /** Opens a collapsed input section (Gas and Tether start closed). */
+  async openSection(testId: string): Promise<void> {
+    const section = this.page.getByTestId(testId);
+    if ((await section.getAttribute("open")) === null) await section.locator("summary").click();
+  }
+
+  /** Every request that would write the setup (PUT, POST) from now on, as "METHOD path". */
+  recordSetupWrites(): string[] {
+    const writes: string[] = [];
+    this.page.on("request", (request) => {
+      const url = new URL(request.url());
+      if (url.pathname.startsWith("/api/setups") && request.method() !== "GET") writes.push(`${request.method()} ${url.pathname}`);
+    });
+    return writes;
+  }
+
+  payloadNames(): Promise<string[]> {
+    return this.page.getByTestId("payload-item").locator("span.font-medium").allInnerTexts();
+  }
+
+  /** The narrow screens' balance summary and the first input section, to compare where they stand. */
+  summaryAndFirstInputs(): { summary: Locator; firstInputs: Locator } {
+    return { summary: this.page.getByTestId("balance-summary"), firstInputs: this.page.getByTestId("mount-controls") };
+  }
+}
+
+/** A browser context of its own for one customer, signed in through the sign-in page. */
+export async function signedInContext(browser: Browser, baseURL: string, email: string): Promise<BrowserContext> {
+  const context = await newPersonContext(browser, baseURL);
+  const page = await context.newPage();
+  const signIn = new SignInPage(page);
+  await signIn.open();
+  await signIn.signIn(email, DEMO_PASSWORD);
+  await page.waitForURL(/\/setups$/);
+  await page.close();
+  return context;
 }
