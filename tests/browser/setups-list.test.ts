@@ -61,7 +61,7 @@ describe("the Setups list in Chromium", () => {
     await setups.open();
 
     // Refused: back on the list, told why, the model kept; nothing was made.
-    await setups.createSetup("", "Ridge 1.1 (1.10 m³)");
+    await setups.createSetup("", "mdl-ridge-11");
     await setups.page.waitForURL(/\/setups\?problem=name&/);
     await expect(setups.problem.innerText()).resolves.toBe("Give the setup a name.");
     await expect(setups.page.getByLabel("Envelope model").inputValue()).resolves.toBe("mdl-ridge-11");
@@ -69,7 +69,7 @@ describe("the Setups list in Chromium", () => {
     expect(await setups.rows.count()).toBe(0);
     await screenshot(setups.page, "setups-no-js-refused");
 
-    await setups.createSetup("Scriptless mast", "Ridge 1.1 (1.10 m³)");
+    await setups.createSetup("Scriptless mast", "mdl-ridge-11");
     await setups.page.waitForURL(/\/setups\/[0-9a-f-]{36}$/);
     await expect(setups.page.getByTestId("setup-name").innerText()).resolves.toBe("Scriptless mast");
     await setups.open();
@@ -77,7 +77,7 @@ describe("the Setups list in Chromium", () => {
 
     // Signed out in the meantime: the post lands on the sign-in page, with the way back to the list.
     await context.clearCookies();
-    await setups.createSetup("After sign-out", "Ridge 0.6 (0.60 m³)");
+    await setups.createSetup("After sign-out", "mdl-ridge-06");
     await setups.page.waitForURL(/\/sign-in\?next=%2Fsetups$/);
     await setups.page.getByTestId("sign-in-form").waitFor();
     await context.close();

@@ -37,7 +37,7 @@ describe("the Setups list at 390 × 844", () => {
     const firstFacts = setups.rows.first().getByTestId("setup-facts");
     expect(await firstFacts.isVisible()).toBe(true);
     expect(await firstFacts.innerText()).toMatch(
-      /Envelope\s+Ridge 0\.\d[\s\S]*Status\s+draft[\s\S]*Worst flag[\s\S]*Last change\s+\d{4}-\d{2}-\d{2}/,
+      /Envelope\s+Ridge \d\.\d[\s\S]*Status\s+draft[\s\S]*Worst flag[\s\S]*Last change\s+\d{4}-\d{2}-\d{2}/,
     );
 
     for (let i = 0; i < PAGE_SIZE; i += 1) {
@@ -63,7 +63,7 @@ describe("the Setups list at 390 × 844", () => {
     const last = setups.rows.last();
     const lastName = await last.locator("td:first-child a").innerText();
     await setups.actionsOf(last).duplicate.click();
-    await expect.poll(() => setups.page.getByTestId("pager").innerText()).toMatch(/of 2 · 28 in all/);
+    await expect.poll(() => setups.page.getByTestId("pager").innerText()).toMatch(/of 2 · 27 in all/);
     const copy = setups.rows.filter({ hasText: `Copy of ${lastName}` });
     await expect.poll(() => copy.count()).toBe(1);
     await setups.actionsOf(copy).remove.click();
@@ -74,12 +74,12 @@ describe("the Setups list at 390 × 844", () => {
     expect(confirmBox!.x + confirmBox!.width).toBeLessThanOrEqual(PHONE.width);
     await screenshot(setups.page, "setups-list-390-confirm-delete");
     await copy.getByTestId("confirm-delete").click();
-    await expect.poll(() => setups.page.getByTestId("pager").innerText()).toMatch(/of 2 · 27 in all/);
+    await expect.poll(() => setups.page.getByTestId("pager").innerText()).toMatch(/of 2 · 26 in all/);
 
     // The pager's links work on the phone and the second page fits as well.
     await setups.page.getByTestId("pager").getByRole("link", { name: "Next" }).click();
     await setups.page.waitForURL(/\/setups\?page=2$/);
-    await expect.poll(() => setups.rows.count()).toBe(2);
+    await expect.poll(() => setups.rows.count()).toBe(1);
     expect(await pageOverflowPx(setups.page)).toBeLessThanOrEqual(0);
     await context.close();
   });

@@ -19,10 +19,11 @@ export class SetupsPage {
   }
 
   /** Fills the form and presses "New setup" (a real form post when JavaScript is off). */
-  async createSetup(name: string, modelLabel: string): Promise<void> {
+  /** `model`: an option's value (the model's id) or its label. */
+  async createSetup(name: string, model: string): Promise<void> {
     const form = this.page.getByTestId("new-setup-form");
     await form.getByLabel("Name").fill(name);
-    await form.getByLabel("Envelope model").selectOption({ label: modelLabel });
+    await form.getByLabel("Envelope model").selectOption(model);
     await this.page.getByTestId("new-setup").click();
   }
 
