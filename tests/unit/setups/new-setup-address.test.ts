@@ -4,12 +4,22 @@ import { UNKNOWN_MODEL_MESSAGE, newSetupProblemOf } from "@/components/setups/ne
 import { MAX_NAME_LENGTH } from "@/lib/domain";
 
 const query = (path: string) => Object.fromEntries(new URL(path, "http://app.test").searchParams);
-const badName = { code: "bad_request" as const, message: "The request body is not valid.", issues: [{ path: "name", message: "Give the setup a name." }] };
-const unknownModel = { code: "bad_request" as const, message: "That envelope model is not in the catalogue.", issues: [{ path: "modelId", message: "unknown envelope model" }] };
+const badName = {
+  code: "bad_request" as const,
+  message: "The request body is not valid.",
+  issues: [{ path: "name", message: "Give the setup a name." }],
+};
+const unknownModel = {
+  code: "bad_request" as const,
+  message: "That envelope model is not in the catalogue.",
+  issues: [{ path: "modelId", message: "unknown envelope model" }],
+};
 
 describe("the new-setup form's way back without JavaScript", () => {
   it("sends a stranger to sign-in with the way back to the list", () => {
-    expect(newSetupFailurePath({ code: "unauthenticated", message: "Sign in to continue." }, { name: "Kite" })).toBe("/sign-in?next=%2Fsetups");
+    expect(newSetupFailurePath({ code: "unauthenticated", message: "Sign in to continue." }, { name: "Kite" })).toBe(
+      "/sign-in?next=%2Fsetups",
+    );
   });
 
   it("returns to the list with the failing field and what was typed, and the page words the problem from the schema", () => {
@@ -32,7 +42,11 @@ describe("the new-setup form's way back without JavaScript", () => {
   it("points at the model for an unknown model or none, and at nothing for any other refusal", () => {
     expect(query(newSetupFailurePath(unknownModel, { name: "Kite", modelId: "mdl-nope" })).problem).toBe("modelId");
     expect(newSetupProblemFrom({ problem: "modelId" })).toEqual({ field: "modelId", message: UNKNOWN_MODEL_MESSAGE });
-    const neither = { code: "bad_request" as const, message: "x", issues: [{ path: "draft", message: "Send either a draft or a modelId." }] };
+    const neither = {
+      code: "bad_request" as const,
+      message: "x",
+      issues: [{ path: "draft", message: "Send either a draft or a modelId." }],
+    };
     expect(newSetupProblemOf(neither).field).toBe("modelId");
     expect(query(newSetupFailurePath({ code: "conflict", message: "Busy." }, {})).problem).toBe("other");
     expect(newSetupProblemFrom({ problem: "other" })?.field).toBeNull();
