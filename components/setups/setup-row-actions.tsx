@@ -23,7 +23,8 @@ export function SetupRowActions({ id, name }: { id: string; name: string }) {
   const pending = duplicate.isPending || remove.isPending;
   const error = duplicate.error ?? remove.error;
   return (
-    <span className="flex flex-wrap items-center gap-2 text-sm">
+    // Stacked in the narrow actions column of a phone's table, in a row beside the other columns from md up.
+    <span className="flex min-w-[6.5rem] flex-col items-start gap-1 text-sm md:min-w-0 md:flex-row md:flex-wrap md:items-center md:gap-2">
       <button
         type="button"
         disabled={pending}
@@ -34,7 +35,7 @@ export function SetupRowActions({ id, name }: { id: string; name: string }) {
         Duplicate
       </button>
       {confirming ? (
-        <span className="flex items-center gap-1" role="group" aria-label="Confirm delete">
+        <span className="flex flex-wrap items-center gap-1" role="group" aria-label="Confirm delete">
           <span>Delete for good?</span>
           <button
             type="button"

@@ -41,7 +41,7 @@ async function call<T>(method: string, url: string, body?: unknown): Promise<T> 
 
 const setupUrl = (id: string, rest = "") => `/api/setups/${encodeURIComponent(id)}${rest}`;
 
-export const createSetupRequest = (input: { modelId: string } | { draft: SetupDraft }) =>
+export const createSetupRequest = (input: { modelId: string; name?: string } | { draft: SetupDraft }) =>
   call<{ id: string; version: number; result: BalanceResult }>("POST", "/api/setups", input);
 
 export const duplicateSetupRequest = (id: string) => call<{ id: string }>("POST", setupUrl(id, "/duplicate"));

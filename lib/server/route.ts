@@ -3,6 +3,7 @@ import type { z } from "zod";
 import type { Viewer } from "@/lib/auth/access";
 import type { Role } from "@/lib/domain";
 import { errorResponse, issuesFromZod, type AppError, type Result } from "@/lib/errors";
+import { readFormBody } from "@/lib/http/read-form-body";
 import { readJsonBody } from "@/lib/http/read-json-body";
 import { authorise } from "./authorise";
 import { internalError } from "./internal-error";
@@ -20,8 +21,14 @@ export interface RouteSpec<P, Q, B> {
   params?: Schema<P>;
   /** Query string, as an object of its first values. */
   query?: Schema<Q>;
-  /** JSON body. */
+  /** JSON body (with `form`: the form's fields, each its first text value). */
   body?: Schema<B>;
+  /**
+   * A page's form post, so the page works without JavaScript: the body is urlencoded or multipart, the
+   * core returns `{ location }` and the answer is 303 See Other there. Once the form is read, a failure
+   * (bad fields, no session, the core's refusal) is a 303 to `failedTo` too, which gets the fields as typed.
+   */
+  form?: { failedTo: (error: AppError, fields: Record<string, string>) => string };
   /** The message when the path does not parse (e.g. "No such setup among yours."). */
   notFoundMessage?: string;
   /** Status of a success: 200 unless said; 204 answers no body. */
@@ -72,6 +79,9 @@ async function fileResponse(file: FileBody, request: Request): Promise<Response>
   });
 }
 
+/** A form post's answer: the browser follows it with a GET (RFC 9110 §15.4.4), so a reload never posts again. */
+const seeOther = (location: string) => new Response(null, { status: 303, headers: { location, "cache-control": "no-store" } });
+
 export interface RouteArgs<P, Q, B, V = Viewer> {
   viewer: V;
   params: P;
@@ -89,11 +99,12 @@ function parsed<T>(schema: Schema<T>, value: unknown, error: (issues: ReturnType
   return outcome.success ? { ok: true, data: outcome.data } : { ok: false, error: error(issuesFromZod(outcome.error)) };
 }
 
-/** Parses every part of the request the spec names, in path → query → body order. */
+/** Parses every part of the request the spec names, in path → query → body order (a form's fields are read already). */
 async function parseRequest<P, Q, B>(
   spec: RouteSpec<P, Q, B>,
   request: Request,
   context: NextRouteContext,
+  formFields: Record<string, string> | null,
 ): Promise<Result<{ params: P; query: Q; body: B }>> {
   const params = spec.params
     ? parsed(spec.params, await context.params, () => ({
@@ -112,7 +123,7 @@ async function parseRequest<P, Q, B>(
   if (!query.ok) return query;
   let body: Result<B> = { ok: true, data: undefined as B };
   if (spec.body) {
-    const json = await readJsonBody(request);
+    const json = formFields ? { ok: true as const, data: formFields } : await readJsonBody(request);
     if (!json.ok) return json;
     body = parsed(spec.body, json.data, (issues) => ({ code: "bad_request", message: "The request body is not valid.", issues }));
     if (!body.ok) return body;
@@ -133,16 +144,25 @@ export function route<T, P = undefined, Q = undefined, B = undefined>(
     try {
       const crossSite = crossSiteRefusal(request);
       if (crossSite) return errorResponse(crossSite);
-      const input = await parseRequest(spec, request, context);
-      if (!input.ok) return errorResponse(input.error);
+      let formFields: Record<string, string> | null = null;
+      if (spec.form) {
+        const read = await readFormBody(request);
+        if (!read.ok) return errorResponse(read.error);
+        formFields = read.data;
+      }
+      const failure = (error: AppError) =>
+        spec.form && formFields ? seeOther(spec.form.failedTo(error, formFields)) : errorResponse(error);
+      const input = await parseRequest(spec, request, context, formFields);
+      if (!input.ok) return failure(input.error);
       let viewer: Viewer | null = null;
       if (spec.access !== "public") {
         const allowed = authorise(await getViewer(), spec.roles);
-        if (!allowed.ok) return errorResponse(allowed.error);
+        if (!allowed.ok) return failure(allowed.error);
         viewer = allowed.data;
       }
       const result = await handler({ viewer: viewer as Viewer, request, ...input.data });
-      if (!result.ok) return errorResponse(result.error);
+      if (!result.ok) return failure(result.error);
+      if (spec.form) return seeOther((result.data as { location: string }).location);
       if (spec.status === 204) return new Response(null, { status: 204 });
       if (spec.respond === "file") return await fileResponse(result.data as FileBody, request);
       return Response.json(result.data, { status: spec.status ?? 200 });

@@ -96,7 +96,7 @@ export async function createSetup({
   input,
 }: {
   viewer: Viewer;
-  input: { draft: SetupDraft } | { modelId: string };
+  input: { draft: SetupDraft } | { modelId: string; name?: string };
 }): Promise<Result<{ id: string; version: number; result: BalanceResult }>> {
   if ("draft" in input) return createFromDraft(viewer, input.draft, "draft");
   const catalogue = await getPlannerCatalogue({ ownerId: viewer.id });
@@ -104,7 +104,7 @@ export async function createSetup({
   const mount = catalogue.mounts[0];
   if (!model || !mount)
     return fail("bad_request", "That envelope model is not in the catalogue.", [{ path: "modelId", message: "unknown envelope model" }]);
-  return createFromDraft(viewer, defaultDraft(model, mount.id), "draft");
+  return createFromDraft(viewer, defaultDraft(model, mount.id, input.name), "draft");
 }
 
 export async function duplicateSetup({

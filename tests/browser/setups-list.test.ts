@@ -2,6 +2,7 @@ import type { Browser } from "playwright-core";
 import { afterAll, beforeAll, describe, expect, inject, it } from "vitest";
 import { DEMO_PASSWORD } from "../../db/seed-data";
 import { SignInPage, launchBrowser, newPersonContext, screenshot } from "../support/browser";
+import { SetupsPage, signedUpContext } from "../support/setups-page";
 
 const baseURL = inject("baseURL");
 let browser: Browser;
@@ -21,7 +22,8 @@ describe("the Setups list in Chromium", () => {
     await signIn.open();
     await signIn.signIn("mirela@trimrail.test", DEMO_PASSWORD);
     await page.waitForURL(/\/setups$/);
-    const rows = page.getByTestId("setup-row");
+    const setupsPage = new SetupsPage(page);
+    const rows = setupsPage.rows;
     const names = await rows.locator("td:first-child a").allInnerTexts();
     expect(names).toContain("Profile logger");
     expect(names).not.toContain("Valley relay"); // Tobin's
@@ -29,8 +31,11 @@ describe("the Setups list in Chromium", () => {
     await expect(rows.filter({ hasText: "Logger and tracker" }).getByTestId("unread-comments").innerText()).resolves.toBe("1 new comment");
     const before = await rows.count();
 
-    await page.getByTestId("new-setup-form").locator("select").selectOption({ label: "Ridge 0.6 (0.60 m³)" });
-    await page.getByTestId("new-setup").click();
+    // With JavaScript, a refusal shows inline and the page stays where it is.
+    await setupsPage.createSetup("   ", "Ridge 0.6 (0.60 m³)");
+    await expect(setupsPage.problem.innerText()).resolves.toBe("Give the setup a name.");
+    expect(new URL(page.url()).pathname + new URL(page.url()).search).toBe("/setups");
+    await setupsPage.createSetup("New setup on Ridge 0.6", "Ridge 0.6 (0.60 m³)");
     await page.waitForURL(/\/setups\/[0-9a-f-]{36}$/);
     await expect(page.getByTestId("setup-name").innerText()).resolves.toBe("New setup on Ridge 0.6");
     await page.getByTestId("planner").waitFor();
@@ -47,6 +52,34 @@ describe("the Setups list in Chromium", () => {
     await page.getByTestId("confirm-delete").click();
     await expect.poll(() => rows.count()).toBe(before + 1);
     await expect(page.getByText("Copy of New setup on Ridge 0.6").count()).resolves.toBe(0);
+    await context.close();
+  });
+
+  it("makes a setup with JavaScript off: a real form post that lands in the Planner, or back with what to fix", async () => {
+    const { context } = await signedUpContext(browser, baseURL, "Jora Scriptless", { javaScriptEnabled: false });
+    const setups = new SetupsPage(await context.newPage());
+    await setups.open();
+
+    // Refused: back on the list, told why, the model kept; nothing was made.
+    await setups.createSetup("", "mdl-ridge-11");
+    await setups.page.waitForURL(/\/setups\?problem=name&/);
+    await expect(setups.problem.innerText()).resolves.toBe("Give the setup a name.");
+    await expect(setups.page.getByLabel("Envelope model").inputValue()).resolves.toBe("mdl-ridge-11");
+    await expect(setups.page.getByLabel("Name").getAttribute("aria-invalid")).resolves.toBe("true");
+    expect(await setups.rows.count()).toBe(0);
+    await screenshot(setups.page, "setups-no-js-refused");
+
+    await setups.createSetup("Scriptless mast", "mdl-ridge-11");
+    await setups.page.waitForURL(/\/setups\/[0-9a-f-]{36}$/);
+    await expect(setups.page.getByTestId("setup-name").innerText()).resolves.toBe("Scriptless mast");
+    await setups.open();
+    await expect(setups.rows.locator("td:first-child a").allInnerTexts()).resolves.toEqual(["Scriptless mast"]);
+
+    // Signed out in the meantime: the post lands on the sign-in page, with the way back to the list.
+    await context.clearCookies();
+    await setups.createSetup("After sign-out", "mdl-ridge-06");
+    await setups.page.waitForURL(/\/sign-in\?next=%2Fsetups$/);
+    await setups.page.getByTestId("sign-in-form").waitFor();
     await context.close();
   });
 

@@ -2,11 +2,12 @@ import Link from "next/link";
 import { listActiveEnvelopeModels } from "@/db/queries/catalogue";
 import { countUnreadComments } from "@/db/queries/review";
 import { listSetupsForOwner } from "@/db/queries/setups";
+import { newSetupProblemFrom } from "@/components/setups/new-setup-address";
 import { NewSetupForm } from "@/components/setups/new-setup-form";
 import { SetupRowActions } from "@/components/setups/setup-row-actions";
+import { SetupTable } from "@/components/setups/setup-table";
 import { EmptyState } from "@/components/ui/empty-state";
 import { Pager } from "@/components/ui/pager";
-import { SetupTable } from "@/components/ui/setup-table";
 import { requirePageViewer } from "@/lib/auth/guard";
 
 export const metadata = { title: "Setups" };
@@ -15,7 +16,12 @@ const PAGE_SIZE = 25;
 
 export default async function SetupsPage({ searchParams }: PageProps<"/setups">) {
   const viewer = await requirePageViewer(undefined, "/setups");
-  const asked = Number((await searchParams).page);
+  const query = await searchParams;
+  const asked = Number(query.page);
+  // Back from a refused no-JavaScript post: the problem, and what was typed so it need not be typed again.
+  const problem = newSetupProblemFrom(query);
+  const typed = (value: string | string[] | undefined) => (Array.isArray(value) ? value[0] : value) ?? "";
+  const refused = problem ? { problem, name: typed(query.name), modelId: typed(query.modelId) } : null;
   const page = Number.isInteger(asked) && asked >= 1 && asked <= 1_000_000 ? asked : 1;
   const [{ rows, total }, models] = await Promise.all([
     listSetupsForOwner({ ownerId: viewer.id, page, pageSize: PAGE_SIZE }),
@@ -26,7 +32,7 @@ export default async function SetupsPage({ searchParams }: PageProps<"/setups">)
     <section className="space-y-4">
       <div className="flex flex-wrap items-end justify-between gap-4">
         <h1 className="text-2xl">Setups</h1>
-        <NewSetupForm models={models.map((m) => ({ id: m.id, name: m.name, gasVolumeM3: m.gasVolumeM3 }))} />
+        <NewSetupForm models={models.map((m) => ({ id: m.id, name: m.name, gasVolumeM3: m.gasVolumeM3 }))} refused={refused} />
       </div>
       {total === 0 ? (
         <EmptyState title="No setups yet">

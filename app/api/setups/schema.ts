@@ -20,14 +20,18 @@ export const pageQuerySchema = z
   })
   .strict();
 
-/** A new setup: a whole draft, or the neutral start on one envelope model. */
+/** A new setup: a whole draft, or the neutral start on one envelope model (named, or "New setup on …"). */
 export const createSetupBodySchema = z
-  .object({ draft: setupDraftSchema.optional(), modelId: id.optional() })
+  .object({ draft: setupDraftSchema.optional(), modelId: id.optional(), name: setupDraftSchema.shape.name.optional() })
   .refine((body) => (body.draft === undefined) !== (body.modelId === undefined), {
     message: "Send either a draft or a modelId.",
     path: ["draft"],
   })
-  .transform((body) => (body.draft ? { draft: body.draft } : { modelId: body.modelId as string }));
+  .refine((body) => body.draft === undefined || body.name === undefined, {
+    message: "A draft carries its own name; send the name inside it.",
+    path: ["name"],
+  })
+  .transform((body) => (body.draft ? { draft: body.draft } : { modelId: body.modelId as string, name: body.name }));
 export const saveSetupBodySchema = z.object({ version, draft: setupDraftSchema });
 export const submitSetupBodySchema = z.object({ version, acknowledgeCautions: z.boolean().default(false) });
 

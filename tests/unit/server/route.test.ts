@@ -1,7 +1,7 @@
 import { afterEach, beforeEach, describe, expect, it, vi } from "vitest";
 import { z } from "zod";
 import type { Viewer } from "@/lib/auth/access";
-import { fail, ok } from "@/lib/errors";
+import { fail, ok, type AppError } from "@/lib/errors";
 
 // The wrapper alone, with the session replaced: what each step answers and in which order.
 const session = vi.hoisted(() => ({ viewer: null as Viewer | null, reads: 0 }));
@@ -161,5 +161,77 @@ describe("route", () => {
     expect(response.status).toBe(413);
     // 256 KiB cap / 64 KiB chunks: it stopped after a handful, not after the stream's (unbounded) end
     expect(pulled).toBeLessThan(10);
+  });
+});
+
+describe("route with a form body", () => {
+  const body = z.object({ name: z.string().trim().min(1, "Give it a name."), size: z.coerce.number().int().optional() });
+  const core = vi.fn(async ({ body: b }: { body: { name: string } }) =>
+    b.name === "taken" ? fail("conflict", "That name is taken.") : ok({ location: `/things/${encodeURIComponent(b.name)}` }),
+  );
+  const failedTo = vi.fn((error: AppError, fields: Record<string, string>) => `/things?code=${error.code}&name=${fields.name ?? ""}`);
+  const POST = route({ body, form: { failedTo } }, core);
+  const formPost = (form: string | FormData, headers: Record<string, string> = {}) =>
+    new Request("http://app.test/api/forms/things", {
+      method: "POST",
+      body: form,
+      headers: typeof form === "string" ? { "content-type": "application/x-www-form-urlencoded", ...headers } : headers,
+    });
+
+  beforeEach(() => {
+    core.mockClear();
+    failedTo.mockClear();
+  });
+
+  it("answers a good urlencoded post with 303 See Other to the core's location", async () => {
+    session.viewer = CUSTOMER;
+    const response = await POST(formPost("name=Kite+one&size=3"), context());
+    expect(response.status).toBe(303);
+    expect(response.headers.get("location")).toBe("/things/Kite%20one");
+    expect(await response.text()).toBe("");
+  });
+
+  it("reads a multipart post as a browser sends it, first value of each field, files left out", async () => {
+    session.viewer = CUSTOMER;
+    const form = new FormData();
+    form.append("name", "Kite two");
+    form.append("name", "ignored second value");
+    form.append("attachment", new Blob(["bytes"]), "a.bin");
+    const response = await POST(formPost(form), context());
+    expect(response.status).toBe(303);
+    expect(response.headers.get("location")).toBe("/things/Kite%20two");
+    expect(core.mock.calls[0]?.[0].body).toEqual({ name: "Kite two" });
+  });
+
+  it("sends bad fields back to failedTo with what was typed, before the session and without the core", async () => {
+    session.viewer = CUSTOMER;
+    const response = await POST(formPost("name=+++&size=x"), context());
+    expect(response.status).toBe(303);
+    expect(response.headers.get("location")).toMatch(/^\/things\?code=bad_request&name=/);
+    const [error, fields] = failedTo.mock.calls[0] ?? [];
+    expect(fields).toEqual({ name: "   ", size: "x" });
+    expect(error?.issues?.map((i) => i.path).sort()).toEqual(["name", "size"]);
+    expect(core).not.toHaveBeenCalled();
+    expect(session.reads).toBe(0);
+  });
+
+  it("sends a stranger and the core's refusal to failedTo too", async () => {
+    expect((await POST(formPost("name=Kite"), context())).headers.get("location")).toBe("/things?code=unauthenticated&name=Kite");
+    expect(core).not.toHaveBeenCalled();
+    session.viewer = CUSTOMER;
+    expect((await POST(formPost("name=taken"), context())).headers.get("location")).toBe("/things?code=conflict&name=taken");
+  });
+
+  it("refuses JSON, a cross-site post and an oversized form with the typed errors, not a redirect", async () => {
+    session.viewer = CUSTOMER;
+    const json = await POST(formPost(JSON.stringify({ name: "Kite" }), { "content-type": "application/json" }), context());
+    expect(json.status).toBe(415);
+    expect(await POST(formPost("name=Kite", { origin: "http://evil.example" }), context()).then((r) => r.status)).toBe(403);
+    expect(await POST(formPost("name=Kite", { "sec-fetch-site": "cross-site" }), context()).then((r) => r.status)).toBe(403);
+    expect(await POST(formPost(`name=${"k".repeat(70 * 1024)}`), context()).then((r) => r.status)).toBe(413);
+    const boundaryless = await POST(formPost("name=Kite", { "content-type": "multipart/form-data" }), context());
+    expect(boundaryless.status).toBe(400);
+    expect(core).not.toHaveBeenCalled();
+    expect(failedTo).not.toHaveBeenCalled();
   });
 });
