@@ -103,11 +103,7 @@ export const Mount = memo(function Mount({ x, z, unitM, payloads, selected, moun
       >
         <mesh ref={mountRef} position-y={carriageY} name="mount-carriage">
           <boxGeometry args={[CARRIAGE_LENGTH * unitM, CARRIAGE_HEIGHT * unitM, CARRIAGE_WIDTH * unitM]} />
-          <meshLambertMaterial
-            color={ACCENT}
-            emissive={selected ? ACCENT : "#000000"}
-            emissiveIntensity={selected ? 0.35 : 0}
-          />
+          <meshLambertMaterial color={ACCENT} emissive={selected ? ACCENT : "#000000"} emissiveIntensity={selected ? 0.35 : 0} />
         </mesh>
         <mesh position-y={screwY}>
           <cylinderGeometry args={[SCREW_RADIUS * unitM, SCREW_RADIUS * unitM, SCREW_LENGTH * unitM, 12]} />

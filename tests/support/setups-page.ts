@@ -1,5 +1,7 @@
 import type { Browser, BrowserContext, BrowserContextOptions, Locator, Page } from "playwright-core";
 import { ApiClient } from "./http";
+import { inject } from "vitest";
+import { signUpAndVerify } from "./sign-up";
 
 /** Page object for the Setups list (/setups): the new-setup form, the table and its pager. */
 export class SetupsPage {
@@ -43,10 +45,9 @@ export async function signedUpContext(
   name: string,
   options: BrowserContextOptions = {},
 ): Promise<{ context: BrowserContext; api: ApiClient }> {
-  const api = new ApiClient(baseURL);
   const email = `${name.toLowerCase().replace(/\W+/g, "-")}-${Date.now()}-${Math.floor(Math.random() * 1e6)}@trimrail.test`;
-  const signUp = await api.request("POST", "/api/auth/sign-up/email", { name, email, password: "a-long-password" });
-  if (signUp.status !== 200) throw new Error(`sign-up answered ${signUp.status}`);
+  // New accounts confirm their address before they may sign in: follow the captured mail's link.
+  const api = await signUpAndVerify({ baseURL, mailDir: inject("mailDir"), name, email, password: "quiet-harbour-lantern-93" });
   const context = await browser.newContext({
     baseURL,
     viewport: { width: 1360, height: 900 },
