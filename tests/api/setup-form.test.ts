@@ -2,6 +2,7 @@ import { afterAll, beforeAll, describe, expect, inject, it } from "vitest";
 import { openDatabase } from "@/db/index";
 import { MAX_NAME_LENGTH } from "@/lib/domain";
 import { ApiClient } from "../support/http";
+import { signUpAndVerify } from "../support/sign-up";
 
 // POST /api/forms/new-setup: the Setups page's form as a browser without JavaScript posts it.
 const baseURL = inject("baseURL");
@@ -9,13 +10,19 @@ const FORM = "/api/forms/new-setup";
 const URLENCODED = { "content-type": "application/x-www-form-urlencoded" };
 
 const database = openDatabase(inject("databaseUrl"));
-const person = new ApiClient(baseURL);
+let person: ApiClient;
 let personId: string;
 
 beforeAll(async () => {
   const email = `form-${Date.now()}-${Math.floor(Math.random() * 1e6)}@trimrail.test`;
-  const signUp = await person.request("POST", "/api/auth/sign-up/email", { name: "Ilse Formwright", email, password: "a-long-password" });
-  expect(signUp.status).toBe(200);
+  // New accounts confirm their address first: the captured mail's link signs the person in.
+  person = await signUpAndVerify({
+    baseURL,
+    mailDir: inject("mailDir"),
+    name: "Ilse Formwright",
+    email,
+    password: "quiet-harbour-lantern-93",
+  });
   const found = await database.client.execute({ sql: "select id from user where email = ?", args: [email] });
   personId = String(found.rows[0]?.id);
 });
