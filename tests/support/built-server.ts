@@ -19,7 +19,8 @@ export async function startBuiltServer(databaseUrl: string): Promise<BuiltServer
   const baseURL = `http://127.0.0.1:${port}`;
   const inherited = { ...process.env };
   // Mail and files have nowhere to go: this server needs neither to start or to report its health.
-  for (const name of Object.keys(inherited)) if (/^(SMTP_URL|S3_|TRIMRAIL_SMTP_FAKE_PORT|TRIMRAIL_MAIL_DIR)/.test(name)) delete inherited[name];
+  for (const name of Object.keys(inherited))
+    if (/^(SMTP_URL|S3_|TRIMRAIL_SMTP_FAKE_PORT|TRIMRAIL_MAIL_DIR)/.test(name)) delete inherited[name];
   const child = spawn("npx", ["next", "start", "-p", String(port), "-H", "127.0.0.1"], {
     env: {
       ...inherited,
