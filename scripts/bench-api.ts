@@ -44,8 +44,14 @@ async function targetsFor(app: AppServer, customer: ApiClient): Promise<Target[]
     { label: "GET /api/setups/:id/history", who: "customer", path: `/api/setups/${someId}/history`, list: true },
     { label: "GET /api/insight", who: "maker", path: "/api/insight", list: false },
     { label: "GET /api/insight?model=", who: "maker", path: "/api/insight?model=mdl-ridge-11", list: false },
+    { label: "GET /api/catalogue/units", who: "maker", path: "/api/catalogue/units", list: true },
+    { label: "GET /api/catalogue/templates", who: "maker", path: "/api/catalogue/templates", list: true },
+    { label: "GET /api/catalogue/models", who: "maker", path: "/api/catalogue/models", list: true },
     { label: "page /setups", who: "customer", path: "/setups", list: false },
     { label: "page /review", who: "support", path: "/review", list: false },
+    { label: "page /workshop/people (page 1)", who: "maker", path: "/workshop/people", list: false },
+    { label: "page /workshop/people (page 80)", who: "maker", path: "/workshop/people?page=80", list: false },
+    { label: "page /workshop/units", who: "maker", path: "/workshop/units", list: false },
   ];
 }
 

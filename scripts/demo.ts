@@ -2,6 +2,7 @@ import { spawn, spawnSync } from "node:child_process";
 import { mkdirSync } from "node:fs";
 import { DEMO_PASSWORD, DEMO_USERS } from "../db/seed-data";
 import { ensureLocalEnv } from "./local-env";
+import { nextCommand } from "./next-bin";
 import { startLocalMail } from "./local-mail";
 import { startLocalStorage } from "./local-storage";
 
@@ -24,11 +25,11 @@ function step(label: string, command: string, args: string[]): void {
 
 step("migrating the database", "npx", ["tsx", "scripts/migrate.ts"]);
 step("seeding the demo data", "npx", ["tsx", "scripts/seed.ts"]);
-if (process.env.TRIMRAIL_SKIP_BUILD !== "1") step("building the app (about a minute)", "npx", ["next", "build"]);
+if (process.env.TRIMRAIL_SKIP_BUILD !== "1") step("building the app (about a minute)", ...nextCommand(["build"]));
 
 await startLocalMail();
 await startLocalStorage();
-const server = spawn("npx", ["next", "start", "-p", port], { stdio: ["ignore", "pipe", "inherit"], env: process.env });
+const server = spawn(...nextCommand(["start", "-p", port]), { stdio: ["ignore", "pipe", "inherit"], env: process.env });
 server.stdout.on("data", (chunk: Buffer) => {
   process.stdout.write(chunk);
   if (chunk.toString().includes("Ready")) {

@@ -7,6 +7,7 @@ import path from "node:path";
 import { openDatabase } from "../../db/index";
 import { migrateDatabase } from "../../db/migrate";
 import { seedDemo } from "../../db/seed";
+import { nextCommand } from "../../scripts/next-bin";
 import { startS3Fake } from "../../scripts/s3-fake";
 import { startSmtpFake } from "../../scripts/smtp-fake";
 
@@ -102,11 +103,11 @@ export async function startAppServer({
   };
 
   if (build) {
-    const result = spawnSync("npx", ["next", "build"], { stdio: "inherit", env });
+    const result = spawnSync(...nextCommand(["build"]), { stdio: "inherit", env });
     if (result.status !== 0) throw new Error(`next build failed with ${result.status}`);
   }
 
-  const server = spawn("npx", ["next", "start", "-p", String(port), "-H", "127.0.0.1"], {
+  const server = spawn(...nextCommand(["start", "-p", String(port), "-H", "127.0.0.1"]), {
     env,
     stdio: ["ignore", "inherit", "inherit"],
     detached: true,

@@ -1,5 +1,6 @@
 import { spawn, spawnSync } from "node:child_process";
 import { randomBytes } from "node:crypto";
+import { nextCommand } from "../../scripts/next-bin";
 import { freePort, TEST_DIST_DIR } from "./app-server";
 
 // One more `next start` of the tests' build, on a database the test chose, with its output kept:
@@ -21,7 +22,7 @@ export async function startBuiltServer(databaseUrl: string): Promise<BuiltServer
   // Mail and files have nowhere to go: this server needs neither to start or to report its health.
   for (const name of Object.keys(inherited))
     if (/^(SMTP_URL|S3_|TRIMRAIL_SMTP_FAKE_PORT|TRIMRAIL_MAIL_DIR)/.test(name)) delete inherited[name];
-  const child = spawn("npx", ["next", "start", "-p", String(port), "-H", "127.0.0.1"], {
+  const child = spawn(...nextCommand(["start", "-p", String(port), "-H", "127.0.0.1"]), {
     env: {
       ...inherited,
       NODE_ENV: "production",
