@@ -2,9 +2,9 @@
 import { useMemo } from "react";
 import { useShallow } from "zustand/react/shallow";
 import { LifterCanvas, type ScenePayload } from "@/components/scene";
-import { formatFixed, formatQuantity } from "@/lib/units";
+import { formatFixed } from "@/lib/units";
 import { usePlanner, usePlannerActions } from "./planner-context";
-import { CASE_WORDS, windArrowLabel } from "./scene-labels";
+import { CASE_WORDS, sceneSummary, windArrowLabel } from "./scene-labels";
 import { displayedTrimDeg, modelOf } from "./store";
 import { useSceneTether } from "./use-scene-tether";
 import type { TrimCase } from "./types";
@@ -50,13 +50,16 @@ export function PlannerScene() {
     [payloadDrafts, flags],
   );
 
-  const trimWords = (deg: number | null) =>
-    deg === null
-      ? "has no stable trim"
-      : formatFixed(Math.abs(deg), 1) === "0.0"
-        ? "trims level"
-        : `trims ${formatFixed(Math.abs(deg), 1)}° ${deg > 0 ? "nose up" : "nose down"}`;
-  const summary = `${model.name}: in calm air it ${trimWords(calmTrimDeg)}; shown ${CASE_WORDS[trimCase].toLowerCase()} case at ${formatFixed(trimDeg, 1)}°. Mount ${formatQuantity("length", mountX, units, 3)} from the nose; centre of mass ${formatQuantity("smallLength", Math.abs(centreOfMass.x - model.buoyancyCentreXM), units)} ${centreOfMass.x >= model.buoyancyCentreXM ? "aft of" : "forward of"} the centre of buoyancy.`;
+  const summary = sceneSummary({
+    modelName: model.name,
+    calmTrimDeg,
+    trimCase,
+    shownTrimDeg: trimDeg,
+    groundedBecause: sceneTether.grounded ? (sceneTether.groundedLabel ?? "it does not fly") : null,
+    mountXM: mountX,
+    massAftOfBuoyancyM: centreOfMass.x - model.buoyancyCentreXM,
+    units,
+  });
 
   return (
     <div className="space-y-2">

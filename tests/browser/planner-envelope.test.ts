@@ -93,6 +93,8 @@ describe.skipIf(!mounted)("the Planner's operating envelope and curved tether in
     expect(flags).toContain("trim-wind:stop");
     expect(flags.filter((f) => /^(trim|tether-angle)-(wind|gust):ok$/.test(f))).toEqual([]);
     expect(await planner.page.getByTestId("flag-list").innerText()).toMatch(/it does not fly/);
+    // The text alternative says what the picture shows: the lifter on the ground, not a trim angle.
+    expect(await planner.page.getByTestId("scene-summary").innerText()).toMatch(/shown on the ground in the (calm|wind|gust) case/);
     await screenshot(planner.page, "planner-grounded");
     await planner.page.close();
   });
