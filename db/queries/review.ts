@@ -89,12 +89,15 @@ const containing = (text: string) => `%${text.replace(/[\\%_]/g, (c) => `\\${c}`
  * The setups that can match a search of three characters or more, from indexes: names through the
  * trigram index (setup_name_search), owners through their names. The LIKE above still decides each
  * row, so this only spares reading the others; null for a shorter search, which reads them all.
+ * Two arms of an OR rather than one UNION: SQLite then walks each index on its own (a multi-index
+ * OR) instead of building the whole candidate set in a temporary B-tree first.
  */
 function searchCandidates(q: string, pattern: string): SQL | null {
   if ([...q].length < SEARCH_MIN_CHARS) return null;
   const phrase = `"${q.replace(/"/g, '""')}"`;
-  return sql`(select k.setup_id from ${sql.raw(SETUP_NAME_SEARCH)} f join ${setupSearchKeys} k on k.key = f.rowid where ${sql.raw(SETUP_NAME_SEARCH)} match ${phrase}
-    union select ${setups.id} from ${setups} where ${setups.ownerId} in (select ${user.id} from ${user} where ${user.name} like ${pattern} escape '\\'))`;
+  const byName = sql`(select k.setup_id from ${sql.raw(SETUP_NAME_SEARCH)} f join ${setupSearchKeys} k on k.key = f.rowid where ${sql.raw(SETUP_NAME_SEARCH)} match ${phrase})`;
+  const byOwner = sql`(select ${user.id} from ${user} where ${user.name} like ${pattern} escape '\\')`;
+  return or(inArray(setups.id, byName), inArray(setups.ownerId, byOwner)) as SQL;
 }
 
 export async function listQueue(filter: QueueFilter): Promise<{ rows: QueueRow[]; total: number }> {
@@ -105,7 +108,7 @@ export async function listQueue(filter: QueueFilter): Promise<{ rows: QueueRow[]
     const pattern = containing(filter.q);
     conditions.push(or(sql`${setups.name} like ${pattern} escape '\\'`, sql`${user.name} like ${pattern} escape '\\'`) as SQL);
     const candidates = searchCandidates(filter.q, pattern);
-    if (candidates) conditions.push(inArray(setups.id, candidates));
+    if (candidates) conditions.push(candidates);
   }
   const where = and(...conditions);
   // "waiting" longest first is submittedAt oldest first: one index serves both.
@@ -117,21 +120,35 @@ export async function listQueue(filter: QueueFilter): Promise<{ rows: QueueRow[]
   }[filter.sort];
   const ascending = filter.sort === "waiting" ? filter.dir === "desc" : filter.dir === "asc";
   const db = getDb();
-  const [rows, [{ total }]] = await Promise.all([
+  const page = (withTotal: boolean) =>
     db
-      .select({ ...headerColumns, modelId: setups.modelId })
+      .select({ ...headerColumns, modelId: setups.modelId, ...(withTotal ? { total: sql<number>`count(*) over ()` } : {}) })
       .from(setups)
       .innerJoin(user, eq(setups.ownerId, user.id))
       .innerJoin(envelopeModels, eq(setups.modelId, envelopeModels.id))
       .where(where)
       .orderBy(ascending ? asc(column) : desc(column), ascending ? asc(setups.id) : desc(setups.id))
       .limit(filter.pageSize)
-      .offset((filter.page - 1) * filter.pageSize),
+      .offset((filter.page - 1) * filter.pageSize);
+  const countAll = () =>
     filter.q
       ? db.select({ total: count() }).from(setups).innerJoin(user, eq(setups.ownerId, user.id)).where(where)
-      : db.select({ total: count() }).from(setups).where(where),
-  ]);
-  return { rows: rows.map(({ ownerId: _o, ownerEmail: _e, version: _v, ...row }) => row), total };
+      : db.select({ total: count() }).from(setups).where(where);
+  const strip = ({ ownerId: _o, ownerEmail: _e, version: _v, ...row }: SetupHeader & { modelId: string; total?: number }) => {
+    const { total: _t, ...queueRow } = row;
+    return queueRow;
+  };
+  if (filter.q) {
+    // A search reads every match to order them, so it counts them in the same pass (a window
+    // function) instead of reading them all a second time; a page past the end has no row to
+    // carry the count, and asks for it alone.
+    const rows = await page(true);
+    const total = rows[0]?.total ?? (filter.page > 1 ? (await countAll())[0].total : 0);
+    return { rows: rows.map(strip), total };
+  }
+  // Without a search, the order's index serves the page and a covering index the count.
+  const [rows, [{ total }]] = await Promise.all([page(false), countAll()]);
+  return { rows: rows.map(strip), total };
 }
 
 // ---------------------------------------------------------------- decisions
