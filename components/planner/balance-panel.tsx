@@ -1,6 +1,7 @@
 "use client";
 import dynamic from "next/dynamic";
-import { useEffect, useLayoutEffect, useRef, useState } from "react";
+import { useLayoutEffect } from "react";
+import { WhenNear } from "@/components/ui/when-near";
 import { resolveLimits } from "@/lib/balance";
 import { formatFixed, formatQuantity } from "@/lib/units";
 import { Cautions } from "./cautions";
@@ -28,30 +29,6 @@ const BalanceCharts = dynamic(() => import("./balance-charts").then((module) => 
   ssr: false,
   loading: () => <ChartsLoading />,
 });
-
-/** The charts sit at the foot of the panel: they load (and run their sweeps) once they come near the screen. */
-function ChartsWhenNear() {
-  const placeholder = useRef<HTMLDivElement>(null);
-  const [near, setNear] = useState(false);
-  useEffect(() => {
-    const element = placeholder.current;
-    if (near || !element) return;
-    const observer = new IntersectionObserver(
-      (entries) => {
-        if (entries.some((entry) => entry.isIntersecting)) setNear(true);
-      },
-      { rootMargin: "400px 0px" },
-    );
-    observer.observe(element);
-    return () => observer.disconnect();
-  }, [near]);
-  if (near) return <BalanceCharts />;
-  return (
-    <div ref={placeholder}>
-      <ChartsLoading />
-    </div>
-  );
-}
 
 const deg = (value: number | null | undefined): string => (value === null || value === undefined ? "none" : `${formatFixed(value, 1)}°`);
 
@@ -161,7 +138,10 @@ export function BalancePanel() {
         </div>
       </div>
 
-      <ChartsWhenNear />
+      {/* The charts sit at the foot of the panel: they load (and run their sweeps) once they come near the screen. */}
+      <WhenNear placeholder={<ChartsLoading />}>
+        <BalanceCharts />
+      </WhenNear>
 
       <Cautions hasAntenna={payloads.some((p) => p.category === "antenna")} result={result} />
     </section>

@@ -3,19 +3,24 @@ import dynamic from "next/dynamic";
 import { useDeferredValue, useMemo } from "react";
 import { operatingEnvelope, type OperatingEnvelope } from "@/lib/balance";
 import { INPUT_LIMITS as L, type UnitSystem } from "@/lib/domain";
+import { WhenNear } from "@/components/ui/when-near";
 import { formatQuantity } from "@/lib/units";
 import { usePlanner, usePlannerActions } from "./planner-context";
 import { QuantityInput } from "./quantity-input";
 import { Section } from "./section";
 
 // Recharts loads with the chart, after the page: not in the Planner's first load.
-const OperatingEnvelopeChart = dynamic(() => import("./operating-envelope-chart").then((m) => m.OperatingEnvelopeChart), {
-  ssr: false,
-  loading: () => (
+function ChartLoading() {
+  return (
     <p role="status" className="h-72 text-sm text-muted">
       Loading the chart…
     </p>
-  ),
+  );
+}
+
+const OperatingEnvelopeChart = dynamic(() => import("./operating-envelope-chart").then((m) => m.OperatingEnvelopeChart), {
+  ssr: false,
+  loading: () => <ChartLoading />,
 });
 
 /** The chart's grid: winds 0–15 m/s every 3 m/s (six curves stay readable), twelve line-outs. */
@@ -95,7 +100,9 @@ export function OperatingEnvelopeSection() {
               </p>
             )}
           </div>
-          <OperatingEnvelopeChart envelope={envelope} unitSystem={units} />
+          <WhenNear placeholder={<ChartLoading />}>
+            <OperatingEnvelopeChart envelope={envelope} unitSystem={units} />
+          </WhenNear>
           <p className="text-xs text-muted">
             Gusts at each point keep this setup&apos;s gust-to-wind ratio. Heights are of the tether point above the anchor, from the
             line&apos;s own weight and drag; planning estimates only.

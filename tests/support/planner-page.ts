@@ -75,6 +75,8 @@ export class PlannerPage {
 
   /** Waits until the operating envelope's chart has drawn its marks (it loads after the page). */
   async waitForEnvelopeChart(): Promise<void> {
+    // The chart mounts when its section comes near the screen, as a person scrolling to it would see.
+    await this.page.getByTestId("section-envelope").scrollIntoViewIfNeeded();
     const chart = this.page.getByTestId("envelope-chart");
     await chart.locator("svg [data-level]").first().waitFor({ timeout: 30_000 });
   }
