@@ -5,10 +5,10 @@
  * world (after pitch) so the guides stay truly vertical; always on top of the envelope because
  * B sits inside the hull.
  */
-import { Line } from "@react-three/drei";
 import { memo, useMemo } from "react";
 import { markerTexture, type MarkerKind } from "./label-texture";
 import { BUOYANCY, INK } from "./palette";
+import { PolyLine, type LinePoint } from "./polyline";
 
 const ON_TOP = 20;
 
@@ -21,7 +21,7 @@ interface MarkerProps {
 
 export const Marker = memo(function Marker({ kind, position, sizeM, guide }: MarkerProps) {
   const map = useMemo(() => markerTexture(kind), [kind]);
-  const guidePoints = useMemo<[number, number, number][] | null>(
+  const guidePoints = useMemo<LinePoint[] | null>(
     () =>
       guide
         ? [
@@ -37,16 +37,14 @@ export const Marker = memo(function Marker({ kind, position, sizeM, guide }: Mar
         <spriteMaterial map={map} transparent depthTest={false} depthWrite={false} toneMapped={false} />
       </sprite>
       {guide && guidePoints ? (
-        <Line
+        <PolyLine
           points={guidePoints}
           color={guide.colour}
-          lineWidth={1}
           dashed={guide.dashed}
           dashSize={0.3 * sizeM}
           gapSize={0.2 * sizeM}
-          transparent
           opacity={0.8}
-          depthTest={false}
+          onTop
           renderOrder={ON_TOP - 1}
         />
       ) : null}

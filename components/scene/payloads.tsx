@@ -3,9 +3,10 @@
  * Payloads hung from the mount's attachment point, each at its own size. A flag level adds a
  * coloured outline (second cue; the balance panel carries the words).
  */
-import { Edges, Line } from "@react-three/drei";
+import { Edges } from "@react-three/drei";
 import { memo, useMemo } from "react";
 import { FLAG_COLOURS, LINE, PAYLOAD } from "./palette";
+import { PolyLine } from "./polyline";
 import type { ScenePayload } from "./types";
 
 /** Keeps a zero-size input drawable (and pickable) rather than a degenerate geometry. */
@@ -74,7 +75,7 @@ const Payload = memo(
     const showHang = topZ < 0 && Math.hypot(payload.offset.x, topZ) > 1e-3;
     return (
       <group>
-        {showHang ? <Line points={hangPoints} color={LINE} lineWidth={1} /> : null}
+        {showHang ? <PolyLine points={hangPoints} color={LINE} /> : null}
         <group position={[payload.offset.x, payload.offset.z, 0]}>
           <PayloadShape payload={payload} />
         </group>

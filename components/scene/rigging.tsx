@@ -3,10 +3,10 @@
  * Lines and world furniture: bridle (in the pitched lifter), tether (fixed in the world, running
  * from the tether point to its anchor upwind), ground, wind arrow.
  */
-import { Line } from "@react-three/drei";
 import { memo, useMemo } from "react";
 import { DEG } from "./frame";
 import { textTexture } from "./label-texture";
+import { PolyLine } from "./polyline";
 import { ACCENT_DARK, GRID_MAJOR, GRID_MINOR, GROUND, INK, LINE } from "./palette";
 import type { SceneVec } from "./types";
 
@@ -37,8 +37,8 @@ export const Bridle = memo(function Bridle({ tetherPoint, railStartX, railEndX, 
   );
   return (
     <group name="bridle">
-      <Line points={fore} color={LINE} lineWidth={1.2} />
-      <Line points={aft} color={LINE} lineWidth={1.2} />
+      <PolyLine points={fore} color={LINE} lineWidthPx={1.2} />
+      <PolyLine points={aft} color={LINE} lineWidthPx={1.2} />
     </group>
   );
 });
@@ -76,7 +76,7 @@ export const Tether = memo(function Tether({ top, tetherAngleDeg, groundY, shape
     const drop = Math.max(0, top[1] - groundY);
     return [top, [top[0] - drop * Math.tan(angle), groundY, 0]];
   }, [top, tetherAngleDeg, groundY, shape]);
-  return <Line name="tether" points={points} color={INK} lineWidth={1.6} />;
+  return <PolyLine name="tether" points={points} color={INK} lineWidthPx={1.6} />;
 });
 
 interface GroundLabelProps {
