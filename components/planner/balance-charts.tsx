@@ -1,10 +1,11 @@
 "use client";
-import { useDeferredValue, useMemo } from "react";
+import { memo, useDeferredValue, useMemo } from "react";
 import { CartesianGrid, Line, LineChart, ReferenceLine, ResponsiveContainer, Tooltip, XAxis, YAxis } from "recharts";
 import { evaluateBalance, resolveLimits, type BalanceInput } from "@/lib/balance";
 import type { UnitSystem } from "@/lib/domain";
 import { toDisplay, unitOf } from "@/lib/units";
 import { usePlanner } from "./planner-context";
+import { useSettledValue } from "./use-settled-value";
 
 const WIND_POINTS = 31;
 const WIND_MAX_MS = 15;
@@ -42,8 +43,14 @@ function altitudeSweep(input: BalanceInput, units: UnitSystem) {
 export function BalanceCharts() {
   const liveInput = usePlanner((s) => s.input);
   const units = usePlanner((s) => s.unitSystem);
-  // The sweeps run a few dozen evaluations: let a drag paint first and catch up after.
-  const input = useDeferredValue(liveInput);
+  // The sweeps run a few dozen evaluations and redraw two charts: they follow the draft once it
+  // settles, so a drag moves at the pointer's pace, and then still let the page paint first.
+  const input = useDeferredValue(useSettledValue(liveInput));
+  return <SettledCharts input={input} units={units} />;
+}
+
+/** Memoised: while the draft moves, the settled input stays the same and the charts are not redrawn. */
+const SettledCharts = memo(function SettledCharts({ input, units }: { input: BalanceInput; units: UnitSystem }) {
   const wind = useMemo(() => windSweep(input, units), [input, units]);
   const altitude = useMemo(() => altitudeSweep(input, units), [input, units]);
   const cautionDeg = resolveLimits(input.envelope.limits).cautionTetherAngleDeg;
@@ -87,4 +94,4 @@ export function BalanceCharts() {
       </figure>
     </div>
   );
-}
+});

@@ -6,6 +6,7 @@
  * Loaded on the client only (next/dynamic in operating-envelope-section.tsx): Recharts stays out
  * of the page's first load.
  */
+import { memo } from "react";
 import { CartesianGrid, Legend, Line, LineChart, ResponsiveContainer, Tooltip, XAxis, YAxis } from "recharts";
 import type { EnvelopePoint, OperatingEnvelope } from "@/lib/balance";
 import type { FlagLevel, UnitSystem } from "@/lib/domain";
@@ -72,7 +73,11 @@ interface OperatingEnvelopeChartProps {
   unitSystem?: UnitSystem;
 }
 
-export function OperatingEnvelopeChart({ envelope, unitSystem = "metric" }: OperatingEnvelopeChartProps) {
+// Memoised: the section re-renders with every edit, the envelope it is given only once the draft settles.
+export const OperatingEnvelopeChart = memo(function OperatingEnvelopeChart({
+  envelope,
+  unitSystem = "metric",
+}: OperatingEnvelopeChartProps) {
   const units = unitSystem;
   const series = envelope.windsMS.map((windMS, i) => ({
     windMS,
@@ -181,6 +186,6 @@ export function OperatingEnvelopeChart({ envelope, unitSystem = "metric" }: Oper
       </details>
     </figure>
   );
-}
+});
 
 export default OperatingEnvelopeChart;

@@ -6,6 +6,7 @@ import { INPUT_LIMITS as L, type UnitSystem } from "@/lib/domain";
 import { WhenNear } from "@/components/ui/when-near";
 import { formatQuantity } from "@/lib/units";
 import { usePlanner, usePlannerActions } from "./planner-context";
+import { useSettledValue } from "./use-settled-value";
 import { QuantityInput } from "./quantity-input";
 import { Section } from "./section";
 
@@ -47,8 +48,9 @@ export function OperatingEnvelopeSection() {
   const units = usePlanner((s) => s.unitSystem);
   const readOnly = usePlanner((s) => s.readOnly ?? false);
   const { setTargetHeight } = usePlannerActions();
-  // Over a hundred evaluations: let a drag paint first and catch up after.
-  const input = useDeferredValue(liveInput);
+  // Over a hundred evaluations and a chart: they follow the draft once it settles (see
+  // useSettledValue), then still let the page paint first.
+  const input = useDeferredValue(useSettledValue(liveInput));
   const envelope = useMemo(
     () => operatingEnvelope(input, { ...CHART_OPTIONS, ...(targetHeightM === null ? {} : { targetHeightM }) }),
     [input, targetHeightM],
