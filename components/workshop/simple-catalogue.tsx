@@ -10,6 +10,7 @@ import { applyServerIssues, NumberField, SelectField, TextField } from "./form-f
 import { ActiveBadge, ItemActions } from "./item-actions";
 import { siResolver, toFormValues, type NumberFieldSpec } from "./si-form";
 import { SIMPLE_KINDS, type SimpleKind } from "./simple-kinds";
+import { WorkshopTable } from "./workshop-table";
 
 export interface SimpleRow {
   id: string;
@@ -154,7 +155,7 @@ export function SimpleCatalogue({ kind, rows, unitSystem }: SimpleCatalogueProps
       {editing && editing.id === null && (
         <ItemForm kind={kind} id={null} initial={editing.initial} unitSystem={unitSystem} onDone={() => setEditing(null)} />
       )}
-      <table className="panel w-full border-separate border-spacing-0 text-sm" data-testid={`workshop-${kind}`}>
+      <WorkshopTable testId={`workshop-${kind}`}>
         <thead className="text-left text-muted">
           <tr>
             <th className="px-3 py-2">Name</th>
@@ -202,7 +203,7 @@ export function SimpleCatalogue({ kind, rows, unitSystem }: SimpleCatalogueProps
             </tr>
           ))}
         </tbody>
-      </table>
+      </WorkshopTable>
       {editing && editing.id !== null && (
         <ItemForm
           key={editing.id}

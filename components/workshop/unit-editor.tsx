@@ -12,6 +12,7 @@ import { unitCalibrationFactor, type LiftTestFacts } from "@/lib/setups/calibrat
 import { formatQuantity } from "@/lib/units";
 import { applyServerIssues, NumberField, SelectField, TextField } from "./form-fields";
 import { siResolver, toFormValues, type NumberFieldSpec } from "./si-form";
+import { WorkshopTable } from "./workshop-table";
 
 export interface UnitLiftTestView extends LiftTestFacts {
   id: string;
@@ -116,7 +117,7 @@ function LiftTests({
   return (
     <div className="space-y-3">
       <h2 className="text-lg">Lift tests</h2>
-      <table className="panel w-full border-separate border-spacing-0 text-sm" data-testid="lift-tests">
+      <WorkshopTable testId="lift-tests">
         <thead className="text-left text-muted">
           <tr>
             <th className="px-3 py-2">Date</th>
@@ -169,7 +170,7 @@ function LiftTests({
             </tr>
           )}
         </tbody>
-      </table>
+      </WorkshopTable>
       <form
         onSubmit={form.handleSubmit((v) => add.mutate(v as LiftTestValues))}
         noValidate

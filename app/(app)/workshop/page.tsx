@@ -7,6 +7,7 @@ import { requirePageViewer } from "@/lib/auth/guard";
 import { pageQuerySchema, WORKSHOP_PAGE_SIZE } from "@/lib/catalogue/schemas";
 import { MAKER_ONLY } from "@/lib/domain";
 import { formatQuantity } from "@/lib/units";
+import { WorkshopTable } from "@/components/workshop/workshop-table";
 
 export const metadata = { title: "Workshop: envelope models" };
 
@@ -30,7 +31,7 @@ export default async function WorkshopModelsPage({ searchParams }: PageProps<"/w
           New model
         </Link>
       </div>
-      <table className="panel w-full border-separate border-spacing-0 text-sm" data-testid="workshop-models">
+      <WorkshopTable testId="workshop-models">
         <thead className="text-left text-muted">
           <tr>
             <th className="px-3 py-2">Model</th>
@@ -69,7 +70,7 @@ export default async function WorkshopModelsPage({ searchParams }: PageProps<"/w
             </tr>
           ))}
         </tbody>
-      </table>
+      </WorkshopTable>
       <Pager basePath="/workshop" page={list.page} pageSize={list.pageSize} total={list.total} />
     </section>
   );

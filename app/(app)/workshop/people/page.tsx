@@ -5,6 +5,7 @@ import { WorkshopNav } from "@/components/workshop/workshop-nav";
 import { requirePageViewer } from "@/lib/auth/guard";
 import { pageQuerySchema, WORKSHOP_PAGE_SIZE } from "@/lib/catalogue/schemas";
 import { MAKER_ONLY } from "@/lib/domain";
+import { WorkshopTable } from "@/components/workshop/workshop-table";
 
 export const metadata = { title: "Workshop: people" };
 
@@ -21,7 +22,7 @@ export default async function WorkshopPeoplePage({ searchParams }: PageProps<"/w
         title="People"
         intro="Who may do what. A role changes only when you confirm it; your own account keeps the maker role."
       />
-      <table className="panel w-full border-separate border-spacing-0 text-sm" data-testid="workshop-users">
+      <WorkshopTable testId="workshop-users">
         <thead className="text-left text-muted">
           <tr>
             <th className="px-3 py-2">Name</th>
@@ -40,7 +41,7 @@ export default async function WorkshopPeoplePage({ searchParams }: PageProps<"/w
             </tr>
           ))}
         </tbody>
-      </table>
+      </WorkshopTable>
       <Pager basePath="/workshop/people" page={list.page} pageSize={list.pageSize} total={list.total} />
     </section>
   );

@@ -8,6 +8,7 @@ import { requirePageViewer } from "@/lib/auth/guard";
 import { pageQuerySchema, WORKSHOP_PAGE_SIZE } from "@/lib/catalogue/schemas";
 import { MAKER_ONLY } from "@/lib/domain";
 import { formatQuantity } from "@/lib/units";
+import { WorkshopTable } from "@/components/workshop/workshop-table";
 
 export const metadata = { title: "Workshop: serial units" };
 
@@ -30,7 +31,7 @@ export default async function WorkshopUnitsPage({ searchParams }: PageProps<"/wo
           New unit
         </Link>
       </div>
-      <table className="panel w-full border-separate border-spacing-0 text-sm" data-testid="workshop-units">
+      <WorkshopTable testId="workshop-units">
         <thead className="text-left text-muted">
           <tr>
             <th className="px-3 py-2">Serial</th>
@@ -73,7 +74,7 @@ export default async function WorkshopUnitsPage({ searchParams }: PageProps<"/wo
             </tr>
           ))}
         </tbody>
-      </table>
+      </WorkshopTable>
       <Pager basePath="/workshop/units" page={list.page} pageSize={list.pageSize} total={list.total} />
     </section>
   );
