@@ -193,9 +193,24 @@ function printRow(label: string, f: PageFigures): void {
   );
 }
 
+/**
+ * Lighthouse now and then fails to record a trace (NO_NAVSTART) and asks to be run again: a run
+ * that fails so is tried again, twice at most; any other failure stops the bench.
+ */
+async function measureWithRetry(baseURL: string, page: PageToMeasure, options: RunOptions): Promise<PageFigures> {
+  for (let attempt = 1; ; attempt++) {
+    try {
+      return await measure(baseURL, page, options);
+    } catch (error) {
+      if (attempt >= 3 || !String(error).includes("run Lighthouse again")) throw error;
+      console.warn(`[bench:web] ${page.label}: ${String(error)}; trying again`);
+    }
+  }
+}
+
 async function medianOf(baseURL: string, page: PageToMeasure, options: RunOptions, reportName: string): Promise<PageFigures> {
   const runs: PageFigures[] = [];
-  for (let i = 0; i < RUNS; i++) runs.push(await measure(baseURL, page, options));
+  for (let i = 0; i < RUNS; i++) runs.push(await measureWithRetry(baseURL, page, options));
   runs.sort((a, b) => a.score - b.score);
   const median = runs[Math.floor(runs.length / 2)];
   mkdirSync(REPORT_DIR, { recursive: true });
