@@ -134,10 +134,7 @@ export async function listQueue(filter: QueueFilter): Promise<{ rows: QueueRow[]
     filter.q
       ? db.select({ total: count() }).from(setups).innerJoin(user, eq(setups.ownerId, user.id)).where(where)
       : db.select({ total: count() }).from(setups).where(where);
-  const strip = ({ ownerId: _o, ownerEmail: _e, version: _v, ...row }: SetupHeader & { modelId: string; total?: number }) => {
-    const { total: _t, ...queueRow } = row;
-    return queueRow;
-  };
+  const strip = ({ ownerId: _o, ownerEmail: _e, version: _v, total: _t, ...row }: SetupHeader & { modelId: string; total?: number }) => row;
   if (filter.q) {
     // A search reads every match to order them, so it counts them in the same pass (a window
     // function) instead of reading them all a second time; a page past the end has no row to
