@@ -1,6 +1,7 @@
 /**
  * Marker and label textures drawn on a 2D canvas with the system font: no font files are fetched
- * at run time. Cached per content, so re-renders never redraw them.
+ * at run time. Cached per content, so re-renders never redraw them. An OffscreenCanvas where
+ * there is no document (in the worker that draws the view).
  */
 import { CanvasTexture, SRGBColorSpace } from "three";
 import { ACCENT, BUOYANCY, INK } from "./palette";
@@ -8,15 +9,24 @@ import { ACCENT, BUOYANCY, INK } from "./palette";
 export type MarkerKind = "buoyancy" | "mass" | "tether";
 
 const TEXTURE_HEIGHT_PX = 128;
-const cache = new Map<string, CanvasTexture>();
+type LabelTexture = CanvasTexture<HTMLCanvasElement | OffscreenCanvas>;
+const cache = new Map<string, LabelTexture>();
 
-function canvasTexture(key: string, widthPx: number, draw: (ctx: CanvasRenderingContext2D) => void): CanvasTexture {
-  const cached = cache.get(key);
-  if (cached) return cached;
+type Context2D = CanvasRenderingContext2D | OffscreenCanvasRenderingContext2D;
+
+function drawingCanvas(widthPx: number, heightPx: number): HTMLCanvasElement | OffscreenCanvas {
+  if (typeof document === "undefined") return new OffscreenCanvas(widthPx, heightPx);
   const canvas = document.createElement("canvas");
   canvas.width = widthPx;
-  canvas.height = TEXTURE_HEIGHT_PX;
-  const ctx = canvas.getContext("2d");
+  canvas.height = heightPx;
+  return canvas;
+}
+
+function canvasTexture(key: string, widthPx: number, draw: (ctx: Context2D) => void): LabelTexture {
+  const cached = cache.get(key);
+  if (cached) return cached;
+  const canvas = drawingCanvas(widthPx, TEXTURE_HEIGHT_PX);
+  const ctx = canvas.getContext("2d") as Context2D | null;
   if (ctx) draw(ctx);
   const texture = new CanvasTexture(canvas);
   texture.colorSpace = SRGBColorSpace;
@@ -25,7 +35,7 @@ function canvasTexture(key: string, widthPx: number, draw: (ctx: CanvasRendering
   return texture;
 }
 
-function letter(ctx: CanvasRenderingContext2D, text: string, colour: string): void {
+function letter(ctx: Context2D, text: string, colour: string): void {
   ctx.font = "700 84px ui-sans-serif, system-ui, sans-serif";
   ctx.textBaseline = "middle";
   ctx.textAlign = "left";
@@ -38,7 +48,7 @@ function letter(ctx: CanvasRenderingContext2D, text: string, colour: string): vo
 }
 
 /** Shape on the left half (centre at u = 0.25), letter on the right: the shape carries the meaning. */
-export function markerTexture(kind: MarkerKind): CanvasTexture {
+export function markerTexture(kind: MarkerKind): LabelTexture {
   return canvasTexture(`marker:${kind}`, 2 * TEXTURE_HEIGHT_PX, (ctx) => {
     const c = 64;
     const r = 46;
@@ -97,7 +107,7 @@ export function markerTexture(kind: MarkerKind): CanvasTexture {
 }
 
 /** A short text label (e.g. the wind speed), ink on a paper pill; width in texture pixels. */
-export function textTexture(text: string): { texture: CanvasTexture; aspect: number } {
+export function textTexture(text: string): { texture: LabelTexture; aspect: number } {
   const widthPx = Math.min(1024, Math.max(128, Math.ceil((text.length * 44 + 48) / 64) * 64));
   const texture = canvasTexture(`text:${text}`, widthPx, (ctx) => {
     ctx.fillStyle = "rgba(245,243,238,0.92)";

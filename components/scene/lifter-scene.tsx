@@ -1,225 +1,74 @@
 "use client";
 /**
- * The Planner's 3D view: envelope, belly rail, mount and payloads, bridle and tether, markers,
- * wind. Draws exactly its props (see types.ts); the only fetch is the envelope's GLB.
+ * The 3D view's frame on the page: the element tests and screen readers see (role="img" with the
+ * summary, data-ready, data-mount-screen), the "Reset view" button, and the view inside it. A
+ * worker draws the view where the browser allows it (worker-view.tsx); otherwise the page does
+ * (inline-view.tsx, loaded only then). Neither this file nor the worker view loads three.js.
  */
-import { OrbitControls } from "@react-three/drei";
-import { Canvas } from "@react-three/fiber";
-import { memo, Suspense, useCallback, useMemo, useRef, type RefObject } from "react";
-import type { Group, Mesh } from "three";
-import type { OrbitControls as OrbitControlsImpl } from "three-stdlib";
-import { Envelope } from "./envelope";
-import { pitchedWorldPoint, sceneScale, DEG } from "./frame";
-import { Markers } from "./markers";
-import { PAPER } from "./palette";
-import { MountScreenProbe, ReadySignal } from "./probes";
-import { Mount, Rail } from "./rail-mount";
-import { Bridle, Ground, GroundLabel, Tether, WindArrow } from "./rigging";
-import type { LifterSceneProps } from "./types";
-import { useMountDrag } from "./use-mount-drag";
+import dynamic from "next/dynamic";
+import { useCallback, useRef, useState } from "react";
+import type { LifterSceneProps, SceneDrawing } from "./types";
+import { canDrawInWorker, WorkerView } from "./worker-view";
 
-/** Keeps the camera above the ground: the target is above it, so stop just short of level. */
-const MAX_POLAR_RAD = Math.PI / 2 - 0.06;
-
-function assertWebGL(): void {
-  const canvas = document.createElement("canvas");
-  const context = canvas.getContext("webgl2") ?? canvas.getContext("webgl");
-  if (!context) throw new Error("WebGL is not available");
-  context.getExtension("WEBGL_lose_context")?.loseContext();
-}
-
-interface LifterProps extends LifterSceneProps {
-  wrapperRef: RefObject<HTMLDivElement | null>;
-  controlsRef: RefObject<OrbitControlsImpl | null>;
-}
-
-/** Everything inside the Canvas; split out so hooks can read the R3F state. */
-const Lifter = memo(function Lifter(props: LifterProps) {
-  const {
-    glbUrl,
-    hullLengthM,
-    hullMaxDiameterM,
-    rail,
-    railTabCount,
-    mountX,
-    payloads,
-    buoyancyCentre,
-    centreOfMass,
-    tetherPoint,
-    trimDeg: flyingTrimDeg,
-    tetherAngleDeg,
-    windMS,
-    windLabel,
-    onMountDrag,
-    onMountDragEnd,
-    mountSelected = false,
-    wrapperRef,
-    controlsRef,
-    tetherLine = null,
-    grounded = false,
-    groundedLabel,
-  } = props;
-  // A lifter that does not fly rests level on the ground.
-  const trimDeg = grounded ? 0 : flyingTrimDeg;
-  const bodyRef = useRef<Group>(null);
-  const mountRef = useRef<Mesh>(null);
-  const scale = useMemo(() => sceneScale(hullLengthM, hullMaxDiameterM, tetherPoint), [hullLengthM, hullMaxDiameterM, tetherPoint]);
-  const unitM = scale.lengthM;
-  // On the ground, the ground comes up to the lowest thing hung under it (drawing only).
-  const lowestZ = useMemo(
-    () => Math.min(-0.5 * hullMaxDiameterM, tetherPoint.z, ...payloads.map((p) => rail.z + p.offset.z - 0.5 * p.heightM)),
-    [hullMaxDiameterM, tetherPoint.z, payloads, rail.z],
-  );
-  const groundY = grounded ? lowestZ - 0.01 * unitM : scale.groundY;
-  const { onPointerDown } = useMountDrag({
-    bodyRef,
-    controlsRef,
-    railStartX: rail.startX,
-    railEndX: rail.endX,
-    railZ: rail.z,
-    onMountDrag,
-    onMountDragEnd,
-  });
-  const draggable = onMountDrag !== undefined;
-
-  // Memoised on the numbers, not the objects: the Planner hands new objects on every drag.
-  const { x: tx, z: tz } = tetherPoint;
-  const { x: bx, z: bz } = buoyancyCentre;
-  const mx = centreOfMass?.x;
-  const mz = centreOfMass?.z;
-  const tetherWorld = useMemo(() => [tx, tz, 0] as [number, number, number], [tx, tz]);
-  const buoyancyWorld = useMemo(() => pitchedWorldPoint({ x: bx, z: bz }, { x: tx, z: tz }, trimDeg), [bx, bz, tx, tz, trimDeg]);
-  const massWorld = useMemo(
-    () => (mx === undefined || mz === undefined ? null : pitchedWorldPoint({ x: mx, z: mz }, { x: tx, z: tz }, trimDeg)),
-    [mx, mz, tx, tz, trimDeg],
-  );
-  const guideToY = tetherPoint.z - 0.12 * unitM;
-  const guideFromY = 0.5 * hullMaxDiameterM + 0.12 * unitM;
-  const windTail = useMemo<[number, number, number]>(
-    () => [-0.75 * unitM, 0.5 * hullMaxDiameterM + 0.05 * unitM, 0],
-    [unitM, hullMaxDiameterM],
-  );
-
-  return (
-    <>
-      <color attach="background" args={[PAPER]} />
-      {/* Fog into the paper colour hides the ground's edge at any zoom. */}
-      <fog attach="fog" args={[PAPER, 5 * unitM, 14 * unitM]} />
-      <hemisphereLight args={["#ffffff", "#d8d2c4", 1.4]} />
-      <directionalLight position={[2 * unitM, 4 * unitM, 3 * unitM]} intensity={1.6} />
-      <directionalLight position={[-2 * unitM, 1 * unitM, -3 * unitM]} intensity={0.5} />
-      <Ground y={groundY} sizeM={40 * unitM} centreX={scale.target[0]} />
-
-      {/* Pitch about the tether point: nose up (+) is a clockwise turn with the nose on the left. */}
-      <group position={tetherWorld} rotation-z={-trimDeg * DEG}>
-        <group ref={bodyRef} position={[-tetherPoint.x, -tetherPoint.z, 0]} name="lifter-body">
-          <Suspense fallback={null}>
-            <Envelope url={glbUrl} />
-            <ReadySignal wrapperRef={wrapperRef} />
-          </Suspense>
-          <Rail
-            startX={rail.startX}
-            endX={rail.endX}
-            z={rail.z}
-            tabCount={railTabCount}
-            unitM={unitM}
-            onPointerDown={onPointerDown}
-            draggable={draggable}
-          />
-          <Mount
-            x={mountX}
-            z={rail.z}
-            unitM={unitM}
-            payloads={payloads}
-            selected={mountSelected}
-            mountRef={mountRef}
-            onPointerDown={onPointerDown}
-            draggable={draggable}
-          />
-          <Bridle tetherPoint={tetherPoint} railStartX={rail.startX} railEndX={rail.endX} railZ={rail.z} />
-        </group>
-      </group>
-
-      <Tether top={tetherWorld} tetherAngleDeg={grounded ? 0 : tetherAngleDeg} groundY={groundY} shape={grounded ? null : tetherLine} />
-      {grounded && groundedLabel ? (
-        <GroundLabel
-          text={groundedLabel}
-          position={[0.5 * hullLengthM, groundY + 0.04 * unitM, 1.2 * hullMaxDiameterM]}
-          heightM={0.07 * unitM}
-        />
-      ) : null}
-      <Markers
-        buoyancy={buoyancyWorld}
-        mass={massWorld}
-        tether={tetherWorld}
-        sizeM={0.07 * unitM}
-        guideFromY={guideFromY}
-        guideToY={guideToY}
-      />
-      {windMS > 0 && !grounded ? <WindArrow windMS={windMS} label={windLabel} tail={windTail} lengthUnitM={unitM} /> : null}
-
-      <OrbitControls
-        ref={controlsRef}
-        makeDefault
-        target={scale.target}
-        enablePan={false}
-        enableDamping={false}
-        minDistance={scale.minDistanceM}
-        maxDistance={scale.maxDistanceM}
-        maxPolarAngle={MAX_POLAR_RAD}
-      />
-      <MountScreenProbe wrapperRef={wrapperRef} mountRef={mountRef} />
-    </>
-  );
-});
+const InlineView = dynamic(() => import("./inline-view"), { ssr: false });
 
 export interface LifterSceneComponentProps extends LifterSceneProps {
   className?: string;
 }
 
-export function LifterScene({ summary = "3D view of the lifter", className = "", ...props }: LifterSceneComponentProps) {
-  useMemo(() => assertWebGL(), []);
+export function LifterScene({
+  summary = "3D view of the lifter",
+  className = "",
+  onMountDrag,
+  onMountDragEnd,
+  ...drawn
+}: LifterSceneComponentProps) {
   const wrapperRef = useRef<HTMLDivElement>(null);
-  const controlsRef = useRef<OrbitControlsImpl>(null);
-  const scale = useMemo(
-    () => sceneScale(props.hullLengthM, props.hullMaxDiameterM, props.tetherPoint),
-    [props.hullLengthM, props.hullMaxDiameterM, props.tetherPoint],
-  );
+  const [viewResetCount, setViewResetCount] = useState(0);
+  const [thread, setThread] = useState<"worker" | "page">(() => (canDrawInWorker() ? "worker" : "page"));
+  const [failure, setFailure] = useState<Error | null>(null);
+  // The error boundary around the view shows its text fallback.
+  if (failure) throw failure;
 
-  const resetView = useCallback(() => {
-    const controls = controlsRef.current;
-    if (!controls) return;
-    controls.object.position.set(...scale.cameraPosition);
-    controls.target.set(...scale.target);
-    controls.update(); // dispatches "change", which asks the demand loop for a frame
-  }, [scale]);
+  const onReady = useCallback((ready: boolean) => {
+    if (ready) wrapperRef.current?.setAttribute("data-ready", "true");
+    else wrapperRef.current?.removeAttribute("data-ready");
+  }, []);
+  const onMountScreen = useCallback((x: number, y: number) => wrapperRef.current?.setAttribute("data-mount-screen", `${x},${y}`), []);
+  const onUnsupported = useCallback(() => setThread("page"), []);
+  const onFailed = useCallback((message: string) => setFailure(new Error(message)), []);
+
+  const drawing: SceneDrawing = { ...drawn, draggable: onMountDrag !== undefined, viewResetCount };
+  const callbacks = { onMountDrag, onMountDragEnd, onReady, onMountScreen };
 
   return (
     <div className={`relative h-full w-full ${className}`}>
       <div
         ref={wrapperRef}
         data-testid="lifter-canvas"
-        data-tether={props.grounded ? "slack" : props.tetherLine && props.tetherLine.length >= 2 ? "curve" : "straight"}
-        data-grounded={props.grounded ? "true" : "false"}
+        data-thread={thread}
+        data-tether={drawn.grounded ? "slack" : drawn.tetherLine && drawn.tetherLine.length >= 2 ? "curve" : "straight"}
+        data-grounded={drawn.grounded ? "true" : "false"}
         role="img"
         aria-label={summary}
-        className="absolute inset-0 touch-none select-none"
+        className="peer absolute inset-0 touch-none select-none"
       >
-        <Canvas
-          frameloop="demand"
-          dpr={1}
-          gl={{ antialias: false }}
-          onCreated={({ gl }) => {
-            gl.debug.checkShaderErrors = process.env.NODE_ENV !== "production";
-          }}
-          camera={{ position: scale.cameraPosition, fov: 35, near: 0.01, far: 40 * scale.lengthM }}
-        >
-          <Lifter {...props} wrapperRef={wrapperRef} controlsRef={controlsRef} />
-        </Canvas>
+        {thread === "worker" ? (
+          <WorkerView drawing={drawing} {...callbacks} onUnsupported={onUnsupported} onFailed={onFailed} />
+        ) : (
+          <InlineView drawing={drawing} {...callbacks} />
+        )}
       </div>
+      {/* Hidden by CSS once the view reports ready, so readiness re-renders nothing. */}
+      <p
+        role="status"
+        className="pointer-events-none absolute inset-0 flex items-center justify-center text-sm text-muted peer-data-[ready=true]:hidden"
+      >
+        Loading the 3D view…
+      </p>
       <button
         type="button"
-        onClick={resetView}
+        onClick={() => setViewResetCount((count) => count + 1)}
         className="absolute right-3 top-3 rounded border border-hairline bg-white/90 px-3 py-1.5 text-sm text-ink shadow-sm hover:border-accent focus-visible:outline-2 focus-visible:outline-accent"
       >
         Reset view

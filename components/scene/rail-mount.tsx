@@ -8,6 +8,7 @@ import { memo, useCallback, useMemo, type RefObject } from "react";
 import type { Mesh } from "three";
 import { ACCENT, ACCENT_DARK, RAIL, RAIL_TAB } from "./palette";
 import { Payloads } from "./payloads";
+import { usePointerSurface } from "./pointer-surface";
 import type { ScenePayload } from "./types";
 
 /** Proportions of the hardware relative to the hull length (drawing only). */
@@ -22,6 +23,17 @@ const SCREW_RADIUS = 0.0035;
 const SCREW_LENGTH = 0.028;
 /** Invisible, fatter rail used only for picking so the rail is easy to grab. */
 const RAIL_PICK_SCALE = 3;
+
+/** A grab cursor over what can be dragged. */
+function useHoverCursor(draggable: boolean): (cursor: string) => void {
+  const surface = usePointerSurface();
+  return useCallback(
+    (cursor: string) => {
+      if (draggable) surface.style.setProperty("cursor", cursor);
+    },
+    [draggable, surface],
+  );
+}
 
 interface RailProps {
   startX: number;
@@ -41,23 +53,14 @@ export const Rail = memo(function Rail({ startX, endX, z, tabCount, unitM, onPoi
     if (count === 1) return [centreX];
     return Array.from({ length: count }, (_, i) => startX + ((endX - startX) * i) / (count - 1));
   }, [tabCount, startX, endX, centreX]);
-  const setCursor = useCallback(
-    (event: ThreeEvent<PointerEvent>, cursor: string) => {
-      if (draggable) (event.nativeEvent.target as HTMLElement | null)?.style.setProperty("cursor", cursor);
-    },
-    [draggable],
-  );
+  const setCursor = useHoverCursor(draggable);
   return (
     <group name="rail" position={[centreX, z, 0]}>
       <mesh>
         <boxGeometry args={[lengthM, RAIL_HEIGHT * unitM, RAIL_WIDTH * unitM]} />
         <meshLambertMaterial color={RAIL} />
       </mesh>
-      <mesh
-        onPointerDown={onPointerDown}
-        onPointerOver={(event) => setCursor(event, "grab")}
-        onPointerOut={(event) => setCursor(event, "")}
-      >
+      <mesh onPointerDown={onPointerDown} onPointerOver={() => setCursor("grab")} onPointerOut={() => setCursor("")}>
         <boxGeometry args={[lengthM, RAIL_PICK_SCALE * CARRIAGE_HEIGHT * unitM, RAIL_PICK_SCALE * RAIL_WIDTH * unitM]} />
         {/* Drawn but writes nothing: a hidden mesh would not be picked. */}
         <meshBasicMaterial colorWrite={false} depthWrite={false} />
@@ -88,19 +91,10 @@ interface MountProps {
 export const Mount = memo(function Mount({ x, z, unitM, payloads, selected, mountRef, onPointerDown, draggable }: MountProps) {
   const carriageY = -0.5 * (RAIL_HEIGHT + CARRIAGE_HEIGHT) * unitM;
   const screwY = carriageY - 0.5 * (CARRIAGE_HEIGHT + SCREW_LENGTH) * unitM;
-  const setCursor = useCallback(
-    (event: ThreeEvent<PointerEvent>, cursor: string) => {
-      if (draggable) (event.nativeEvent.target as HTMLElement | null)?.style.setProperty("cursor", cursor);
-    },
-    [draggable],
-  );
+  const setCursor = useHoverCursor(draggable);
   return (
     <group name="mount" position={[x, z, 0]}>
-      <group
-        onPointerDown={onPointerDown}
-        onPointerOver={(event) => setCursor(event, "grab")}
-        onPointerOut={(event) => setCursor(event, "")}
-      >
+      <group onPointerDown={onPointerDown} onPointerOver={() => setCursor("grab")} onPointerOut={() => setCursor("")}>
         <mesh ref={mountRef} position-y={carriageY} name="mount-carriage">
           <boxGeometry args={[CARRIAGE_LENGTH * unitM, CARRIAGE_HEIGHT * unitM, CARRIAGE_WIDTH * unitM]} />
           <meshLambertMaterial color={ACCENT} emissive={selected ? ACCENT : "#000000"} emissiveIntensity={selected ? 0.35 : 0} />

@@ -50,3 +50,22 @@ export interface LifterSceneProps {
   /** Short text (22 characters at most) on the ground beside a grounded lifter, e.g. "it does not fly". */
   groundedLabel?: string;
 }
+
+/**
+ * What a view draws: the scene's props without its callbacks and text, so they can be posted to
+ * the worker that draws in most browsers. `viewResetCount` puts the camera back each time it grows.
+ */
+export type SceneDrawing = Omit<LifterSceneProps, "onMountDrag" | "onMountDragEnd" | "summary"> & {
+  draggable: boolean;
+  viewResetCount: number;
+};
+
+/** What a view reports back to the page, from whichever thread draws. */
+export interface SceneCallbacks {
+  onMountDrag?: (positionXM: number) => void;
+  onMountDragEnd?: () => void;
+  /** True once the envelope has loaded and a frame is drawn; false when the view starts over. */
+  onReady: (ready: boolean) => void;
+  /** The mount carriage's centre in CSS pixels from the view's top-left, when it moves on screen. */
+  onMountScreen: (x: number, y: number) => void;
+}

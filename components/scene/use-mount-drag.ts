@@ -1,15 +1,15 @@
-/* eslint-disable react-hooks/immutability -- pointer capture and the cursor live on three's canvas element, which is imperative by nature; nothing here feeds React's render. */
 "use client";
 /**
  * Dragging the mount along the belly rail. The pointer's ray is taken into the pitched lifter's
  * local frame and met with the rail line (closest point between two lines), so the drag follows
- * the rail whatever the trim or the view. Window-free: listeners live on the canvas with pointer
- * capture. Scratch objects are module-level: nothing is allocated per pointer move.
+ * the rail whatever the trim or the view. Window-free: listeners live on the pointer surface (the
+ * view's element, or its stand-in in the worker) with pointer capture. Scratch objects are module-level: nothing is allocated per pointer move.
  */
 import { useThree, type ThreeEvent } from "@react-three/fiber";
 import { useCallback, useEffect, useRef, type RefObject, useLayoutEffect } from "react";
 import { Matrix4, Ray, Raycaster, Vector2, type Object3D } from "three";
 import type { OrbitControls as OrbitControlsImpl } from "three-stdlib";
+import { usePointerSurface } from "./pointer-surface";
 
 const scratchNdc = new Vector2();
 const scratchRaycaster = new Raycaster();
@@ -38,7 +38,7 @@ export interface MountDragHandlers {
 
 export function useMountDrag(options: MountDragOptions): MountDragHandlers {
   const camera = useThree((state) => state.camera);
-  const gl = useThree((state) => state.gl);
+  const surface = usePointerSurface();
   // Latest options without re-binding listeners on every render.
   const latest = useRef(options);
   useLayoutEffect(() => {
@@ -50,9 +50,8 @@ export function useMountDrag(options: MountDragOptions): MountDragHandlers {
   const railXUnderPointer = useCallback(
     (offsetX: number, offsetY: number): number | null => {
       const body = latest.current.bodyRef.current;
-      const canvas = gl.domElement;
-      if (!body || canvas.clientWidth === 0 || canvas.clientHeight === 0) return null;
-      scratchNdc.set((offsetX / canvas.clientWidth) * 2 - 1, -(offsetY / canvas.clientHeight) * 2 + 1);
+      if (!body || surface.clientWidth === 0 || surface.clientHeight === 0) return null;
+      scratchNdc.set((offsetX / surface.clientWidth) * 2 - 1, -(offsetY / surface.clientHeight) * 2 + 1);
       scratchRaycaster.setFromCamera(scratchNdc, camera);
       body.updateWorldMatrix(true, false);
       scratchRay.copy(scratchRaycaster.ray).applyMatrix4(scratchInverse.copy(body.matrixWorld).invert());
@@ -70,7 +69,7 @@ export function useMountDrag(options: MountDragOptions): MountDragHandlers {
       const { railStartX, railEndX } = latest.current;
       return Math.min(Math.max(s, Math.min(railStartX, railEndX)), Math.max(railStartX, railEndX));
     },
-    [camera, gl],
+    [camera, surface],
   );
 
   const emit = useCallback(
@@ -94,27 +93,25 @@ export function useMountDrag(options: MountDragOptions): MountDragHandlers {
     (event: PointerEvent) => {
       if (!dragging.current) return;
       dragging.current = false;
-      const canvas = gl.domElement;
-      if (canvas.hasPointerCapture(event.pointerId)) canvas.releasePointerCapture(event.pointerId);
-      canvas.style.cursor = "";
+      if (surface.hasPointerCapture(event.pointerId)) surface.releasePointerCapture(event.pointerId);
+      surface.style.setProperty("cursor", "");
       const controls = latest.current.controlsRef.current;
       if (controls) controls.enabled = true;
       latest.current.onMountDragEnd?.();
     },
-    [gl],
+    [surface],
   );
 
   useEffect(() => {
-    const canvas = gl.domElement;
-    canvas.addEventListener("pointermove", onMove);
-    canvas.addEventListener("pointerup", finish);
-    canvas.addEventListener("pointercancel", finish);
+    surface.addEventListener("pointermove", onMove);
+    surface.addEventListener("pointerup", finish);
+    surface.addEventListener("pointercancel", finish);
     return () => {
-      canvas.removeEventListener("pointermove", onMove);
-      canvas.removeEventListener("pointerup", finish);
-      canvas.removeEventListener("pointercancel", finish);
+      surface.removeEventListener("pointermove", onMove);
+      surface.removeEventListener("pointerup", finish);
+      surface.removeEventListener("pointercancel", finish);
     };
-  }, [gl, onMove, finish]);
+  }, [surface, onMove, finish]);
 
   const onPointerDown = useCallback(
     (event: ThreeEvent<PointerEvent>) => {
@@ -124,13 +121,12 @@ export function useMountDrag(options: MountDragOptions): MountDragHandlers {
       lastX.current = Number.NaN;
       const controls = latest.current.controlsRef.current;
       if (controls) controls.enabled = false;
-      const canvas = gl.domElement;
-      canvas.setPointerCapture(event.pointerId);
-      canvas.style.cursor = "grabbing";
+      surface.setPointerCapture(event.pointerId);
+      surface.style.setProperty("cursor", "grabbing");
       // A press on the rail moves the mount there at once.
       emit(event.nativeEvent.offsetX, event.nativeEvent.offsetY);
     },
-    [emit, gl],
+    [emit, surface],
   );
 
   return { onPointerDown, dragging };

@@ -1,0 +1,121 @@
+"use client";
+/**
+ * The view drawn by a worker (scene.worker.tsx) on a canvas handed over to it: three.js never
+ * loads on the page's main thread, so the page answers input while the view loads and compiles.
+ * This side only forwards: the drawing when it changes, the view's size, the pointer and wheel
+ * events; and relays what the worker reports to the page's callbacks.
+ */
+import { useEffect, useRef } from "react";
+import type { SceneCallbacks, SceneDrawing } from "./types";
+import { FORWARDED_EVENTS, toForwardedEvent, type FromSceneWorker, type ToSceneWorker } from "./worker-protocol";
+
+/** Marked on the page for each frame the worker draws (`npm run bench:planner` reads them). */
+export const SCENE_FRAME_MARK = "trimrail:scene-frame";
+
+/** True where a canvas can be handed to a worker; whether WebGL works there, the worker finds out. */
+export function canDrawInWorker(): boolean {
+  return (
+    typeof Worker !== "undefined" && typeof HTMLCanvasElement !== "undefined" && "transferControlToOffscreen" in HTMLCanvasElement.prototype
+  );
+}
+
+export interface WorkerViewProps extends SceneCallbacks {
+  drawing: SceneDrawing;
+  /** The worker cannot draw WebGL here: the page should draw on its own thread. */
+  onUnsupported: () => void;
+  onFailed: (message: string) => void;
+}
+
+export function WorkerView({ drawing, ...handlers }: WorkerViewProps) {
+  const hostRef = useRef<HTMLDivElement>(null);
+  const workerRef = useRef<Worker | null>(null);
+  const lastPosted = useRef("");
+  const latest = useRef({ drawing, handlers });
+  useEffect(() => {
+    latest.current = { drawing, handlers };
+  });
+
+  useEffect(() => {
+    const host = hostRef.current;
+    if (!host) return;
+    // Made here rather than rendered: a canvas can be handed over only once, and React may run
+    // this effect twice in development.
+    const canvas = document.createElement("canvas");
+    canvas.style.cssText = "display:block;width:100%;height:100%";
+    host.appendChild(canvas);
+    const offscreen = canvas.transferControlToOffscreen();
+    const worker = new Worker(new URL("./scene.worker.tsx", import.meta.url), { type: "module", name: "trimrail-3d-view" });
+    workerRef.current = worker;
+    const send = (message: ToSceneWorker, transfer: Transferable[] = []) => worker.postMessage(message, transfer);
+
+    worker.onmessage = (event: MessageEvent<FromSceneWorker>) => {
+      const message = event.data;
+      const on = latest.current.handlers;
+      switch (message.type) {
+        case "ready":
+          return on.onReady(message.ready);
+        case "mount-screen":
+          return on.onMountScreen(message.x, message.y);
+        case "mount-drag":
+          return on.onMountDrag?.(message.positionXM);
+        case "mount-drag-end":
+          return on.onMountDragEnd?.();
+        case "cursor":
+          host.style.cursor = message.cursor;
+          return;
+        case "frame":
+          performance.mark(SCENE_FRAME_MARK);
+          return;
+        case "unsupported":
+          return on.onUnsupported();
+        case "failed":
+          return on.onFailed(message.message);
+      }
+    };
+    worker.onerror = (event) => latest.current.handlers.onFailed(event.message || "the 3D view's worker did not start");
+
+    const { width, height } = host.getBoundingClientRect();
+    lastPosted.current = JSON.stringify(latest.current.drawing);
+    send({ type: "init", canvas: offscreen, width, height, drawing: latest.current.drawing }, [offscreen]);
+
+    const resize = new ResizeObserver(([entry]) => {
+      const box = entry.contentRect;
+      send({ type: "size", width: box.width, height: box.height });
+    });
+    resize.observe(host);
+
+    const forward = (event: PointerEvent | WheelEvent) => {
+      // The page scrolls elsewhere; over the view, the wheel zooms it.
+      if (event.type === "wheel") event.preventDefault();
+      // Capture on a press, as the orbit controls and the mount drag expect: moves outside the
+      // view keep coming here until the button is let go.
+      if (event.type === "pointerdown" && "pointerId" in event) host.setPointerCapture(event.pointerId);
+      send({ type: "pointer", event: toForwardedEvent(event, host.getBoundingClientRect()) });
+    };
+    const noMenu = (event: Event) => event.preventDefault();
+    for (const type of FORWARDED_EVENTS) host.addEventListener(type, forward as EventListener, { passive: type !== "wheel" });
+    host.addEventListener("contextmenu", noMenu);
+
+    return () => {
+      for (const type of FORWARDED_EVENTS) host.removeEventListener(type, forward as EventListener);
+      host.removeEventListener("contextmenu", noMenu);
+      resize.disconnect();
+      worker.terminate();
+      workerRef.current = null;
+      canvas.remove();
+      latest.current.handlers.onReady(false);
+    };
+  }, []);
+
+  // Only a drawing that differs from the last one is posted: the page re-renders for many reasons.
+  useEffect(() => {
+    const text = JSON.stringify(drawing);
+    if (!workerRef.current || text === lastPosted.current) return;
+    lastPosted.current = text;
+    workerRef.current.postMessage({ type: "draw", drawing } satisfies ToSceneWorker);
+  }, [drawing]);
+
+  return <div ref={hostRef} className="absolute inset-0" />;
+}
+
+export default WorkerView;
