@@ -4,7 +4,10 @@
  * Per page it prints the score, LCP, TBT and the JavaScript loaded, compressed as served and
  * decoded; "first" is the JS the HTML asks for (what the page needs to paint and hydrate), "later"
  * what dynamic imports fetch after it (the 3D view, the charts). A page that loads three.js is
- * measured a second time with those chunks refused, to tell the 3D view's cost from the rest.
+ * measured a second time with those chunks refused, to tell the 3D view's cost from the rest. The 3D
+ * view's own scripts load in its worker (Lighthouse calls them "Other"); they count as JS loaded
+ * later. Before measuring the Planner, the bench checks in the same browser that the 3D view is
+ * drawn, and by which thread.
  * Reuses the last test build (.next-test) when TRIMRAIL_REUSE_BUILD=1; TRIMRAIL_BENCH_RUNS sets the
  * runs per page (median by score, default 3: one run on a shared machine is noisy) and
  * TRIMRAIL_BENCH_PAGES a comma-separated subset of the pages (landing, sign-in, setups, planner). The median
@@ -15,6 +18,7 @@ import { mkdirSync, mkdtempSync, rmSync, writeFileSync } from "node:fs";
 import os from "node:os";
 import path from "node:path";
 import lighthouse from "lighthouse";
+import { chromium } from "playwright-core";
 import { DEMO_PASSWORD } from "../db/seed-data";
 import { startAppServer } from "../tests/support/app-server";
 import { CHROMIUM_ARGS, CHROMIUM_PATH } from "../tests/support/browser";
@@ -23,13 +27,15 @@ interface PageToMeasure {
   label: string;
   path: string;
   signedIn: boolean;
+  /** Has a 3D view, checked to draw before it is measured. */
+  hasScene?: boolean;
 }
 
 const ALL_PAGES: PageToMeasure[] = [
   { label: "landing", path: "/", signedIn: false },
   { label: "sign-in", path: "/sign-in", signedIn: false },
   { label: "setups", path: "/setups", signedIn: true },
-  { label: "planner", path: "/setups/set-tobin-draft", signedIn: true },
+  { label: "planner", path: "/setups/set-tobin-draft", signedIn: true, hasScene: true },
 ];
 // TRIMRAIL_BENCH_PAGES=planner,landing measures only those.
 const chosen = process.env.TRIMRAIL_BENCH_PAGES?.split(",").map((label) => label.trim());
@@ -154,8 +160,9 @@ async function measure(baseURL: string, page: PageToMeasure, { port, cookie, blo
   if (!result) throw new Error(`lighthouse returned nothing for ${url}`);
   const { lhr } = result;
   if (lhr.runtimeError) throw new Error(`lighthouse on ${url}: ${lhr.runtimeError.message}`);
+  // Scripts of the page and of its workers (which Lighthouse files as "Other").
   const items = ((lhr.audits["network-requests"]?.details as { items?: NetworkItem[] } | undefined)?.items ?? []).filter(
-    (i) => i.resourceType === "Script",
+    (i) => i.resourceType === "Script" || (i.resourceType === "Other" && new URL(i.url).pathname.endsWith(".js")),
   );
   const firstUrls = await scriptsInHtml(url, headers?.cookie);
   const first = items.filter((i) => firstUrls.has(i.url));
@@ -218,18 +225,45 @@ async function medianOf(baseURL: string, page: PageToMeasure, options: RunOption
   return median;
 }
 
+/** Opens the page in the bench's browser and waits for its 3D view to draw: "worker" or "page". */
+async function sceneDrawnBy(port: number, url: string, cookie: string): Promise<string> {
+  const browser = await chromium.connectOverCDP(`http://127.0.0.1:${port}`);
+  try {
+    const context = await browser.newContext();
+    await context.addCookies(
+      cookie.split("; ").map((pair) => {
+        const [name, ...value] = pair.split("=");
+        return { name, value: value.join("="), url };
+      }),
+    );
+    const tab = await context.newPage();
+    await tab.goto(url);
+    const view = tab.locator('[data-testid="lifter-canvas"][data-ready="true"]');
+    await view.waitFor({ timeout: 60_000 });
+    const thread = (await view.getAttribute("data-thread")) ?? "unknown";
+    await context.close();
+    return thread;
+  } finally {
+    await browser.close();
+  }
+}
+
 const app = await startAppServer({ build: process.env.TRIMRAIL_REUSE_BUILD !== "1" });
-const chromium = await launchDebuggableChromium();
+const bench = await launchDebuggableChromium();
 try {
   const cookie = await signInCookie(app.baseURL);
   const rows: [string, PageFigures][] = [];
   for (const page of PAGES) {
     // The first visit warms the server's caches and finds the 3D view's chunks; it is not counted.
-    const warm = await measure(app.baseURL, page, { port: chromium.port, cookie });
-    rows.push([page.label, await medianOf(app.baseURL, page, { port: chromium.port, cookie }, page.label)]);
+    const warm = await measure(app.baseURL, page, { port: bench.port, cookie });
+    if (page.hasScene) {
+      const thread = await sceneDrawnBy(bench.port, new URL(page.path, app.baseURL).href, cookie);
+      console.log(`[bench:web] ${page.label}: the 3D view draws (drawn by the ${thread === "worker" ? "worker" : "page's main thread"})`);
+    }
+    rows.push([page.label, await medianOf(app.baseURL, page, { port: bench.port, cookie }, page.label)]);
     if (warm.sceneUrls.length > 0) {
       // The same page with the 3D view's chunks refused (it shows its text fallback): what the rest costs.
-      const options = { port: chromium.port, cookie, blocked: warm.sceneUrls };
+      const options = { port: bench.port, cookie, blocked: warm.sceneUrls };
       rows.push([`${page.label} w/o 3D`, await medianOf(app.baseURL, page, options, `${page.label}-without-3d`)]);
     }
   }
@@ -246,9 +280,9 @@ try {
   for (const [label, figures] of rows) printRow(label, figures);
 } finally {
   // Chromium writes to its profile until it has exited; remove the folder after that.
-  const exited = new Promise((resolve) => chromium.child.once("exit", resolve));
-  chromium.child.kill("SIGTERM");
+  const exited = new Promise((resolve) => bench.child.once("exit", resolve));
+  bench.child.kill("SIGTERM");
   await exited;
   await app.stop();
-  rmSync(chromium.dir, { recursive: true, force: true });
+  rmSync(bench.dir, { recursive: true, force: true });
 }

@@ -3,7 +3,15 @@
  * and draws off the page's main thread. The page (worker-view.tsx) posts the drawing, the view's
  * size and its pointer events; this posts back what the view reports (worker-protocol.ts).
  */
-import { _roots, addAfterEffect, createRoot, events as createPointerEvents, extend, type ReconcilerRoot } from "@react-three/fiber";
+import {
+  _roots,
+  addAfterEffect,
+  createRoot,
+  events as createPointerEvents,
+  extend,
+  flushSync,
+  type ReconcilerRoot,
+} from "@react-three/fiber";
 import { Component, type ReactNode } from "react";
 import * as THREE from "three";
 import { Lifter } from "./lifter";
@@ -74,14 +82,21 @@ function connectEvents(canvas: OffscreenCanvas): void {
   if (state && state.events.connected !== surface) state.events.connect?.(surface);
 }
 
+/**
+ * Renders the drawing at once rather than when React's scheduler gets to it; the frame follows at
+ * the next animation frame, so a burst of drawings during a drag costs one frame.
+ */
 function draw(): void {
-  if (root && drawing) {
-    root.render(
+  if (!root || !drawing) return;
+  const target = root;
+  const lifter = drawing;
+  flushSync(() =>
+    target.render(
       <ReportErrors>
-        <Lifter {...drawing} {...callbacks} />
+        <Lifter {...lifter} {...callbacks} />
       </ReportErrors>,
-    );
-  }
+    ),
+  );
 }
 
 scope.onmessage = (event) => {
@@ -91,7 +106,7 @@ scope.onmessage = (event) => {
       if (!canDrawWebGL()) return post({ type: "unsupported" });
       drawing = message.drawing;
       root = createRoot(message.canvas);
-      addAfterEffect(() => post({ type: "frame" }));
+      addAfterEffect(() => post({ type: "frame", atMs: performance.timeOrigin + performance.now() }));
       const { canvas } = message;
       configured = configure(message.width, message.height, message.drawing).then(
         () => {

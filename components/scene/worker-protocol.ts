@@ -40,8 +40,8 @@ export type FromSceneWorker =
   | { type: "mount-drag"; positionXM: number }
   | { type: "mount-drag-end" }
   | { type: "cursor"; cursor: string }
-  /** A frame has been drawn (the page marks it, for the drag benchmark). */
-  | { type: "frame" }
+  /** A frame has been drawn at this time (ms since the epoch, as performance.timeOrigin + now()). */
+  | { type: "frame"; atMs: number }
   /** This browser cannot draw WebGL in a worker: the page draws on its own thread instead. */
   | { type: "unsupported" }
   | { type: "failed"; message: string };

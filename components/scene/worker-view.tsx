@@ -64,7 +64,8 @@ export function WorkerView({ drawing, ...handlers }: WorkerViewProps) {
           host.style.cursor = message.cursor;
           return;
         case "frame":
-          performance.mark(SCENE_FRAME_MARK);
+          // The worker's clock starts elsewhere; both count from the same epoch.
+          performance.mark(SCENE_FRAME_MARK, { startTime: message.atMs - performance.timeOrigin });
           return;
         case "unsupported":
           return on.onUnsupported();
