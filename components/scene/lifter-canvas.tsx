@@ -1,7 +1,8 @@
 "use client";
 /**
  * What pages use: the 3D view loaded on the client only, with a visible loading state, inside an
- * error boundary so a browser without WebGL (or a failed model) keeps the rest of the page.
+ * error boundary so a browser without WebGL (or a failed model) keeps the rest of the page. The
+ * view itself is drawn by a worker where the browser allows (lifter-scene.tsx).
  */
 import dynamic from "next/dynamic";
 import { Component, type ErrorInfo, type ReactNode } from "react";
