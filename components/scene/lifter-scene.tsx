@@ -27,8 +27,6 @@ export function LifterScene({
   const [viewResetCount, setViewResetCount] = useState(0);
   const [thread, setThread] = useState<"worker" | "page">(() => (canDrawInWorker() ? "worker" : "page"));
   const [failure, setFailure] = useState<Error | null>(null);
-  // The error boundary around the view shows its text fallback.
-  if (failure) throw failure;
 
   const onReady = useCallback((ready: boolean) => {
     if (ready) wrapperRef.current?.setAttribute("data-ready", "true");
@@ -40,6 +38,8 @@ export function LifterScene({
 
   const drawing: SceneDrawing = { ...drawn, draggable: onMountDrag !== undefined, viewResetCount };
   const callbacks = { onMountDrag, onMountDragEnd, onReady, onMountScreen };
+  // The worker could not draw: the error boundary around the view shows its text fallback.
+  if (failure) throw failure;
 
   return (
     <div className={`relative h-full w-full ${className}`}>
