@@ -1,7 +1,8 @@
 "use client";
 import { keepPreviousData, useQuery } from "@tanstack/react-query";
 import dynamic from "next/dynamic";
-import { usePathname, useRouter, useSearchParams } from "next/navigation";
+import { useRouter } from "next/navigation";
+import { useAppPathname, useAppSearchParams } from "@/components/ui/app-location";
 import { fetchInsight } from "@/lib/client/api";
 import type { UnitSystem } from "@/lib/domain";
 import type { InsightModel } from "./insight-charts";
@@ -22,8 +23,8 @@ const DAY = /^\d{4}-\d{2}-\d{2}$/;
 /** Insight with its filters in the URL: a model, and the days the setups were started in. */
 export function InsightView({ models, unitSystem }: { models: InsightModel[]; unitSystem: UnitSystem }) {
   const router = useRouter();
-  const pathname = usePathname();
-  const search = useSearchParams();
+  const pathname = useAppPathname();
+  const search = useAppSearchParams();
   const model = models.some((m) => m.id === search.get("model")) ? (search.get("model") as string) : "";
   const from = DAY.test(search.get("from") ?? "") ? (search.get("from") as string) : "";
   const to = DAY.test(search.get("to") ?? "") ? (search.get("to") as string) : "";

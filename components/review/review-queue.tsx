@@ -2,8 +2,9 @@
 import { keepPreviousData, useQuery } from "@tanstack/react-query";
 import { createColumnHelper, flexRender, getCoreRowModel, useReactTable, type SortingState } from "@tanstack/react-table";
 import Link from "next/link";
-import { usePathname, useRouter, useSearchParams } from "next/navigation";
+import { useRouter } from "next/navigation";
 import { useMemo } from "react";
+import { useAppPathname, useAppSearchParams } from "@/components/ui/app-location";
 import { FlagBadge } from "@/components/ui/flag-badge";
 import { fetchReviewQueue, type QueueRowView } from "@/lib/client/api";
 import { FLAG_LEVELS, STATUS_WORDS, type QueueSort, type SetupStatus, type UnitSystem } from "@/lib/domain";
@@ -22,8 +23,8 @@ interface ReviewQueueProps {
 /** The review desk's queue: filtered, searched, sorted and paged on the server; its state in the URL. */
 export function ReviewQueue({ models, unitSystem }: ReviewQueueProps) {
   const router = useRouter();
-  const pathname = usePathname();
-  const search = useSearchParams();
+  const pathname = useAppPathname();
+  const search = useAppSearchParams();
   const params = readQueueParams(new URLSearchParams(search.toString()));
   const go = (next: Partial<QueueParams>) => router.replace(`${pathname}${toSearch({ ...params, page: 1, ...next })}`, { scroll: false });
 

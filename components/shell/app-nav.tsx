@@ -1,10 +1,10 @@
 "use client";
 import Link from "next/link";
-import { usePathname } from "next/navigation";
+import { useAppPathname } from "@/components/ui/app-location";
 import type { NavItem } from "./nav-items";
 
 export function AppNav({ items }: { items: NavItem[] }) {
-  const pathname = usePathname();
+  const pathname = useAppPathname();
   return (
     <nav aria-label="Main" data-testid="main-nav" className="flex gap-1">
       {items.map((item) => {

@@ -6,12 +6,13 @@ import type { Viewer } from "@/lib/auth/access";
 import { auth } from "@/lib/auth/server";
 
 /**
- * The signed-in person for this request, or null. Memoised per request (the layout and the page
- * ask once between them). The session is read from the database every time, without
- * better-auth's cookie cache: a role change or a sign-out must take effect on the next request.
+ * The signed-in person that a request's headers (its session cookie) name, or null. The session
+ * is read from the database every time, without better-auth's cookie cache: a role change or a
+ * sign-out must take effect on the next request. Takes the headers as given for the proxy, which
+ * reads the viewer from its request for the landing page (lib/auth/signed-in-header.ts).
  */
-export const getViewer = cache(async (): Promise<Viewer | null> => {
-  const session = await auth.api.getSession({ headers: await headers() });
+export async function getViewerFromHeaders(requestHeaders: Headers): Promise<Viewer | null> {
+  const session = await auth.api.getSession({ headers: requestHeaders });
   if (!session) return null;
   const u = session.user as typeof session.user & { role?: unknown; unitSystem?: unknown };
   return {
@@ -21,4 +22,7 @@ export const getViewer = cache(async (): Promise<Viewer | null> => {
     role: isRole(u.role) ? u.role : "customer",
     unitSystem: isUnitSystem(u.unitSystem) ? u.unitSystem : "metric",
   };
-});
+}
+
+/** The viewer of this App Router request, memoised per request (the layout and the page ask once between them). */
+export const getViewer = cache(async (): Promise<Viewer | null> => getViewerFromHeaders(await headers()));

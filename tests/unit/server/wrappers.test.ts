@@ -19,7 +19,7 @@ function filesUnder(dir: string, keep: (file: string) => boolean): string[] {
 }
 
 const routeFiles = filesUnder("app", (f) => /(^|\/)route\.tsx?$/.test(f));
-const sourceFiles = ["app", "components", "lib"].flatMap((dir) => filesUnder(dir, (f) => /\.tsx?$/.test(f)));
+const sourceFiles = ["app", "components", "lib", "pages"].flatMap((dir) => filesUnder(dir, (f) => /\.tsx?$/.test(f)));
 
 describe("route handlers", () => {
   it("finds the route handlers of the app", () => {

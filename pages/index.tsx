@@ -1,26 +1,42 @@
-import Link from "next/link";
+/* eslint-disable @next/next/no-html-link-for-pages -- this page ships no client router (see config below) */
+import type { GetServerSideProps, PageConfig } from "next";
 import { Logo } from "@/components/ui/logo";
-import { getViewer } from "@/lib/server/viewer";
+import { SIGNED_IN_HEADER } from "@/lib/auth/signed-in-header";
 
-export default async function LandingPage() {
-  const viewer = await getViewer();
+// Words and links only: the page needs none of React's or Next's code in the browser, and leaving
+// it out keeps the landing page inside its JavaScript budget (DEVELOPERS.md).
+// Its links are plain anchors for the same reason: with no runtime there is no client router for
+// next/link to hand them to.
+export const config: PageConfig = { unstable_runtimeJS: false };
+
+interface LandingPageProps {
+  signedIn: boolean;
+}
+
+// The proxy has read the session (this router cannot import the server core) and says only
+// whether there is one: the nav needs no more, and Next serves these props as JSON too.
+export const getServerSideProps: GetServerSideProps<LandingPageProps> = async ({ req }) => ({
+  props: { signedIn: req.headers[SIGNED_IN_HEADER] === "1" },
+});
+
+export default function LandingPage({ signedIn }: LandingPageProps) {
   return (
     <main className="mx-auto max-w-4xl px-6 py-12">
       <header className="flex items-center justify-between">
         <Logo />
         <nav className="flex gap-4 text-sm">
-          {viewer ? (
-            <Link href="/setups" className="rounded bg-accent px-3 py-1.5 text-white">
+          {signedIn ? (
+            <a href="/setups" className="rounded bg-accent px-3 py-1.5 text-white">
               Open your setups
-            </Link>
+            </a>
           ) : (
             <>
-              <Link href="/sign-in" className="px-3 py-1.5">
+              <a href="/sign-in" className="px-3 py-1.5">
                 Sign in
-              </Link>
-              <Link href="/sign-up" className="rounded bg-accent px-3 py-1.5 text-white">
+              </a>
+              <a href="/sign-up" className="rounded bg-accent px-3 py-1.5 text-white">
                 Create an account
-              </Link>
+              </a>
             </>
           )}
         </nav>
