@@ -61,7 +61,7 @@ interface PageFigures {
   first: JsBytes;
   later: JsBytes;
   libsInFirst: string[];
-  /** Scripts loaded after the first load that carry three.js: the 3D view. */
+  /** Scripts the page loaded after its first load that carry three.js: the 3D view, when the page draws it. */
   sceneUrls: string[];
   /** Lighthouse's measure of this machine's speed at the time (higher is faster). */
   benchmarkIndex: number;
@@ -175,7 +175,8 @@ async function measure(baseURL: string, page: PageToMeasure, { port, cookie, blo
     first: sumJs(first),
     later: sumJs(later),
     libsInFirst: [...new Set(first.flatMap((i) => libraries.get(i.url) ?? []))],
-    sceneUrls: later.filter((i) => libraries.get(i.url)?.includes("three")).map((i) => i.url),
+    // Only the page's own scripts: Lighthouse cannot refuse a worker's, and there three.js is off the page's thread.
+    sceneUrls: later.filter((i) => i.resourceType === "Script" && libraries.get(i.url)?.includes("three")).map((i) => i.url),
     benchmarkIndex: lhr.environment.benchmarkIndex,
     report: JSON.stringify(lhr),
   };
