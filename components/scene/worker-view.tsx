@@ -12,8 +12,14 @@ import { FORWARDED_EVENTS, toForwardedEvent, type FromSceneWorker, type ToSceneW
 /** Marked on the page for each frame the worker draws (`npm run bench:planner` reads them). */
 export const SCENE_FRAME_MARK = "trimrail:scene-frame";
 
-/** True where a canvas can be handed to a worker; whether WebGL works there, the worker finds out. */
+/**
+ * True where a canvas can be handed to a worker; whether WebGL works there, the worker finds out.
+ * Not under `next dev`: its Fast Refresh wraps every component module, and in a worker that wrapper
+ * is missing, so the scene's modules do not load there. Production builds (and every test) draw
+ * in the worker.
+ */
 export function canDrawInWorker(): boolean {
+  if (process.env.NODE_ENV === "development") return false;
   return (
     typeof Worker !== "undefined" && typeof HTMLCanvasElement !== "undefined" && "transferControlToOffscreen" in HTMLCanvasElement.prototype
   );
