@@ -2,8 +2,10 @@
  * `npm run bench:planner`: the Planner measured in Debian's Chromium against a production build.
  *  - edit-to-panel: from a pointer move that drags the mount to the balance panel's commit, and to
  *    the next animation frame (target ≤ 16 ms median), as the page records them with performance.measure;
- *  - edit-to-scene: from the same edit to the next frame of the 3D view, which a worker draws (the
- *    page marks each frame the worker reports; the worker's own drawing is not on the page's thread);
+ *  - edit-to-scene: from the same edit to the first frame of the 3D view that shows it (a worker
+ *    draws the view; the page numbers each drawing it posts, and the worker reports the first frame
+ *    showing each), and pointer-to-edit: from the pointer event to the drag position the worker
+ *    sends back, the hop before the edit;
  *  - the JavaScript the Planner loads on first visit with the charts brought into view (compressed
  *    as served, and uncompressed).
  * Reuses the last test build (.next-test) when TRIMRAIL_REUSE_BUILD=1.
@@ -67,17 +69,22 @@ try {
   }
   await page.mouse.up();
   await page.waitForTimeout(300);
-  const [toPanel, toFrame, toScene, thread] = await page.evaluate(() => {
+  const [toPanel, toFrame, toScene, pointerToDrag, thread] = await page.evaluate(() => {
     const edits = performance.getEntriesByName("trimrail:edit-to-panel");
-    const sceneFrames = performance.getEntriesByName("trimrail:scene-frame").map((e) => e.startTime);
+    const draws = performance.getEntriesByName("trimrail:scene-draw") as PerformanceMark[];
+    const frames = performance.getEntriesByName("trimrail:scene-frame") as PerformanceMark[];
+    // Each edit: the first drawing posted after it, then the first frame that shows that drawing
+    // or a later one.
     const toScene = edits.flatMap((edit) => {
-      const next = sceneFrames.find((t) => t >= edit.startTime);
-      return next === undefined ? [] : [next - edit.startTime];
+      const draw = draws.find((d) => d.startTime >= edit.startTime);
+      const frame = draw && frames.find((f) => (f.detail as number) >= (draw.detail as number));
+      return frame ? [frame.startTime - edit.startTime] : [];
     });
     return [
       edits.map((e) => e.duration),
       performance.getEntriesByName("trimrail:edit-to-frame").map((e) => e.duration),
       toScene,
+      performance.getEntriesByName("trimrail:pointer-to-drag").map((e) => e.duration),
       document.querySelector('[data-testid="lifter-canvas"]')?.getAttribute("data-thread") ?? "unknown",
     ] as const;
   });
@@ -89,7 +96,8 @@ try {
   );
   console.log(
     toScene.length > 0
-      ? `  edit → 3D view frame  median ${percentile(toScene, 0.5).toFixed(1)} ms, p95 ${percentile(toScene, 0.95).toFixed(1)} ms   (drawn by the ${thread})`
+      ? `  edit → 3D view frame  median ${percentile(toScene, 0.5).toFixed(1)} ms, p95 ${percentile(toScene, 0.95).toFixed(1)} ms   (the first frame showing the edit, drawn by the ${thread})\n` +
+          `  pointer → edit        median ${percentile(pointerToDrag, 0.5).toFixed(1)} ms, p95 ${percentile(pointerToDrag, 0.95).toFixed(1)} ms   (the worker picks the rail under the pointer and posts the position back)`
       : `  edit → 3D view frame  not measured: the view is drawn by the ${thread === "page" ? "page's own thread" : thread}`,
   );
   console.log(

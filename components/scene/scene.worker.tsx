@@ -6,12 +6,14 @@
 import {
   _roots,
   addAfterEffect,
+  addEffect,
   createRoot,
   events as createPointerEvents,
   extend,
   flushSync,
   type ReconcilerRoot,
 } from "@react-three/fiber";
+import { replaceEqualDeep } from "@tanstack/react-query";
 import { Component, type ReactNode } from "react";
 import * as THREE from "three";
 import { Lifter } from "./lifter";
@@ -30,11 +32,25 @@ const post = (message: FromSceneWorker) => scope.postMessage(message);
 // What fiber's <Canvas> does for the page: every three class becomes a JSX element (<mesh>, <color>…).
 extend(THREE as unknown as Parameters<typeof extend>[0]);
 
+/** Once the view has drawn, a stray error is logged and the view carries on, as it would on the page. */
+let viewUp = false;
+self.addEventListener("error", (event) => {
+  if (viewUp) event.preventDefault();
+});
+self.addEventListener("unhandledrejection", (event) => {
+  if (viewUp) return;
+  const reason: unknown = event.reason;
+  post({ type: "failed", message: reason instanceof Error ? reason.message : String(reason) });
+});
+
 const surface = new WorkerSurface((cursor) => post({ type: "cursor", cursor }));
 const callbacks: SceneCallbacks = {
-  onReady: (ready) => post({ type: "ready", ready }),
+  onReady: (ready) => {
+    viewUp = ready;
+    post({ type: "ready", ready });
+  },
   onMountScreen: (x, y) => post({ type: "mount-screen", x, y }),
-  onMountDrag: (positionXM) => post({ type: "mount-drag", positionXM }),
+  onMountDrag: (positionXM) => post({ type: "mount-drag", positionXM, pointerAtMs: surface.lastEventAtMs }),
   onMountDragEnd: () => post({ type: "mount-drag-end" }),
 };
 
@@ -59,8 +75,13 @@ function canDrawWebGL(): boolean {
 }
 
 let root: ReconcilerRoot<OffscreenCanvas> | null = null;
+let offscreen: OffscreenCanvas | null = null;
 let drawing: SceneDrawing | null = null;
+/** The latest drawing's number, and the last one a frame was reported for. */
+let drawingSeq = 0;
+let reportedSeq = -1;
 let configured: Promise<unknown> = Promise.resolve();
+const fail = (error: unknown) => post({ type: "failed", message: error instanceof Error ? error.message : String(error) });
 
 function configure(width: number, height: number, first: SceneDrawing): Promise<unknown> {
   surface.resize(width, height);
@@ -82,10 +103,6 @@ function connectEvents(canvas: OffscreenCanvas): void {
   if (state && state.events.connected !== surface) state.events.connect?.(surface);
 }
 
-/**
- * Renders the drawing at once rather than when React's scheduler gets to it; the frame follows at
- * the next animation frame, so a burst of drawings during a drag costs one frame.
- */
 function draw(): void {
   if (!root || !drawing) return;
   const target = root;
@@ -99,6 +116,21 @@ function draw(): void {
   );
 }
 
+/**
+ * During a drag drawings arrive faster than frames: only the latest is rendered, once, just before
+ * the next frame draws it, so the worker never falls behind the pointer.
+ */
+let drawingPending = false;
+function drawAtNextFrame(): void {
+  drawingPending = true;
+  if (offscreen) _roots.get(offscreen)?.store.getState().invalidate();
+}
+addEffect(() => {
+  if (!drawingPending) return;
+  drawingPending = false;
+  draw();
+});
+
 scope.onmessage = (event) => {
   const message = event.data;
   switch (message.type) {
@@ -106,25 +138,33 @@ scope.onmessage = (event) => {
       if (!canDrawWebGL()) return post({ type: "unsupported" });
       drawing = message.drawing;
       root = createRoot(message.canvas);
-      addAfterEffect(() => post({ type: "frame", atMs: performance.timeOrigin + performance.now() }));
+      // One report per drawing, on the first frame that shows it (the page times drags by them).
+      addAfterEffect(() => {
+        if (drawingSeq === reportedSeq) return;
+        reportedSeq = drawingSeq;
+        post({ type: "frame", seq: drawingSeq, atMs: performance.timeOrigin + performance.now() });
+      });
       const { canvas } = message;
-      configured = configure(message.width, message.height, message.drawing).then(
-        () => {
+      offscreen = canvas;
+      configured = configure(message.width, message.height, message.drawing)
+        .then(() => {
           connectEvents(canvas);
           draw();
-        },
-        (error: Error) => post({ type: "failed", message: error.message }),
-      );
+        })
+        .catch(fail);
       return;
     }
     case "draw":
-      drawing = message.drawing;
-      void configured.then(draw);
+      // Parts that did not change keep their identity, as they do on the page, so the scene's
+      // memoised parts (lines, payloads, markers) skip the drawings that leave them alone.
+      drawing = replaceEqualDeep(drawing, message.drawing);
+      drawingSeq = message.seq;
+      void configured.then(drawAtNextFrame).catch(fail);
       return;
     case "size":
       if (drawing) {
         const current = drawing;
-        configured = configured.then(() => configure(message.width, message.height, current));
+        configured = configured.then(() => configure(message.width, message.height, current)).catch(fail);
       }
       return;
     case "pointer":

@@ -45,6 +45,8 @@ export function useMountDrag(options: MountDragOptions): MountDragHandlers {
     latest.current = options;
   });
   const dragging = useRef(false);
+  /** The pointer that holds the mount: a second finger neither moves it nor lets it go. */
+  const dragPointerId = useRef<number | null>(null);
   const lastX = useRef(Number.NaN);
 
   const railXUnderPointer = useCallback(
@@ -84,15 +86,16 @@ export function useMountDrag(options: MountDragOptions): MountDragHandlers {
 
   const onMove = useCallback(
     (event: PointerEvent) => {
-      if (dragging.current) emit(event.offsetX, event.offsetY);
+      if (dragging.current && event.pointerId === dragPointerId.current) emit(event.offsetX, event.offsetY);
     },
     [emit],
   );
 
   const finish = useCallback(
     (event: PointerEvent) => {
-      if (!dragging.current) return;
+      if (!dragging.current || event.pointerId !== dragPointerId.current) return;
       dragging.current = false;
+      dragPointerId.current = null;
       if (surface.hasPointerCapture(event.pointerId)) surface.releasePointerCapture(event.pointerId);
       surface.style.setProperty("cursor", "");
       const controls = latest.current.controlsRef.current;
@@ -116,8 +119,10 @@ export function useMountDrag(options: MountDragOptions): MountDragHandlers {
   const onPointerDown = useCallback(
     (event: ThreeEvent<PointerEvent>) => {
       if (!latest.current.onMountDrag || event.button !== 0) return;
+      if (dragging.current) return;
       event.stopPropagation();
       dragging.current = true;
+      dragPointerId.current = event.pointerId;
       lastX.current = Number.NaN;
       const controls = latest.current.controlsRef.current;
       if (controls) controls.enabled = false;

@@ -7,6 +7,8 @@ import type { SceneDrawing } from "./types";
 /** The fields of a DOM pointer or wheel event that fiber's picking and the orbit controls read. */
 export interface ForwardedPointerEvent {
   type: string;
+  /** When it happened, in ms since the epoch (performance.timeOrigin + event.timeStamp). */
+  atMs: number;
   pointerId: number;
   pointerType: string;
   isPrimary: boolean;
@@ -30,18 +32,20 @@ export interface ForwardedPointerEvent {
 
 export type ToSceneWorker =
   | { type: "init"; canvas: OffscreenCanvas; width: number; height: number; drawing: SceneDrawing }
-  | { type: "draw"; drawing: SceneDrawing }
+  /** `seq` counts the drawings posted, so a frame can say which one it shows. */
+  | { type: "draw"; drawing: SceneDrawing; seq: number }
   | { type: "size"; width: number; height: number }
   | { type: "pointer"; event: ForwardedPointerEvent };
 
 export type FromSceneWorker =
   | { type: "ready"; ready: boolean }
   | { type: "mount-screen"; x: number; y: number }
-  | { type: "mount-drag"; positionXM: number }
+  /** `pointerAtMs`: when the pointer event that moved it happened (ForwardedPointerEvent.atMs). */
+  | { type: "mount-drag"; positionXM: number; pointerAtMs: number }
   | { type: "mount-drag-end" }
   | { type: "cursor"; cursor: string }
-  /** A frame has been drawn at this time (ms since the epoch, as performance.timeOrigin + now()). */
-  | { type: "frame"; atMs: number }
+  /** The first frame that shows drawing `seq`, drawn at `atMs` (ms since the epoch). */
+  | { type: "frame"; seq: number; atMs: number }
   /** This browser cannot draw WebGL in a worker: the page draws on its own thread instead. */
   | { type: "unsupported" }
   | { type: "failed"; message: string };
@@ -62,6 +66,7 @@ export function toForwardedEvent(event: PointerEvent | WheelEvent, viewRect: DOM
   const wheel = "deltaY" in event ? event : null;
   return {
     type: event.type,
+    atMs: performance.timeOrigin + event.timeStamp,
     pointerId: pointer?.pointerId ?? 1,
     pointerType: pointer?.pointerType ?? "mouse",
     isPrimary: pointer?.isPrimary ?? true,

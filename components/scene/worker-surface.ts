@@ -14,6 +14,8 @@ export class WorkerSurface implements PointerSurface {
   readonly style: { touchAction?: string; setProperty(name: string, value: string): void };
   /** The orbit controls follow a drag on the element's document; here that is the surface itself. */
   readonly ownerDocument = this;
+  /** When the event being handled happened (ms since the epoch): what a drag it causes answers to. */
+  lastEventAtMs = Number.NaN;
   private readonly listeners = new Map<string, Set<Listener>>();
   private readonly captured = new Set<number>();
 
@@ -70,6 +72,7 @@ export class WorkerSurface implements PointerSurface {
   focus(): void {}
 
   dispatch(forwarded: ForwardedPointerEvent): void {
+    this.lastEventAtMs = forwarded.atMs;
     const event = {
       ...forwarded,
       target: this,
@@ -77,7 +80,14 @@ export class WorkerSurface implements PointerSurface {
       preventDefault() {},
       stopPropagation() {},
     } as unknown as PointerEvent;
-    for (const listener of [...(this.listeners.get(forwarded.type) ?? [])]) listener(event);
+    // As on an element: one listener that throws is reported, and the others still hear the event.
+    for (const listener of [...(this.listeners.get(forwarded.type) ?? [])]) {
+      try {
+        listener(event);
+      } catch (error) {
+        reportError(error);
+      }
+    }
     if (forwarded.type === "pointerup" || forwarded.type === "pointercancel") this.captured.delete(forwarded.pointerId);
   }
 }

@@ -9,17 +9,25 @@ import { useEffect, useRef } from "react";
 import type { SceneCallbacks, SceneDrawing } from "./types";
 import { FORWARDED_EVENTS, toForwardedEvent, type FromSceneWorker, type ToSceneWorker } from "./worker-protocol";
 
-/** Marked on the page for each frame the worker draws (`npm run bench:planner` reads them). */
+/**
+ * Marks for timing a drag (`npm run bench:planner`), one set per drawing, as the balance panel's
+ * measures are one per edit: a drawing posted (detail: its number), the first frame that shows it
+ * (detail: the number), and a measure from the pointer event to the drag position it caused.
+ */
+export const SCENE_DRAW_MARK = "trimrail:scene-draw";
 export const SCENE_FRAME_MARK = "trimrail:scene-frame";
+export const POINTER_TO_DRAG_MEASURE = "trimrail:pointer-to-drag";
+
+/** Set once a worker has found no WebGL: later views go straight to the page. */
+let workerLacksWebGL = false;
 
 /**
  * True where a canvas can be handed to a worker; whether WebGL works there, the worker finds out.
  * Not under `next dev`: its Fast Refresh wraps every component module, and in a worker that wrapper
- * is missing, so the scene's modules do not load there. Production builds (and every test) draw
- * in the worker.
+ * is missing, so the scene's modules do not load there. Production builds draw in the worker.
  */
 export function canDrawInWorker(): boolean {
-  if (process.env.NODE_ENV === "development") return false;
+  if (process.env.NODE_ENV === "development" || workerLacksWebGL) return false;
   return (
     typeof Worker !== "undefined" && typeof HTMLCanvasElement !== "undefined" && "transferControlToOffscreen" in HTMLCanvasElement.prototype
   );
@@ -36,6 +44,7 @@ export function WorkerView({ drawing, ...handlers }: WorkerViewProps) {
   const hostRef = useRef<HTMLDivElement>(null);
   const workerRef = useRef<Worker | null>(null);
   const lastPosted = useRef("");
+  const drawingSeq = useRef(0);
   const latest = useRef({ drawing, handlers });
   useEffect(() => {
     latest.current = { drawing, handlers };
@@ -44,8 +53,8 @@ export function WorkerView({ drawing, ...handlers }: WorkerViewProps) {
   useEffect(() => {
     const host = hostRef.current;
     if (!host) return;
-    // Made here rather than rendered: a canvas can be handed over only once, and React may run
-    // this effect twice in development.
+    // Made here rather than rendered: a canvas can be handed over only once, and a remount (a new
+    // model, or React's strict mode) needs a fresh one.
     const canvas = document.createElement("canvas");
     canvas.style.cssText = "display:block;width:100%;height:100%";
     host.appendChild(canvas);
@@ -63,6 +72,8 @@ export function WorkerView({ drawing, ...handlers }: WorkerViewProps) {
         case "mount-screen":
           return on.onMountScreen(message.x, message.y);
         case "mount-drag":
+          // The worker's clock starts elsewhere; both count from the same epoch.
+          performance.measure(POINTER_TO_DRAG_MEASURE, { start: message.pointerAtMs - performance.timeOrigin, end: performance.now() });
           return on.onMountDrag?.(message.positionXM);
         case "mount-drag-end":
           return on.onMountDragEnd?.();
@@ -70,10 +81,10 @@ export function WorkerView({ drawing, ...handlers }: WorkerViewProps) {
           host.style.cursor = message.cursor;
           return;
         case "frame":
-          // The worker's clock starts elsewhere; both count from the same epoch.
-          performance.mark(SCENE_FRAME_MARK, { startTime: message.atMs - performance.timeOrigin });
+          performance.mark(SCENE_FRAME_MARK, { startTime: message.atMs - performance.timeOrigin, detail: message.seq });
           return;
         case "unsupported":
+          workerLacksWebGL = true;
           return on.onUnsupported();
         case "failed":
           return on.onFailed(message.message);
@@ -83,6 +94,7 @@ export function WorkerView({ drawing, ...handlers }: WorkerViewProps) {
 
     const { width, height } = host.getBoundingClientRect();
     lastPosted.current = JSON.stringify(latest.current.drawing);
+    drawingSeq.current = 0;
     send({ type: "init", canvas: offscreen, width, height, drawing: latest.current.drawing }, [offscreen]);
 
     const resize = new ResizeObserver(([entry]) => {
@@ -119,7 +131,9 @@ export function WorkerView({ drawing, ...handlers }: WorkerViewProps) {
     const text = JSON.stringify(drawing);
     if (!workerRef.current || text === lastPosted.current) return;
     lastPosted.current = text;
-    workerRef.current.postMessage({ type: "draw", drawing } satisfies ToSceneWorker);
+    const seq = ++drawingSeq.current;
+    performance.mark(SCENE_DRAW_MARK, { detail: seq });
+    workerRef.current.postMessage({ type: "draw", drawing, seq } satisfies ToSceneWorker);
   }, [drawing]);
 
   return <div ref={hostRef} className="absolute inset-0" />;

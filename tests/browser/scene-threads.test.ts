@@ -43,6 +43,8 @@ describe("the 3D view's thread", () => {
     const view = planner.page.getByTestId("lifter-canvas");
     expect(await view.getAttribute("data-thread")).toBe("worker");
 
+    // three.js registers itself on the global object of whatever thread loads it.
+    expect(await planner.page.evaluate(() => "__THREE__" in window)).toBe(false);
     const scripts = await pageScripts(planner.page);
     expect(scripts.length).toBeGreaterThan(0);
     for (const url of scripts) {
@@ -95,6 +97,27 @@ describe("the 3D view's thread", () => {
     await expect.poll(() => planner.mountPositionText()).not.toBe(positionBefore);
     expect(Number(await planner.mountPositionText())).toBeGreaterThan(Number(positionBefore));
     await screenshot(page, "scene-page-dragged");
+    await page.close();
+  });
+
+  it("moves to the page's thread when the worker finds no WebGL, and the view still draws and drags", async () => {
+    const page = await context.newPage();
+    // The worker's own script starts by taking WebGL away from its OffscreenCanvas, as a browser
+    // without WebGL in workers would.
+    await page.route(/\/_next\/static\/chunks\/turbopack-worker-[^/]*\.js/, async (route) => {
+      const response = await route.fetch();
+      const body = `OffscreenCanvas.prototype.getContext = function () { return null; };\n${await response.text()}`;
+      await route.fulfill({ response, body });
+    });
+    const planner = new PlannerPage(page);
+    await planner.open(SETUP_ID);
+    await planner.waitForScene();
+    expect(await page.getByTestId("lifter-canvas").getAttribute("data-thread")).toBe("page");
+    expect(await page.evaluate(() => "__THREE__" in window)).toBe(true);
+
+    const positionBefore = await planner.mountPositionText();
+    await planner.dragMountBy(50, 10);
+    await expect.poll(() => planner.mountPositionText()).not.toBe(positionBefore);
     await page.close();
   });
 });
