@@ -4,8 +4,8 @@
  *    the next animation frame (target ≤ 16 ms median), as the page records them with performance.measure;
  *  - edit-to-scene: from the same edit to the first frame of the 3D view that shows it (a worker
  *    draws the view; the page numbers each drawing it posts, and the worker reports the first frame
- *    showing each), and pointer-to-edit: from the pointer event to the drag position the worker
- *    sends back, the hop before the edit;
+ *    showing each), and pointer-to-edit: from the pointer event to the store's edit (the page
+ *    projects the pointer onto the rail itself, with the matrices the worker last reported);
  *  - the JavaScript the Planner loads on first visit with the charts brought into view (compressed
  *    as served, and uncompressed).
  * Reuses the last test build (.next-test) when TRIMRAIL_REUSE_BUILD=1.
@@ -97,7 +97,7 @@ try {
   console.log(
     toScene.length > 0
       ? `  edit → 3D view frame  median ${percentile(toScene, 0.5).toFixed(1)} ms, p95 ${percentile(toScene, 0.95).toFixed(1)} ms   (the first frame showing the edit, drawn by the ${thread})\n` +
-          `  pointer → edit        median ${percentile(pointerToDrag, 0.5).toFixed(1)} ms, p95 ${percentile(pointerToDrag, 0.95).toFixed(1)} ms   (the worker picks the rail under the pointer and posts the position back)`
+          `  pointer → edit        median ${percentile(pointerToDrag, 0.5).toFixed(1)} ms, p95 ${percentile(pointerToDrag, 0.95).toFixed(1)} ms   (the page projects the pointer onto the rail with the frame the worker last reported)`
       : `  edit → 3D view frame  not measured: the view is drawn by the ${thread === "page" ? "page's own thread" : thread}`,
   );
   console.log(

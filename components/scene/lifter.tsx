@@ -45,6 +45,7 @@ export const Lifter = memo(function Lifter(props: LifterProps) {
     onMountDragEnd,
     onReady,
     onMountScreen,
+    onMountDragFrame,
     mountSelected = false,
     tetherLine = null,
     grounded = false,
@@ -71,6 +72,7 @@ export const Lifter = memo(function Lifter(props: LifterProps) {
     railZ: rail.z,
     onMountDrag: draggable ? onMountDrag : undefined,
     onMountDragEnd,
+    onMountDragFrame,
   });
   useViewReset(controlsRef, viewResetCount, scale);
 

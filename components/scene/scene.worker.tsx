@@ -52,6 +52,7 @@ const callbacks: SceneCallbacks = {
   onMountScreen: (x, y) => post({ type: "mount-screen", x, y }),
   onMountDrag: (positionXM) => post({ type: "mount-drag", positionXM, pointerAtMs: surface.lastEventAtMs }),
   onMountDragEnd: () => post({ type: "mount-drag-end" }),
+  onMountDragFrame: (pointerId, frame) => post({ type: "mount-drag-frame", pointerId, frame }),
 };
 
 class ReportErrors extends Component<{ children: ReactNode }, { failed: boolean }> {

@@ -1,3 +1,5 @@
+import type { RailDragFrame } from "./rail-projection";
+
 /**
  * The scene's contract: it draws exactly these values and computes no physics. A container maps
  * the planner store (and lib/balance's results) onto these props.
@@ -68,4 +70,6 @@ export interface SceneCallbacks {
   onReady: (ready: boolean) => void;
   /** The mount carriage's centre in CSS pixels from the view's top-left, when it moves on screen. */
   onMountScreen: (x: number, y: number) => void;
+  /** A worker draws: the page follows the drag's moves itself (see use-mount-drag.ts). */
+  onMountDragFrame?: (pointerId: number, frame: RailDragFrame) => void;
 }

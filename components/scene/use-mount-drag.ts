@@ -3,20 +3,17 @@
  * Dragging the mount along the belly rail. The pointer's ray is taken into the pitched lifter's
  * local frame and met with the rail line (closest point between two lines), so the drag follows
  * the rail whatever the trim or the view. Window-free: listeners live on the pointer surface (the
- * view's element, or its stand-in in the worker) with pointer capture. Scratch objects are module-level: nothing is allocated per pointer move.
+ * view's element, or its stand-in in the worker) with pointer capture. The projection itself is rail-projection.ts.
  */
-import { useThree, type ThreeEvent } from "@react-three/fiber";
+import { useFrame, useThree, type ThreeEvent } from "@react-three/fiber";
 import { useCallback, useEffect, useRef, type RefObject, useLayoutEffect } from "react";
-import { Matrix4, Ray, Raycaster, Vector2, type Object3D } from "three";
+import { Matrix4, type Object3D } from "three";
 import type { OrbitControls as OrbitControlsImpl } from "three-stdlib";
 import { usePointerSurface } from "./pointer-surface";
+import { railXUnderPointer, type RailDragFrame } from "./rail-projection";
 
-const scratchNdc = new Vector2();
-const scratchRaycaster = new Raycaster();
-const scratchRay = new Ray();
-const scratchInverse = new Matrix4();
-/** Below this, the view looks (almost) straight along the rail and the projection is ill-posed. */
-const PARALLEL_EPSILON = 1e-6;
+const scratchWorldFromNdc = new Matrix4();
+const scratchBodyFromWorld = new Matrix4();
 /** Changes smaller than this (m) are not worth a store update. */
 const MIN_STEP_M = 1e-5;
 
@@ -29,6 +26,11 @@ export interface MountDragOptions {
   railZ: number;
   onMountDrag?: (positionXM: number) => void;
   onMountDragEnd?: () => void;
+  /**
+   * Given when a worker draws: the page follows the drag's moves itself (no round trip through the
+   * worker), from the matrices reported here at the press and after each frame that changes them.
+   */
+  onMountDragFrame?: (pointerId: number, frame: RailDragFrame) => void;
 }
 
 export interface MountDragHandlers {
@@ -49,43 +51,56 @@ export function useMountDrag(options: MountDragOptions): MountDragHandlers {
   const dragPointerId = useRef<number | null>(null);
   const lastX = useRef(Number.NaN);
 
-  const railXUnderPointer = useCallback(
+  /** This frame's matrices, for the rail projection (here, or on the page when a worker draws). */
+  const dragFrame = useCallback((): RailDragFrame | null => {
+    const body = latest.current.bodyRef.current;
+    if (!body) return null;
+    camera.updateMatrixWorld();
+    body.updateWorldMatrix(true, false);
+    return {
+      worldFromNdc: scratchWorldFromNdc.multiplyMatrices(camera.matrixWorld, camera.projectionMatrixInverse).toArray(),
+      bodyFromWorld: scratchBodyFromWorld.copy(body.matrixWorld).invert().toArray(),
+      railZ: latest.current.railZ,
+      railStartX: latest.current.railStartX,
+      railEndX: latest.current.railEndX,
+    };
+  }, [camera]);
+
+  const railXAt = useCallback(
     (offsetX: number, offsetY: number): number | null => {
-      const body = latest.current.bodyRef.current;
-      if (!body || surface.clientWidth === 0 || surface.clientHeight === 0) return null;
-      scratchNdc.set((offsetX / surface.clientWidth) * 2 - 1, -(offsetY / surface.clientHeight) * 2 + 1);
-      scratchRaycaster.setFromCamera(scratchNdc, camera);
-      body.updateWorldMatrix(true, false);
-      scratchRay.copy(scratchRaycaster.ray).applyMatrix4(scratchInverse.copy(body.matrixWorld).invert());
-      // Rail line: P(s) = (s, railZ, 0); ray: Q(t) = o + t·d with |d| = 1. Closest points solve
-      // s = (b·e − w_x) / (1 − b²), with w = P(0) − o, b = d_x, e = d·w.
-      const { origin: o, direction: d } = scratchRay;
-      const wx = -o.x;
-      const wy = latest.current.railZ - o.y;
-      const wz = -o.z;
-      const b = d.x;
-      const denom = 1 - b * b;
-      if (denom < PARALLEL_EPSILON) return null;
-      const e = d.x * wx + d.y * wy + d.z * wz;
-      const s = (b * e - wx) / denom;
-      const { railStartX, railEndX } = latest.current;
-      return Math.min(Math.max(s, Math.min(railStartX, railEndX)), Math.max(railStartX, railEndX));
+      const frame = dragFrame();
+      if (!frame || surface.clientWidth === 0 || surface.clientHeight === 0) return null;
+      return railXUnderPointer((offsetX / surface.clientWidth) * 2 - 1, -(offsetY / surface.clientHeight) * 2 + 1, frame);
     },
-    [camera, surface],
+    [dragFrame, surface],
   );
+
+  const lastReported = useRef("");
+  const reportFrame = useCallback(() => {
+    const report = latest.current.onMountDragFrame;
+    const frame = report && dragging.current && dragPointerId.current !== null ? dragFrame() : null;
+    if (!report || !frame || dragPointerId.current === null) return;
+    const key = JSON.stringify(frame);
+    if (key === lastReported.current) return;
+    lastReported.current = key;
+    report(dragPointerId.current, frame);
+  }, [dragFrame]);
+  // The lifter pitches as the mount moves: the page needs each new body matrix during the drag.
+  useFrame(reportFrame);
 
   const emit = useCallback(
     (offsetX: number, offsetY: number) => {
-      const x = railXUnderPointer(offsetX, offsetY);
+      const x = railXAt(offsetX, offsetY);
       if (x === null || Math.abs(x - lastX.current) < MIN_STEP_M) return;
       lastX.current = x;
       latest.current.onMountDrag?.(x);
     },
-    [railXUnderPointer],
+    [railXAt],
   );
 
   const onMove = useCallback(
     (event: PointerEvent) => {
+      if (latest.current.onMountDragFrame) return;
       if (dragging.current && event.pointerId === dragPointerId.current) emit(event.offsetX, event.offsetY);
     },
     [emit],
@@ -123,6 +138,7 @@ export function useMountDrag(options: MountDragOptions): MountDragHandlers {
       event.stopPropagation();
       dragging.current = true;
       dragPointerId.current = event.pointerId;
+      lastReported.current = "";
       lastX.current = Number.NaN;
       const controls = latest.current.controlsRef.current;
       if (controls) controls.enabled = false;
@@ -130,8 +146,9 @@ export function useMountDrag(options: MountDragOptions): MountDragHandlers {
       surface.style.setProperty("cursor", "grabbing");
       // A press on the rail moves the mount there at once.
       emit(event.nativeEvent.offsetX, event.nativeEvent.offsetY);
+      reportFrame();
     },
-    [emit, surface],
+    [emit, surface, reportFrame],
   );
 
   return { onPointerDown, dragging };

@@ -2,6 +2,7 @@
  * Messages between the page and the worker that draws the 3D view (scene.worker.tsx). Plain data
  * only: everything here crosses postMessage by structured clone.
  */
+import type { RailDragFrame } from "./rail-projection";
 import type { SceneDrawing } from "./types";
 
 /** The fields of a DOM pointer or wheel event that fiber's picking and the orbit controls read. */
@@ -43,6 +44,8 @@ export type FromSceneWorker =
   /** `pointerAtMs`: when the pointer event that moved it happened (ForwardedPointerEvent.atMs). */
   | { type: "mount-drag"; positionXM: number; pointerAtMs: number }
   | { type: "mount-drag-end" }
+  /** A mount drag holds `pointerId`: the page projects its moves onto the rail with this frame. */
+  | { type: "mount-drag-frame"; pointerId: number; frame: RailDragFrame }
   | { type: "cursor"; cursor: string }
   /** The first frame that shows drawing `seq`, drawn at `atMs` (ms since the epoch). */
   | { type: "frame"; seq: number; atMs: number }

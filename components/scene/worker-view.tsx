@@ -7,7 +7,11 @@
  */
 import { useEffect, useRef } from "react";
 import type { SceneCallbacks, SceneDrawing } from "./types";
+import { railXUnderPointer, type RailDragFrame } from "./rail-projection";
 import { FORWARDED_EVENTS, toForwardedEvent, type FromSceneWorker, type ToSceneWorker } from "./worker-protocol";
+
+/** Changes smaller than this (m) are not worth a store update. */
+const MIN_STEP_M = 1e-5;
 
 /**
  * Marks for timing a drag (`npm run bench:planner`), one set per drawing, as the balance panel's
@@ -45,6 +49,8 @@ export function WorkerView({ drawing, ...handlers }: WorkerViewProps) {
   const workerRef = useRef<Worker | null>(null);
   const lastPosted = useRef("");
   const drawingSeq = useRef(0);
+  /** The mount drag under way: its pointer, the worker's latest frame for it, the last position sent. */
+  const drag = useRef<{ pointerId: number; frame: RailDragFrame; lastX: number } | null>(null);
   const latest = useRef({ drawing, handlers });
   useEffect(() => {
     latest.current = { drawing, handlers };
@@ -72,11 +78,18 @@ export function WorkerView({ drawing, ...handlers }: WorkerViewProps) {
         case "mount-screen":
           return on.onMountScreen(message.x, message.y);
         case "mount-drag":
-          // The worker's clock starts elsewhere; both count from the same epoch.
+          // The press itself; the worker's clock starts elsewhere, both count from the same epoch.
           performance.measure(POINTER_TO_DRAG_MEASURE, { start: message.pointerAtMs - performance.timeOrigin, end: performance.now() });
+          if (drag.current) drag.current.lastX = message.positionXM;
           return on.onMountDrag?.(message.positionXM);
         case "mount-drag-end":
+          drag.current = null;
           return on.onMountDragEnd?.();
+        case "mount-drag-frame": {
+          const lastX = drag.current?.pointerId === message.pointerId ? drag.current.lastX : Number.NaN;
+          drag.current = { pointerId: message.pointerId, frame: message.frame, lastX };
+          return;
+        }
         case "cursor":
           host.style.cursor = message.cursor;
           return;
@@ -109,7 +122,22 @@ export function WorkerView({ drawing, ...handlers }: WorkerViewProps) {
       // Capture on a press, as the orbit controls and the mount drag expect: moves outside the
       // view keep coming here until the button is let go.
       if (event.type === "pointerdown" && "pointerId" in event) host.setPointerCapture(event.pointerId);
-      send({ type: "pointer", event: toForwardedEvent(event, host.getBoundingClientRect()) });
+      const forwarded = toForwardedEvent(event, host.getBoundingClientRect());
+      send({ type: "pointer", event: forwarded });
+      const held = drag.current;
+      if (!held || !("pointerId" in event) || event.pointerId !== held.pointerId) return;
+      if (event.type === "pointerup" || event.type === "pointercancel") drag.current = null;
+      else if (event.type === "pointermove") followDrag(held, forwarded.offsetX, forwarded.offsetY, event.timeStamp);
+    };
+    // The drag's moves are projected here, with the worker's frame: no round trip through it.
+    const followDrag = (held: NonNullable<typeof drag.current>, offsetX: number, offsetY: number, pointerAtMs: number) => {
+      const { width: w, height: h } = host.getBoundingClientRect();
+      if (w === 0 || h === 0) return;
+      const x = railXUnderPointer((offsetX / w) * 2 - 1, -(offsetY / h) * 2 + 1, held.frame);
+      if (x === null || Math.abs(x - held.lastX) < MIN_STEP_M) return;
+      held.lastX = x;
+      latest.current.handlers.onMountDrag?.(x);
+      performance.measure(POINTER_TO_DRAG_MEASURE, { start: pointerAtMs, end: performance.now() });
     };
     const noMenu = (event: Event) => event.preventDefault();
     for (const type of FORWARDED_EVENTS) host.addEventListener(type, forward as EventListener, { passive: type !== "wheel" });
