@@ -15,6 +15,9 @@ export interface RailDragFrame {
   railEndX: number;
 }
 
+/** Drag steps smaller than this (m) are not worth a store update. */
+export const MIN_DRAG_STEP_M = 1e-5;
+
 /** Below this, the view looks (almost) straight along the rail and the projection is ill-posed. */
 const PARALLEL_EPSILON = 1e-6;
 

@@ -10,13 +10,10 @@ import { useCallback, useEffect, useRef, type RefObject, useLayoutEffect } from 
 import { Matrix4, type Object3D } from "three";
 import type { OrbitControls as OrbitControlsImpl } from "three-stdlib";
 import { usePointerSurface } from "./pointer-surface";
-import { railXUnderPointer, type RailDragFrame } from "./rail-projection";
+import { MIN_DRAG_STEP_M, railXUnderPointer, type RailDragFrame } from "./rail-projection";
 
 const scratchWorldFromNdc = new Matrix4();
 const scratchBodyFromWorld = new Matrix4();
-/** Changes smaller than this (m) are not worth a store update. */
-const MIN_STEP_M = 1e-5;
-
 export interface MountDragOptions {
   /** The group whose local frame is the body frame in three axes (x aft, y = body z). */
   bodyRef: RefObject<Object3D | null>;
@@ -91,7 +88,7 @@ export function useMountDrag(options: MountDragOptions): MountDragHandlers {
   const emit = useCallback(
     (offsetX: number, offsetY: number) => {
       const x = railXAt(offsetX, offsetY);
-      if (x === null || Math.abs(x - lastX.current) < MIN_STEP_M) return;
+      if (x === null || Math.abs(x - lastX.current) < MIN_DRAG_STEP_M) return;
       lastX.current = x;
       latest.current.onMountDrag?.(x);
     },

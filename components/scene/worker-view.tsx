@@ -7,11 +7,8 @@
  */
 import { useEffect, useRef } from "react";
 import type { SceneCallbacks, SceneDrawing } from "./types";
-import { railXUnderPointer, type RailDragFrame } from "./rail-projection";
+import { MIN_DRAG_STEP_M, railXUnderPointer, type RailDragFrame } from "./rail-projection";
 import { FORWARDED_EVENTS, toForwardedEvent, type FromSceneWorker, type ToSceneWorker } from "./worker-protocol";
-
-/** Changes smaller than this (m) are not worth a store update. */
-const MIN_STEP_M = 1e-5;
 
 /**
  * Marks for timing a drag (`npm run bench:planner`), one set per drawing, as the balance panel's
@@ -147,7 +144,7 @@ export function WorkerView({ drawing, ...handlers }: WorkerViewProps) {
         const { width: w, height: h } = host.getBoundingClientRect();
         if (w === 0 || h === 0) return;
         const x = railXUnderPointer((offsetX / w) * 2 - 1, -(offsetY / h) * 2 + 1, held.frame);
-        if (x === null || Math.abs(x - held.lastX) < MIN_STEP_M) return;
+        if (x === null || Math.abs(x - held.lastX) < MIN_DRAG_STEP_M) return;
         held.lastX = x;
         latest.current.handlers.onMountDrag?.(x);
         performance.measure(POINTER_TO_DRAG_MEASURE, { start: pointerAtMs, end: performance.now() });
